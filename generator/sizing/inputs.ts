@@ -1,0 +1,58 @@
+/**
+ * The sizing core's input: every quantity already converted to SI units
+ * (m, kg, N, Pa, s) and every default filled in. The design-document schema
+ * (generator/doc) produces this; the sizing core never sees raw text.
+ */
+export interface CalibrationPoint {
+  /** supply head at which the pad was tested, m */
+  headM: number;
+  /** smallest mass that stopped the flow at that head, kg */
+  massKg: number;
+}
+
+export interface DesignInputs {
+  /** tank water surface above the nozzle tip, highest, m (H_max) */
+  headMaxM: number;
+  /** tank water surface above the nozzle tip, lowest, m (H_min <= H_max) */
+  headMinM: number;
+  /** target reservoir level above the container floor (housing base), m (L) */
+  targetLevelM: number;
+  /** liquid density, kg/m3 (rho) */
+  liquidDensityKgM3: number;
+  /** liquid dynamic viscosity, Pa s (mu) */
+  liquidViscosityPaS: number;
+  /** nozzle orifice (bore) diameter, m (d_o) */
+  orificeM: number;
+  /** outer diameter of the nozzle lip that presses the pad, m (d_s) */
+  sealDiameterM: number;
+  /** force to indent the pad with no pressure, N (F_pre) */
+  preloadN: number;
+  /** seal pad thickness, m (t_pad) */
+  padThicknessM: number;
+  /** pad indentation at seal, m (delta) */
+  indentationM: number;
+  /** pad material density, kg/m3 (for the float's mass) */
+  padDensityKgM3: number;
+  /** bench points; when present they replace preload and seal area by a fit */
+  calibration: CalibrationPoint[];
+  /** print material name (as given, or "custom") */
+  materialName: string;
+  /** print material density, kg/m3 (rho_m) */
+  materialDensityKgM3: number;
+  /** housing wall thickness, m (t_w) */
+  wallM: number;
+  /** extrusion line width, m (w_line) */
+  lineWidthM: number;
+  /** largest footprint diameter the container allows, m */
+  maxOuterDiameterM: number;
+  /** float's full-submersion lift over the force needed at H_max (SF) */
+  reserve: number;
+  /** supply tube inner diameter, m (d_t) */
+  tubeInnerDiameterM: number;
+  /** supply tube length, m (l_t) */
+  tubeLengthM: number;
+  /** reservoir surface area for fill time, m2, or null when not given */
+  reservoirAreaM2: number | null;
+  /** reservoir rise for fill time, m, or null when not given */
+  reservoirRiseM: number | null;
+}

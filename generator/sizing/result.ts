@@ -1,0 +1,221 @@
+/**
+ * What the sizing core returns. Millimetres, grams, newtons and litres per
+ * hour here (the unit is in every name); the solids are built from `parts`
+ * alone, so every dimension a builder needs is in it.
+ */
+import type { DesignInputs } from './inputs.ts';
+
+export interface Warning {
+  /** stable machine-readable code, e.g. "tilt-gap" */
+  code: string;
+  /** one plain sentence for the grower */
+  message: string;
+}
+
+/** Float: closed hollow shell, flat bottom, 45-degree cone, plateau with pad pocket. Mounted z up, bottom at 0. */
+export interface FloatSpec {
+  outerDiameterMm: number;
+  /** cylindrical part's height (h_c) */
+  cylinderHeightMm: number;
+  /** 45-degree cone height (h_k = D_f/2 - plateau radius) */
+  coneHeightMm: number;
+  /** total printed height h_f = h_c + h_k (pad not included) */
+  heightMm: number;
+  plateauRadiusMm: number;
+  /** shell wall (side, bottom and cone normal thickness) */
+  shellMm: number;
+  /** cavity: inner cylinder radius, bottom z, z where the inner cone starts, roof z, roof radius */
+  cavityRadiusMm: number;
+  cavityBottomZMm: number;
+  cavityConeStartZMm: number;
+  cavityRoofZMm: number;
+  cavityRoofRadiusMm: number;
+  /** pad pocket cut into the plateau top */
+  pocketRadiusMm: number;
+  pocketDepthMm: number;
+  /** seal pad disc that sits in the pocket */
+  padDiameterMm: number;
+  padThicknessMm: number;
+  /** how far the pad stands above the plateau */
+  padProudMm: number;
+}
+
+export interface HousingSpec {
+  boreMm: number;
+  wallMm: number;
+  outerDiameterMm: number;
+  /** overall height, base to top of the seat boss */
+  heightMm: number;
+  /** underside of the deck (nozzle shoulder rests against it) */
+  deckBottomZMm: number;
+  deckThicknessMm: number;
+  /** seat: bore through deck and boss for the nozzle collar */
+  seatBoreMm: number;
+  bossOuterDiameterMm: number;
+  bossHeightMm: number;
+  vents: { count: number; diameterMm: number; circleRadiusMm: number };
+  /** drain notches at the bottom rim, from z = 0 up, cut radially through tube and foot */
+  drainNotches: { count: number; widthMm: number; heightMm: number; angleOffsetDeg: number };
+  /** two opposed horizontal teardrop holes for the retainer pin (axis along x); the teardrop tip points down when mounted (up in print) */
+  pinHoles: { diameterMm: number; centerZMm: number };
+  /** foot: flat flange from z = 0, then a 45-degree flare back to the tube */
+  foot: {
+    outerDiameterMm: number;
+    flangeThicknessMm: number;
+    flareWidthMm: number;
+    anchorHoles: { count: number; diameterMm: number; circleRadiusMm: number; angleOffsetDeg: number };
+  };
+}
+
+/** Nozzle insert, mounted z up with the sealing face at z = 0 (printed tip down as is). */
+export interface NozzleSpec {
+  orificeMm: number;
+  /** lip: flat sealing ring, outer diameter d_s */
+  lipDiameterMm: number;
+  lipHeightMm: number;
+  /** 45-degree flare from the lip out to the shoulder */
+  shoulderDiameterMm: number;
+  shoulderHeightMm: number;
+  /** collar pressed into the seat; crush ribs stand proud of it */
+  collarDiameterMm: number;
+  collarLengthMm: number;
+  crushRibs: { count: number; heightMm: number; baseWidthMm: number };
+  /** barb for the supply tube: a short stem then `count` teeth (45-degree step out, long taper in) */
+  barb: { stemLengthMm: number; rootDiameterMm: number; crestDiameterMm: number; taperLengthMm: number; count: number };
+  /** how far the sealing face sits below the deck underside */
+  protrusionMm: number;
+  totalLengthMm: number;
+}
+
+/** Retainer pin: a round bar with a flat along its length (printed on the flat) and a tab head. Axis along x. */
+export interface PinSpec {
+  diameterMm: number;
+  /** distance from the axis to the flat (r cos 45deg keeps every overhang at 45 degrees or steeper) */
+  flatOffsetMm: number;
+  lengthMm: number;
+  head: { lengthMm: number; widthMm: number; heightMm: number };
+}
+
+export interface PartVolumes {
+  housingMm3: number;
+  floatMm3: number;
+  nozzleMm3: number;
+  pinMm3: number;
+}
+
+export interface PartsSpec {
+  printClearanceMm: number;
+  housing: HousingSpec;
+  float: FloatSpec;
+  nozzle: NozzleSpec;
+  pin: PinSpec;
+  /** analytic solid volumes (exact for true circles) */
+  volumes: PartVolumes;
+  /** mounted positions, z up from the housing base */
+  mount: {
+    /** float bottom when resting on the pin */
+    floatRestZMm: number;
+    /** float bottom when sealed at H_max */
+    floatSealZMm: number;
+    nozzleTipZMm: number;
+    pinTopZMm: number;
+  };
+}
+
+export interface SizingSuccess {
+  ok: true;
+  inputs: DesignInputs;
+  closingForce: {
+    atHeadMaxN: number;
+    atHeadMinN: number;
+    preloadN: number;
+    /** effective seal area used (from d_s or the calibration fit) */
+    sealAreaMm2: number;
+    /** d_s equivalent to that area */
+    equivalentSealDiameterMm: number;
+    fromCalibration: boolean;
+  };
+  pressure: { atHeadMaxKPa: number; atHeadMinKPa: number };
+  float: {
+    outerDiameterMm: number;
+    heightMm: number;
+    cylinderHeightMm: number;
+    /** displaced volume at full submersion (outer envelope) */
+    volumeMm3: number;
+    /** printed plastic of the float shell */
+    shellVolumeMm3: number;
+    massG: number;
+    availableForceN: number;
+    /** available force over the force needed at H_max */
+    reserve: number;
+    /** submerged depth when sealed at H_max and H_min */
+    sealDepthAtHeadMaxMm: number;
+    sealDepthAtHeadMinMm: number;
+  };
+  housing: {
+    boreMm: number;
+    outerDiameterMm: number;
+    footDiameterMm: number;
+    heightMm: number;
+    wallMm: number;
+    massG: number;
+  };
+  nozzle: { tipHeightMm: number; travelMm: number; minimumTravelMm: number; orificeMm: number; sealDiameterMm: number; massG: number };
+  pin: { topHeightMm: number; massG: number };
+  levels: {
+    targetMm: number;
+    shutOffAtHeadMaxMm: number;
+    shutOffAtHeadMinMm: number;
+    liftOffMm: number;
+    firstTouchMm: number;
+    minimumReachableMm: number;
+  };
+  flow: {
+    atHeadMaxLph: number;
+    atHeadMinLph: number;
+    reynoldsAtHeadMax: number;
+    reynoldsAtHeadMin: number;
+    regimeAtHeadMax: 'laminar' | 'transitional' | 'turbulent';
+    fillTimeAtHeadMaxMin: number | null;
+    fillTimeAtHeadMinMin: number | null;
+  };
+  drain: { requiredAreaMm2: number; providedAreaMm2: number; notchCount: number };
+  vents: { count: number; diameterMm: number; areaMm2: number };
+  holdDown: {
+    upliftN: number;
+    /** weight in the liquid of housing, insert and pin (negative: they float) */
+    netWeightN: number;
+    /** 1.5 uplift minus net weight, when positive */
+    neededN: number;
+    ballastSteelG: number;
+  };
+  tilt: { maxAngleDeg: number; lipGapMm: number };
+  mass: {
+    totalG: number;
+    filamentM: number;
+    byPart: { housing: number; float: number; nozzle: number; pin: number; pad: number };
+  };
+  /** which constraints stopped a lighter design */
+  boundBy: string[];
+  warnings: Warning[];
+  parts: PartsSpec;
+}
+
+export interface WayOut {
+  /** document path of the setting to change, e.g. "level.target" */
+  field: string;
+  /** value that would make the design work, in the field's unit (as text with unit) */
+  value: string;
+  message: string;
+}
+
+export interface SizingFailure {
+  ok: false;
+  /** why no size works */
+  reasons: Warning[];
+  /** concrete changes that would make it work */
+  waysOut: WayOut[];
+  warnings: Warning[];
+}
+
+export type SizingResult = SizingSuccess | SizingFailure;
