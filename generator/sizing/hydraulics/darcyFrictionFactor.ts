@@ -1,0 +1,32 @@
+import { checkRange } from './checkRange.ts';
+import { colebrookFrictionFactor, MAX_RELATIVE_ROUGHNESS } from './colebrookFrictionFactor.ts';
+import { LAMINAR_LIMIT_REYNOLDS, TURBULENT_LIMIT_REYNOLDS } from './flowRegime.ts';
+import { laminarFrictionFactor } from './laminarFrictionFactor.ts';
+
+/**
+ * Darcy friction factor over the whole Reynolds range, as the sizing model uses it.
+ *
+ * Equation: f = 64/Re for Re <= 2300; Colebrook-White for Re >= 4000; in between,
+ * linear in Re from 64/2300 to f_Colebrook(4000, e/d). The bridge keeps f continuous
+ * (so the flow solvers see a continuous, increasing head loss) and rises with Re,
+ * as measured friction does through transition.
+ *
+ * @param reynolds Reynolds number (dimensionless, > 0)
+ * @param relativeRoughness e/d (dimensionless, 0 to 0.1)
+ * @returns Darcy friction factor f (dimensionless)
+ *
+ * Example: Re = 1948 gives 0.032854 (laminar); Re = 3150, e/d = 3.75e-4 gives
+ * 0.027826 + 0.5 (0.040286 - 0.027826) = 0.034056 (f_Colebrook(4000, 3.75e-4) = 0.040286).
+ * Source: 64/Re Hagen-Poiseuille; Colebrook (1939); the linear bridge is the project's
+ * design rule (common practice: the transition zone has no settled formula).
+ */
+export function darcyFrictionFactor(reynolds: number, relativeRoughness: number): number {
+  checkRange('reynolds', reynolds, { min: 0, minExclusive: true });
+  checkRange('relativeRoughness', relativeRoughness, { min: 0, max: MAX_RELATIVE_ROUGHNESS });
+  if (reynolds <= LAMINAR_LIMIT_REYNOLDS) return laminarFrictionFactor(reynolds);
+  if (reynolds >= TURBULENT_LIMIT_REYNOLDS) return colebrookFrictionFactor(reynolds, relativeRoughness);
+  const fromF = laminarFrictionFactor(LAMINAR_LIMIT_REYNOLDS);
+  const toF = colebrookFrictionFactor(TURBULENT_LIMIT_REYNOLDS, relativeRoughness);
+  const share = (reynolds - LAMINAR_LIMIT_REYNOLDS) / (TURBULENT_LIMIT_REYNOLDS - LAMINAR_LIMIT_REYNOLDS);
+  return fromF + (toF - fromF) * share;
+}

@@ -1,0 +1,35 @@
+import { ORIFICE_DISCHARGE_COEFFICIENT, STANDARD_GRAVITY } from '../constants.ts';
+import { checkRange } from './checkRange.ts';
+
+export interface JetHeadOptions {
+  /** volume flow through the orifice, m3/s (>= 0) */
+  flowM3s: number;
+  /** orifice diameter, m (> 0) */
+  orificeM: number;
+  /** discharge coefficient C_d, dimensionless (0 < C_d <= 1); default ORIFICE_DISCHARGE_COEFFICIENT (0.61) */
+  dischargeCoefficient?: number;
+}
+
+/**
+ * Head spent making the free jet at an orifice (its velocity head).
+ *
+ * Equation: h = (Q / (C_d A_o))^2 / (2 g), A_o = pi d_o^2 / 4
+ * (the orifice equation Q = C_d A_o sqrt(2 g h) solved for h)
+ *
+ * Returns metres of liquid column.
+ *
+ * Example: d_o = 3 mm, C_d = 0.61, Q = 2.83236e-5 m3/s (101.97 L/h) gives h = 2.200 m.
+ * Source: orifice equation (Torricelli with a discharge coefficient), any fluid mechanics text,
+ * e.g. White, Fluid Mechanics, ch. 6; C_d = 0.61 for a sharp edge (standard texts, from memory).
+ */
+export function jetHeadM(opts: JetHeadOptions): number {
+  const flowM3s = checkRange('flowM3s', opts.flowM3s, { min: 0 });
+  const orificeM = checkRange('orificeM', opts.orificeM, { min: 0, minExclusive: true });
+  const cd = checkRange('dischargeCoefficient', opts.dischargeCoefficient ?? ORIFICE_DISCHARGE_COEFFICIENT, {
+    min: 0,
+    minExclusive: true,
+    max: 1,
+  });
+  const jetVelocityMS = flowM3s / (cd * Math.PI * orificeM * orificeM * 0.25);
+  return (jetVelocityMS * jetVelocityMS) / (2 * STANDARD_GRAVITY);
+}

@@ -1,0 +1,50 @@
+import { STANDARD_GRAVITY, TUBE_ROUGHNESS_M } from '../constants.ts';
+import { checkRange } from './checkRange.ts';
+import { MAX_RELATIVE_ROUGHNESS } from './colebrookFrictionFactor.ts';
+import { darcyFrictionFactor } from './darcyFrictionFactor.ts';
+import { reynoldsNumber } from './reynoldsNumber.ts';
+
+export interface TubeHeadLossOptions {
+  /** volume flow, m3/s (>= 0) */
+  flowM3s: number;
+  /** tube inner diameter, m (> 0) */
+  innerDiameterM: number;
+  /** tube length, m (>= 0) */
+  lengthM: number;
+  /** liquid density, kg/m3 (> 0) */
+  densityKgM3: number;
+  /** liquid dynamic viscosity, Pa s (> 0) */
+  viscosityPaS: number;
+  /** absolute wall roughness, m (>= 0, at most a tenth of the diameter); default TUBE_ROUGHNESS_M (1.5 um) */
+  roughnessM?: number;
+  /** sum of minor-loss coefficients on the tube velocity head (entrance, bends), dimensionless (>= 0); default 0 */
+  minorLossK?: number;
+}
+
+/**
+ * Head lost in a round tube: Darcy-Weisbach friction plus minor losses.
+ *
+ * Equation: h = (K + f l / d) v^2 / (2 g), v = 4 Q / (pi d^2), f = darcyFrictionFactor(Re, e/d)
+ *
+ * Returns metres of liquid column; 0 at zero flow.
+ *
+ * Example: water at 20 C, d = 4 mm, l = 5 m, Q = 6.1409e-6 m3/s (22.107 L/h, Re 1948, laminar),
+ * K = 0 gives h = 0.500 m, the same as Hagen-Poiseuille Q = pi d^4 rho g h / (128 mu l).
+ * Source: Darcy-Weisbach equation and Hagen-Poiseuille law (White, Fluid Mechanics, ch. 6).
+ */
+export function tubeHeadLossM(opts: TubeHeadLossOptions): number {
+  const flowM3s = checkRange('flowM3s', opts.flowM3s, { min: 0 });
+  const d = checkRange('innerDiameterM', opts.innerDiameterM, { min: 0, minExclusive: true });
+  const lengthM = checkRange('lengthM', opts.lengthM, { min: 0 });
+  const roughnessM = checkRange('roughnessM', opts.roughnessM ?? TUBE_ROUGHNESS_M, {
+    min: 0,
+    max: MAX_RELATIVE_ROUGHNESS * d,
+    note: 'a tenth of innerDiameterM',
+  });
+  const minorLossK = checkRange('minorLossK', opts.minorLossK ?? 0, { min: 0 });
+  const reynolds = reynoldsNumber({ flowM3s, innerDiameterM: d, densityKgM3: opts.densityKgM3, viscosityPaS: opts.viscosityPaS });
+  if (flowM3s === 0) return 0;
+  const velocityMS = (4 * flowM3s) / (Math.PI * d * d);
+  const f = darcyFrictionFactor(reynolds, roughnessM / d);
+  return ((minorLossK + (f * lengthM) / d) * velocityMS * velocityMS) / (2 * STANDARD_GRAVITY);
+}
