@@ -1,0 +1,40 @@
+import { cylinderVolume, frustumVolume } from './frustum-volume.ts';
+import type { FloatSpec } from '../result.ts';
+
+/**
+ * Volume of the float's outer envelope below a water line at depth z above its bottom, mm3.
+ *
+ *   z <= h_c:        V = pi R^2 z
+ *   h_c < z <= h_f:  V = pi R^2 h_c + frustum(z - h_c, R, R - (z - h_c))   (45-degree cone)
+ *   z > h_f:         V = V_f
+ *
+ * Example: R = 27, h_c = 35, z = 10 gives 22 902 mm3. Source: elementary geometry.
+ */
+export function submergedVolumeMm3(f: FloatSpec, depthMm: number): number {
+  const R = f.outerDiameterMm / 2;
+  const z = Math.min(Math.max(depthMm, 0), f.heightMm);
+  if (z <= f.cylinderHeightMm) return cylinderVolume(R, z);
+  const u = z - f.cylinderHeightMm;
+  return cylinderVolume(R, f.cylinderHeightMm) + frustumVolume(u, R, R - u);
+}
+
+/**
+ * Depth at which the float displaces a given volume, mm (inverse of submergedVolumeMm3):
+ * closed form in the cylinder, bisection in the cone. Returns Infinity when the
+ * volume exceeds the whole envelope (the float cannot give that push).
+ */
+export function depthForVolumeMm(f: FloatSpec, volumeMm3: number): number {
+  if (volumeMm3 <= 0) return 0;
+  const R = f.outerDiameterMm / 2;
+  const cylinder = cylinderVolume(R, f.cylinderHeightMm);
+  if (volumeMm3 <= cylinder) return volumeMm3 / (Math.PI * R * R);
+  if (volumeMm3 > submergedVolumeMm3(f, f.heightMm)) return Infinity;
+  let lo = f.cylinderHeightMm;
+  let hi = f.heightMm;
+  for (let i = 0; i < 60; i++) {
+    const mid = (lo + hi) / 2;
+    if (submergedVolumeMm3(f, mid) < volumeMm3) lo = mid;
+    else hi = mid;
+  }
+  return (lo + hi) / 2;
+}

@@ -1,0 +1,87 @@
+import type { HousingSpec } from '../result.ts';
+
+export interface HousingSpecOptions {
+  /** bore, mm: float diameter + 2 (functional gap + print clearance) */
+  boreMm: number;
+  wallMm: number;
+  /** underside of the deck, mm above the base */
+  deckBottomZMm: number;
+  deckThicknessMm: number;
+  /** seat: bore for the nozzle collar, and the boss that lengthens it under the deck */
+  seatBoreMm: number;
+  bossHeightMm: number;
+  /** drain notch size (drainNotchSize) */
+  notch: { widthMm: number; heightMm: number };
+  /** retainer pin diameter, mm, and the height of its holes' centre */
+  pinDiameterMm: number;
+  pinHoleCenterZMm: number;
+  printClearanceMm: number;
+}
+
+/** Vent holes through the deck (DESIGN: at least two of 3 mm); three so one blocked vent is harmless. */
+export const VENT_COUNT = 3;
+export const VENT_DIAMETER_MM = 3;
+/** Drain notches: six around the rim, at least 4 x 4 mm (common practice: roots and grit pass). */
+export const NOTCH_COUNT = 6;
+export const NOTCH_MIN_MM = 4;
+/** Drain notches are sized for this multiple of the required area. */
+export const NOTCH_AREA_MARGIN = 1.25;
+/** Anchor holes in the foot: three, clearing an M3 screw or a tent peg (common practice). */
+export const ANCHOR_COUNT = 3;
+export const ANCHOR_DIAMETER_MM = 3.5;
+
+/** Height of the drain notches for a bore and a required area, and their width (mm). */
+export function drainNotchSize(boreMm: number, drainAreaMm2: number): { widthMm: number; heightMm: number } {
+  const want = drainAreaMm2 * NOTCH_AREA_MARGIN;
+  // a notch may take at most half of its share of the circumference
+  const widthCap = (Math.PI * boreMm) / NOTCH_COUNT / 2;
+  const width = Math.min(widthCap, Math.max(NOTCH_MIN_MM, want / (NOTCH_COUNT * NOTCH_MIN_MM)));
+  const height = Math.max(NOTCH_MIN_MM, want / (NOTCH_COUNT * width));
+  return { widthMm: width, heightMm: height };
+}
+
+/**
+ * Lowest the retainer pin's top can sit, mm: notch height, one wall of plastic
+ * over the notch, then the pin hole (pin + clearance); the loaded pin rests one
+ * clearance below the hole centre, so its top is notch + wall + pin diameter.
+ */
+export function pinTopMinimumMm(notchHeightMm: number, wallMm: number, pinDiameterMm: number): number {
+  return notchHeightMm + wallMm + pinDiameterMm;
+}
+
+/**
+ * The housing's dimensions (mounted, z up from the base). The foot is a flange
+ * carrying the anchor holes under a 45-degree flare that reaches the flange's
+ * edge, so printed deck-down nothing overhangs past 45 degrees.
+ */
+export function housingSpec(o: HousingSpecOptions): HousingSpec {
+  const t = o.wallMm;
+  const outer = o.boreMm + 2 * t;
+  const notch = o.notch;
+  const holeDiameter = o.pinDiameterMm + 2 * o.printClearanceMm;
+  const flange = Math.max(t, 2);
+  const anchorRadius = outer / 2 + 2 * t + ANCHOR_DIAMETER_MM / 2;
+  const footOuter = 2 * (anchorRadius + ANCHOR_DIAMETER_MM / 2 + t);
+  const bossOuter = o.seatBoreMm + 2 * t;
+  return {
+    boreMm: o.boreMm,
+    wallMm: t,
+    outerDiameterMm: outer,
+    heightMm: o.deckBottomZMm + o.deckThicknessMm,
+    deckBottomZMm: o.deckBottomZMm,
+    deckThicknessMm: o.deckThicknessMm,
+    seatBoreMm: o.seatBoreMm,
+    bossOuterDiameterMm: bossOuter,
+    bossHeightMm: o.bossHeightMm,
+    vents: { count: VENT_COUNT, diameterMm: VENT_DIAMETER_MM, circleRadiusMm: (bossOuter / 2 + o.boreMm / 2) / 2 },
+    drainNotches: { count: NOTCH_COUNT, widthMm: notch.widthMm, heightMm: notch.heightMm, angleOffsetDeg: 0 },
+    pinHoles: { diameterMm: holeDiameter, centerZMm: o.pinHoleCenterZMm },
+    foot: {
+      outerDiameterMm: footOuter,
+      flangeThicknessMm: flange,
+      flareWidthMm: footOuter / 2 - outer / 2,
+      // between the notches, and clear of the pin holes on the x axis
+      anchorHoles: { count: ANCHOR_COUNT, diameterMm: ANCHOR_DIAMETER_MM, circleRadiusMm: anchorRadius, angleOffsetDeg: 90 },
+    },
+  };
+}

@@ -1,0 +1,101 @@
+import { cylinderVolume, frustumVolume } from '../float/frustum-volume.ts';
+import type { HousingSpec, NozzleSpec, PinSpec } from '../result.ts';
+
+/**
+ * Analytic solid volumes of the printed parts, mm3, for true circles.
+ * The solids are faceted; tests compare them with the same shapes over N-gons.
+ * Every formula is elementary geometry (cylinder, frustum, circular segment).
+ */
+
+/** Area of a teardrop: circle of radius r plus a 45-degree point, A = r^2 (3 pi / 4 + 1). */
+export function teardropAreaMm2(r: number): number {
+  return r * r * ((3 * Math.PI) / 4 + 1);
+}
+
+/** Integral over y in [-a, a] of sqrt(R^2 - y^2): the area of a circle's slab half, mm2. */
+function slabHalfArea(R: number, a: number): number {
+  const h = Math.min(a, R);
+  return h * Math.sqrt(R * R - h * h) + R * R * Math.asin(h / R);
+}
+
+/** Outer radius of the housing at height z, mm (flange, 45-degree flare, then tube). */
+export function housingOuterRadiusAtMm(h: HousingSpec, z: number): number {
+  const Ro = h.outerDiameterMm / 2;
+  const Rf = h.foot.outerDiameterMm / 2;
+  if (z <= h.foot.flangeThicknessMm) return Rf;
+  const u = z - h.foot.flangeThicknessMm;
+  return Math.max(Ro, Rf - u);
+}
+
+/** Volume one drain notch removes: slab of the notch width through the wall and foot, z from 0 to its height (Simpson's rule in z). */
+function notchVolumeMm3(h: HousingSpec): number {
+  const a = h.drainNotches.widthMm / 2;
+  const Rb = h.boreMm / 2;
+  const area = (z: number) => slabHalfArea(housingOuterRadiusAtMm(h, z), a) - slabHalfArea(Rb, a);
+  // split at the flange top so Simpson sees smooth pieces
+  const breaks = [0, Math.min(h.foot.flangeThicknessMm, h.drainNotches.heightMm), h.drainNotches.heightMm];
+  let v = 0;
+  for (let k = 0; k + 1 < breaks.length; k++) {
+    const [z0, z1] = [breaks[k], breaks[k + 1]];
+    if (z1 <= z0) continue;
+    const n = 16;
+    const dz = (z1 - z0) / n;
+    let s = area(z0) + area(z1);
+    for (let i = 1; i < n; i++) s += (i % 2 ? 4 : 2) * area(z0 + i * dz);
+    v += (s * dz) / 3;
+  }
+  return v;
+}
+
+export function housingVolumeMm3(h: HousingSpec): number {
+  const Ro = h.outerDiameterMm / 2;
+  const Rb = h.boreMm / 2;
+  const Rf = h.foot.outerDiameterMm / 2;
+  const w = Rf - Ro;
+  const rSeat = h.seatBoreMm / 2;
+  const rBoss = h.bossOuterDiameterMm / 2;
+  const tube = Math.PI * (Ro * Ro - Rb * Rb) * h.deckBottomZMm;
+  const deck = cylinderVolume(Ro, h.deckThicknessMm) - cylinderVolume(rSeat, h.deckThicknessMm);
+  const vents = h.vents.count * cylinderVolume(h.vents.diameterMm / 2, h.deckThicknessMm);
+  const boss = Math.PI * (rBoss * rBoss - rSeat * rSeat) * h.bossHeightMm;
+  const flange = Math.PI * (Rf * Rf - Ro * Ro) * h.foot.flangeThicknessMm;
+  // ring between R_o and a radius shrinking from R_f to R_o over height w: pi (R_o w^2 + w^3/3)
+  const flare = Math.PI * (Ro * w * w + (w * w * w) / 3);
+  const ah = h.foot.anchorHoles;
+  const anchorDepth = h.foot.flangeThicknessMm + Math.max(0, Rf - ah.circleRadiusMm);
+  const anchors = ah.count * cylinderVolume(ah.diameterMm / 2, anchorDepth);
+  const notches = h.drainNotches.count * notchVolumeMm3(h);
+  const rHole = h.pinHoles.diameterMm / 2;
+  const pinHoles = 2 * teardropAreaMm2(rHole) * (housingOuterRadiusAtMm(h, h.pinHoles.centerZMm) - Rb);
+  return tube + deck - vents + boss + flange + flare - anchors - notches - pinHoles;
+}
+
+export function nozzleVolumeMm3(n: NozzleSpec): number {
+  const rs = n.lipDiameterMm / 2;
+  const rsh = n.shoulderDiameterMm / 2;
+  const rc = n.collarDiameterMm / 2;
+  const root = n.barb.rootDiameterMm / 2;
+  const crest = n.barb.crestDiameterMm / 2;
+  const step = crest - root;
+  const ribs = n.crushRibs.count * 0.5 * n.crushRibs.baseWidthMm * n.crushRibs.heightMm * n.collarLengthMm;
+  const outer =
+    cylinderVolume(rs, n.lipHeightMm) +
+    frustumVolume(rsh - rs, rs, rsh) +
+    cylinderVolume(rsh, n.shoulderHeightMm) +
+    cylinderVolume(rc, n.collarLengthMm) +
+    ribs +
+    cylinderVolume(root, n.barb.stemLengthMm) +
+    n.barb.count * (frustumVolume(step, root, crest) + frustumVolume(n.barb.taperLengthMm, crest, root));
+  return outer - cylinderVolume(n.orificeMm / 2, n.totalLengthMm);
+}
+
+/** Cross-section of the pin: circle less the segment below the flat at r cos 45deg: pi r^2 - (r^2/2)(pi/2 - 1). */
+export function pinSectionAreaMm2(p: PinSpec): number {
+  const r = p.diameterMm / 2;
+  const theta = 2 * Math.acos(p.flatOffsetMm / r);
+  return Math.PI * r * r - (r * r / 2) * (theta - Math.sin(theta));
+}
+
+export function pinVolumeMm3(p: PinSpec): number {
+  return pinSectionAreaMm2(p) * p.lengthMm + p.head.lengthMm * p.head.widthMm * p.head.heightMm;
+}

@@ -1,0 +1,292 @@
+import { FILAMENT_DIAMETER_MM, HOLD_DOWN_FACTOR, PRINT_CLEARANCE_MM, STANDARD_GRAVITY, STEEL_DENSITY } from './constants.ts';
+import { depthForForceMm } from './float/depth-for-force.ts';
+import { circleArea } from './hydrostatics/circle-area.ts';
+import { pressurePa } from './hydrostatics/pressure-pa.ts';
+import { drainAreaRequiredM2, fillTimeS, supplyFlow } from './hydraulics/index.ts';
+import { designBasis, type DesignBasis } from './layout/design-basis.ts';
+import { CONSTRAINT_TEXT } from './layout/constraint-text.ts';
+import { searchSize } from './layout/search-size.ts';
+import { nozzleThinnestWallMm } from './parts/nozzle-spec.ts';
+import type { Candidate } from './layout/evaluate-candidate.ts';
+import type { DesignInputs } from './inputs.ts';
+import type { SizingFailure, SizingResult, SizingSuccess, Warning, WayOut } from './result.ts';
+
+const fmt = (x: number, digits = 1) => Number(x.toFixed(digits)).toString();
+
+function flowAt(inp: DesignInputs, headM: number) {
+  return supplyFlow({
+    headM,
+    tubeInnerDiameterM: inp.tubeInnerDiameterM,
+    tubeLengthM: inp.tubeLengthM,
+    orificeM: inp.orificeM,
+    densityKgM3: inp.liquidDensityKgM3,
+    viscosityPaS: inp.liquidViscosityPaS,
+  });
+}
+
+/** Checks that need no float: the nozzle's own walls. */
+function nozzleProblems(b: DesignBasis): { reasons: Warning[]; waysOut: WayOut[] } {
+  const inp = b.inputs;
+  const line = inp.lineWidthM * 1e3;
+  const reasons: Warning[] = [];
+  const waysOut: WayOut[] = [];
+  if (nozzleThinnestWallMm(b.nozzle) < 2 * line - 1e-9) {
+    const maxBore = b.nozzle.barb.rootDiameterMm - 4 * line;
+    const minTube = b.nozzle.orificeMm + 4 * line;
+    reasons.push({
+      code: 'barb-wall',
+      message: `A ${fmt(b.nozzle.orificeMm, 2)} mm bore through a barb for a ${fmt(b.nozzle.barb.rootDiameterMm, 2)} mm tube leaves a wall thinner than two print lines (${fmt(2 * line, 2)} mm).`,
+    });
+    waysOut.push({ field: 'nozzle.orifice', value: `${fmt(Math.floor(maxBore * 10) / 10, 1)} mm`, message: 'a narrower nozzle bore' });
+    waysOut.push({ field: 'supply.tubeInnerDiameter', value: `${fmt(Math.ceil(minTube * 10) / 10, 1)} mm`, message: 'a wider supply tube' });
+  }
+  if ((inp.sealDiameterM - inp.orificeM) * 1e3 / 2 < 2 * line - 1e-9) {
+    reasons.push({
+      code: 'lip-wall',
+      message: `A ${fmt(inp.sealDiameterM * 1e3, 2)} mm lip around a ${fmt(inp.orificeM * 1e3, 2)} mm bore leaves a sealing ring thinner than two print lines.`,
+    });
+    waysOut.push({
+      field: 'nozzle.sealDiameter',
+      value: `${fmt(Math.ceil((inp.orificeM * 1e3 + 4 * line) * 10) / 10, 1)} mm`,
+      message: 'a wider lip (it needs a little more float)',
+    });
+  }
+  return { reasons, waysOut };
+}
+
+/** Whether some float works for these inputs (used to search for ways out). */
+function works(inp: DesignInputs): boolean {
+  try {
+    const b = designBasis(inp);
+    if (nozzleProblems(b).reasons.length) return false;
+    const q = flowAt(inp, inp.headMaxM);
+    return searchSize(b, drainAreaRequiredM2({ flowM3s: q.flowM3s }) * 1e6).best !== null;
+  } catch {
+    return false;
+  }
+}
+
+/** Largest value in [lo, hi] for which `ok` holds, assuming it holds at lo and fails at hi (bisection). */
+function largestWorking(lo: number, hi: number, ok: (x: number) => boolean, tolerance: number): number {
+  while (hi - lo > tolerance) {
+    const mid = (lo + hi) / 2;
+    if (ok(mid)) lo = mid;
+    else hi = mid;
+  }
+  return lo;
+}
+
+function failure(b: DesignBasis, outcome: ReturnType<typeof searchSize>): SizingFailure {
+  const inp = b.inputs;
+  const reasons: Warning[] = [...outcome.rejections.keys()].map((code) => ({ code, message: CONSTRAINT_TEXT[code] }));
+  const waysOut: WayOut[] = [];
+  const targetMm = inp.targetLevelM * 1e3;
+  if (Number.isFinite(outcome.lowestReachableMm) && outcome.lowestReachableMm > targetMm) {
+    const v = Math.ceil(outcome.lowestReachableMm * 2) / 2;
+    waysOut.push({ field: 'level.target', value: `${fmt(v)} mm`, message: `a target level of at least ${fmt(v)} mm at this head` });
+  }
+  if (works({ ...inp, headMaxM: 0.01, headMinM: 0.01 })) {
+    const h = largestWorking(0.01, inp.headMaxM, (x) => works({ ...inp, headMaxM: x, headMinM: Math.min(inp.headMinM, x) }), 0.005);
+    const v = Math.floor(h * 100) / 100;
+    waysOut.push({ field: 'supply.headMax', value: `${fmt(v, 2)} m`, message: `a tank no higher than ${fmt(v, 2)} m above the nozzle for this level` });
+  }
+  if (!b.fromCalibration) {
+    const line = inp.lineWidthM;
+    const smallest = inp.orificeM + 4 * line;
+    if (smallest < inp.sealDiameterM && works({ ...inp, sealDiameterM: smallest })) {
+      const d = largestWorking(smallest, inp.sealDiameterM, (x) => works({ ...inp, sealDiameterM: x }), 1e-5);
+      const v = Math.floor(d * 1e4) / 10;
+      waysOut.push({ field: 'nozzle.sealDiameter', value: `${fmt(v)} mm`, message: `a nozzle lip of at most ${fmt(v)} mm across` });
+    }
+  }
+  if (Number.isFinite(outcome.smallestWorkingFootMm) && outcome.smallestWorkingFootMm > inp.maxOuterDiameterM * 1e3) {
+    const v = Math.ceil(outcome.smallestWorkingFootMm);
+    waysOut.push({ field: 'limits.maxOuterDiameter', value: `${v} mm`, message: `allow a housing foot of ${v} mm across` });
+  }
+  return { ok: false, reasons, waysOut, warnings: [] };
+}
+
+function warningsFor(b: DesignBasis, c: Candidate, tiltGapMm: number, netWeightN: number, ballastG: number, lowFlow: boolean): Warning[] {
+  const inp = b.inputs;
+  const w: Warning[] = [];
+  const deltaMm = inp.indentationM * 1e3;
+  if (tiltGapMm > deltaMm / 2) {
+    w.push({
+      code: 'tilt-gap',
+      message: `A tilted float can meet the lip with a ${fmt(tiltGapMm, 2)} mm gap on one side, more than half the pad indentation (${fmt(deltaMm, 2)} mm): use a softer or thicker pad, a deeper indentation, or a taller float.`,
+    });
+  }
+  const wallMm = inp.wallM * 1e3;
+  const line = inp.lineWidthM * 1e3;
+  const lines = wallMm / line;
+  if (Math.abs(lines - Math.round(lines)) > 0.02) {
+    w.push({
+      code: 'wall-lines',
+      message: `The ${fmt(wallMm, 2)} mm wall is ${fmt(lines, 2)} line widths; a whole number (${fmt(Math.round(lines) * line, 2)} mm) prints without gap fill.`,
+    });
+  }
+  if (netWeightN < 0) {
+    w.push({ code: 'housing-floats', message: `Printed in ${inp.materialName} the housing floats on its own; it must be pinned or weighted down.` });
+  }
+  if (ballastG > 0) {
+    w.push({
+      code: 'hold-down',
+      message: `If the container floods, the float lifts the housing: pin the foot down or add ${fmt(ballastG, 0)} g of steel ballast.`,
+    });
+  }
+  if (lowFlow) {
+    w.push({ code: 'low-flow', message: 'At the lowest tank level the valve passes under 1 L/h: refilling will be slow.' });
+  }
+  if (b.fromCalibration && b.calibrationRmsN > 0.05 * b.forceAtHeadMaxN) {
+    w.push({ code: 'calibration-scatter', message: 'The bench points scatter more than 5 % about the fitted line: repeat the measurements.' });
+  }
+  if (c.travelMm > b.preferredTravelMm + 1e-6) {
+    w.push({ code: 'long-travel', message: `The float drops ${fmt(c.travelMm)} mm to its pin when the reservoir runs dry.` });
+  }
+  return w;
+}
+
+/**
+ * Sizes a complete float valve (DESIGN.md, "Sizing model"): forces, float,
+ * layout, flow, drain, vents, hold-down, tilt and masses, with every part's
+ * dimensions for the solids. Pure: numbers in, numbers out.
+ */
+export function sizeDesign(inp: DesignInputs): SizingResult {
+  const b = designBasis(inp);
+  const nozzle = nozzleProblems(b);
+  if (nozzle.reasons.length) return { ok: false, reasons: nozzle.reasons, waysOut: nozzle.waysOut, warnings: [] };
+
+  const rho = inp.liquidDensityKgM3;
+  const qMax = flowAt(inp, inp.headMaxM);
+  const qMin = flowAt(inp, inp.headMinM);
+  const drainRequiredMm2 = drainAreaRequiredM2({ flowM3s: qMax.flowM3s }) * 1e6;
+  const outcome = searchSize(b, drainRequiredMm2);
+  const c = outcome.best;
+  if (!c) return failure(b, outcome);
+
+  const f = c.float;
+  const depthAt = (forceN: number) => depthForForceMm(f, forceN, c.massKg, rho);
+  const deltaMm = inp.indentationM * 1e3;
+  const floatingDepth = depthAt(0);
+  const shutOffMax = c.sealBottomMm + depthAt(b.forceAtHeadMaxN);
+  const shutOffMin = c.sealBottomMm + depthAt(b.forceAtHeadMinN);
+
+  const rhoM = inp.materialDensityKgM3;
+  const gramsOf = (mm3: number) => mm3 * 1e-9 * rhoM * 1e3;
+  const housingG = gramsOf(c.volumes.housingMm3);
+  const nozzleG = gramsOf(c.volumes.nozzleMm3);
+  const pinG = gramsOf(c.volumes.pinMm3);
+  const floatPlasticG = gramsOf(c.volumes.floatMm3);
+  const padG = b.padMassKg * 1e3;
+  const plasticMm3 = c.volumes.housingMm3 + c.volumes.nozzleMm3 + c.volumes.pinMm3 + c.volumes.floatMm3;
+
+  // Hold-down (DESIGN): uplift of the flooded float against the submerged weight of the rest.
+  const upliftN = c.availableN;
+  const netWeightN = ((housingG + nozzleG + pinG) / 1e3) * (1 - rho / rhoM) * STANDARD_GRAVITY;
+  const neededN = Math.max(0, HOLD_DOWN_FACTOR * upliftN - netWeightN);
+  const ballastG = (neededN / ((1 - rho / STEEL_DENSITY) * STANDARD_GRAVITY)) * 1e3;
+
+  // Tilt (DESIGN): only the cylinder touches the bore, theta = atan(2c / h_c); lip gap d_s tan(theta).
+  const tiltRad = Math.atan((2 * b.radialGapMm) / f.cylinderHeightMm);
+  const lipGapMm = inp.sealDiameterM * 1e3 * Math.tan(tiltRad);
+
+  const fill = (q: number) =>
+    inp.reservoirAreaM2 !== null && inp.reservoirRiseM !== null
+      ? (() => {
+          const s = fillTimeS({ areaM2: inp.reservoirAreaM2!, riseM: inp.reservoirRiseM!, flowM3s: q });
+          return s === null ? null : s / 60;
+        })()
+      : null;
+
+  const vents = c.housing.vents;
+  const notches = c.housing.drainNotches;
+  const result: SizingSuccess = {
+    ok: true,
+    inputs: inp,
+    closingForce: {
+      atHeadMaxN: b.forceAtHeadMaxN,
+      atHeadMinN: b.forceAtHeadMinN,
+      preloadN: b.preloadN,
+      sealAreaMm2: b.sealAreaM2 * 1e6,
+      equivalentSealDiameterMm: b.equivalentSealDiameterMm,
+      fromCalibration: b.fromCalibration,
+    },
+    pressure: { atHeadMaxKPa: pressurePa(inp.headMaxM, rho) / 1e3, atHeadMinKPa: pressurePa(inp.headMinM, rho) / 1e3 },
+    float: {
+      outerDiameterMm: f.outerDiameterMm,
+      heightMm: f.heightMm,
+      cylinderHeightMm: f.cylinderHeightMm,
+      volumeMm3: c.outerVolumeMm3,
+      shellVolumeMm3: c.shellVolumeMm3,
+      massG: c.massKg * 1e3,
+      availableForceN: c.availableN,
+      reserve: c.reserve,
+      sealDepthAtHeadMaxMm: depthAt(b.forceAtHeadMaxN),
+      sealDepthAtHeadMinMm: depthAt(b.forceAtHeadMinN),
+    },
+    housing: {
+      boreMm: c.housing.boreMm,
+      outerDiameterMm: c.housing.outerDiameterMm,
+      footDiameterMm: c.housing.foot.outerDiameterMm,
+      heightMm: c.housing.heightMm,
+      wallMm: c.housing.wallMm,
+      massG: housingG,
+    },
+    nozzle: {
+      tipHeightMm: c.tipMm,
+      travelMm: c.travelMm,
+      minimumTravelMm: b.minimumTravelMm,
+      orificeMm: inp.orificeM * 1e3,
+      sealDiameterMm: inp.sealDiameterM * 1e3,
+      massG: nozzleG,
+    },
+    pin: { topHeightMm: c.pinTopMm, massG: pinG },
+    levels: {
+      targetMm: inp.targetLevelM * 1e3,
+      shutOffAtHeadMaxMm: shutOffMax,
+      shutOffAtHeadMinMm: shutOffMin,
+      liftOffMm: c.pinTopMm + floatingDepth,
+      firstTouchMm: c.sealBottomMm - deltaMm + floatingDepth,
+      minimumReachableMm: c.minimumReachableMm,
+    },
+    flow: {
+      atHeadMaxLph: qMax.flowLph,
+      atHeadMinLph: qMin.flowLph,
+      reynoldsAtHeadMax: qMax.reynolds,
+      reynoldsAtHeadMin: qMin.reynolds,
+      regimeAtHeadMax: qMax.regime,
+      fillTimeAtHeadMaxMin: fill(qMax.flowM3s),
+      fillTimeAtHeadMinMin: fill(qMin.flowM3s),
+    },
+    drain: {
+      requiredAreaMm2: drainRequiredMm2,
+      providedAreaMm2: notches.count * notches.widthMm * notches.heightMm,
+      notchCount: notches.count,
+    },
+    vents: { count: vents.count, diameterMm: vents.diameterMm, areaMm2: vents.count * circleArea(vents.diameterMm) },
+    holdDown: { upliftN, netWeightN, neededN, ballastSteelG: ballastG },
+    tilt: { maxAngleDeg: (tiltRad * 180) / Math.PI, lipGapMm },
+    mass: {
+      totalG: housingG + nozzleG + pinG + floatPlasticG + padG,
+      filamentM: plasticMm3 / circleArea(FILAMENT_DIAMETER_MM) / 1e3,
+      byPart: { housing: housingG, float: floatPlasticG, nozzle: nozzleG, pin: pinG, pad: padG },
+    },
+    boundBy: outcome.boundBy,
+    warnings: warningsFor(b, c, lipGapMm, netWeightN, ballastG, qMin.flowLph < 1),
+    parts: {
+      printClearanceMm: PRINT_CLEARANCE_MM,
+      housing: c.housing,
+      float: f,
+      nozzle: b.nozzle,
+      pin: c.pin,
+      volumes: c.volumes,
+      mount: {
+        floatRestZMm: c.pinTopMm,
+        floatSealZMm: c.sealBottomMm,
+        nozzleTipZMm: c.tipMm,
+        pinTopZMm: c.pinTopMm,
+      },
+    },
+  };
+  return result;
+}
