@@ -1,5 +1,6 @@
 import { STANDARD_GRAVITY } from '../constants.ts';
 import { bisectIncreasing } from './bisectIncreasing.ts';
+import { illinoisIncreasing } from './illinoisIncreasing.ts';
 import { jetHeadM } from './jetHeadM.ts';
 import { tubeHeadLossM } from './tubeHeadLossM.ts';
 
@@ -21,12 +22,12 @@ export interface ValveLine {
 /**
  * Volume flow (m3/s) of one open line: the Q that solves
  * H = (K_in + f l_t/d_t) v_t^2/(2g) + (Q/(C_d A_o))^2/(2g)
- * by bisection on [0, C_d A_o sqrt(2 g H)] (at the upper end the jet alone uses all of H).
+ * by bisection (or the Illinois method) on [0, C_d A_o sqrt(2 g H)] (at the upper end the jet alone uses all of H).
  * The right side increases with Q in every regime, so the root is unique.
  * Zero for H <= 0. Internal: callers check the inputs (supplyFlow, solveSupplyNetwork).
  * Source: steady energy equation with Darcy-Weisbach losses (White, Fluid Mechanics, ch. 3 and 6).
  */
-export function valveFlowM3s(line: ValveLine, relativeTolerance: number): number {
+export function valveFlowM3s(line: ValveLine, relativeTolerance: number, method: 'bisection' | 'illinois' = 'bisection'): number {
   if (!(line.headM > 0)) return 0;
   const orificeAreaM2 = 0.25 * Math.PI * line.orificeM * line.orificeM;
   const upperM3s = line.dischargeCoefficient * orificeAreaM2 * Math.sqrt(2 * STANDARD_GRAVITY * line.headM);
@@ -42,5 +43,6 @@ export function valveFlowM3s(line: ValveLine, relativeTolerance: number): number
     }) +
     jetHeadM({ flowM3s, orificeM: line.orificeM, dischargeCoefficient: line.dischargeCoefficient }) -
     line.headM;
-  return bisectIncreasing(residual, 0, upperM3s, relativeTolerance).root;
+  const solve = method === 'illinois' ? illinoisIncreasing : bisectIncreasing;
+  return solve(residual, 0, upperM3s, relativeTolerance).root;
 }
