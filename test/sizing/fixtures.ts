@@ -1,0 +1,30 @@
+import type { DesignInputs } from '../../generator/sizing/inputs.ts';
+
+/** DESIGN.md defaults in SI, with a head and level of our own choosing (demo values, not reference data). */
+export function defaultInputs(over: Partial<DesignInputs> = {}): DesignInputs {
+  return {
+    headMaxM: 2.2,
+    headMinM: 1.6,
+    targetLevelM: 0.045,
+    liquidDensityKgM3: 998.2,
+    liquidViscosityPaS: 1.0016e-3,
+    orificeM: 0.002,
+    sealDiameterM: 0.005,
+    preloadN: 0.1,
+    padThicknessM: 0.003,
+    indentationM: 0.0005,
+    padDensityKgM3: 1200,
+    calibration: [],
+    materialName: 'PETG',
+    materialDensityKgM3: 1270,
+    wallM: 0.00225,
+    lineWidthM: 0.00045,
+    maxOuterDiameterM: 0.12,
+    reserve: 1.5,
+    tubeInnerDiameterM: 0.004,
+    tubeLengthM: 5,
+    reservoirAreaM2: 0.12,
+    reservoirRiseM: 0.02,
+    ...over,
+  };
+}
