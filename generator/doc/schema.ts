@@ -1,0 +1,448 @@
+/**
+ * The design document: one JSON shape for the command line, the browser,
+ * presets and saved files. `parseDesign` checks a document, fills in the
+ * defaults and returns the sizing core's SI input plus the document written
+ * out in full (every value with its unit).
+ *
+ * Every quantity takes a number in its field's unit (FIELD_UNITS) or a string
+ * with a unit. Only supply.headMax and level.target are required.
+ */
+import { z } from 'zod';
+import { HEAD_CAP_M, STANDARD_GRAVITY, WATER_DENSITY_20C, WATER_VISCOSITY_20C } from '../sizing/constants.ts';
+import type { CalibrationPoint, DesignInputs } from '../sizing/inputs.ts';
+import { DEFAULT_MATERIAL_NAME, findMaterial, materialNames } from '../sizing/materials.ts';
+import {
+  areaField,
+  checkRange,
+  densityField,
+  forceField,
+  headField,
+  lengthField,
+  massField,
+  normalizedText,
+  numberField,
+  optionalQuantityField,
+  rangeText,
+  resolveHead,
+  scanForbiddenKeys,
+  section,
+  textField,
+  viscosityField,
+  zodIssuesToFieldErrors,
+  type FieldError,
+  type Measured,
+  type QuantitySpec,
+  ROOT_FIELD,
+  measure,
+} from './fields.ts';
+import { formatNumber, fromSi, showInput } from './units.ts';
+
+/** The unit a bare number means in each field (document path -> unit symbol; '' for plain numbers). */
+export const FIELD_UNITS = {
+  'supply.headMax': 'm',
+  'supply.headMin': 'm',
+  'supply.tubeInnerDiameter': 'mm',
+  'supply.tubeLength': 'm',
+  'level.target': 'mm',
+  'liquid.density': 'kg/m3',
+  'liquid.viscosity': 'mPa s',
+  'nozzle.orifice': 'mm',
+  'nozzle.sealDiameter': 'mm',
+  'seal.preload': 'N',
+  'seal.padThickness': 'mm',
+  'seal.indentation': 'mm',
+  'seal.padDensity': 'g/cm3',
+  'seal.calibration.head': 'm',
+  'seal.calibration.mass': 'g',
+  'print.material.density': 'g/cm3',
+  'print.wall': 'mm',
+  'print.lineWidth': 'mm',
+  'limits.maxOuterDiameter': 'mm',
+  reserve: '',
+  'reservoir.area': 'm2',
+  'reservoir.rise': 'mm',
+} as const;
+
+/**
+ * The defaults, written as a grower would write them (DESIGN "Symbols and
+ * defaults"; nozzle.orifice is 2 mm, not DESIGN's 3 mm: a 3 mm bore through a
+ * barb for a 4 mm tube leaves walls thinner than two print lines). Pad density:
+ * soft rubber, from memory (conservative for foam).
+ */
+export const DEFAULT_DOCUMENT = {
+  supply: { tubeInnerDiameter: '4 mm', tubeLength: '5 m' },
+  liquid: {
+    density: `${WATER_DENSITY_20C} kg/m3`,
+    viscosity: `${formatNumber(WATER_VISCOSITY_20C * 1e3)} mPa s`,
+  },
+  nozzle: { orifice: '2 mm', sealDiameter: '5 mm' },
+  seal: { preload: '0.1 N', padThickness: '3 mm', indentation: '0.5 mm', padDensity: '1.2 g/cm3' },
+  print: { material: DEFAULT_MATERIAL_NAME, wall: '2.4 mm', lineWidth: '0.45 mm' },
+  limits: { maxOuterDiameter: '120 mm' },
+  reserve: 1.5,
+} as const;
+
+const LOW_PRESSURE_NOTE =
+  '3.05 m is about 10 ft (30 kPa, 4.3 psi of water): floatwright sizes valves for low-pressure gravity feed from a raised tank only. Never connect one to mains pressure.';
+
+/** Range and wording of each field (limits in the field's unit). */
+export const FIELD_SPECS = {
+  headMax: {
+    unit: 'm', label: 'the highest supply head (tank water surface above the nozzle tip)',
+    min: 0, minExclusive: true, max: HEAD_CAP_M, note: LOW_PRESSURE_NOTE, example: '2.2 m',
+  },
+  headMin: { unit: 'm', label: 'the lowest supply head', min: 0, minExclusive: true, max: HEAD_CAP_M, note: LOW_PRESSURE_NOTE },
+  tubeInnerDiameter: { unit: 'mm', label: 'the supply tube inner diameter', min: 1, max: 25 },
+  tubeLength: { unit: 'm', label: 'the supply tube length', min: 0, max: 100 },
+  target: { unit: 'mm', label: 'the target level (water depth above the container floor)', min: 5, max: 250, example: '40 mm' },
+  liquidDensity: { unit: 'kg/m3', label: 'the liquid density', min: 900, max: 1300 },
+  viscosity: { unit: 'mPa s', label: 'the liquid viscosity', min: 0.2, max: 100 },
+  orifice: { unit: 'mm', label: 'the nozzle orifice', min: 0.5, max: 6 },
+  sealDiameter: { unit: 'mm', label: 'the seal diameter (outer diameter of the nozzle lip)', min: 1, max: 30 },
+  preload: { unit: 'N', label: 'the pad preload', min: 0, max: 5 },
+  padThickness: { unit: 'mm', label: 'the pad thickness', min: 0.5, max: 10 },
+  indentation: { unit: 'mm', label: 'the pad indentation at seal', min: 0.05, max: 5 },
+  padDensity: { unit: 'g/cm3', label: 'the pad density', min: 0.05, max: 3 },
+  calibrationHead: { unit: 'm', label: 'a calibration head', min: 0.01, max: HEAD_CAP_M, note: LOW_PRESSURE_NOTE },
+  calibrationMass: { unit: 'g', label: 'a calibration mass', min: 0.1, max: 5000 },
+  materialDensity: { unit: 'g/cm3', label: 'the material density', min: 0.5, max: 3 },
+  wall: { unit: 'mm', label: 'the wall thickness', min: 0, minExclusive: true, max: 10 },
+  lineWidth: { unit: 'mm', label: 'the line width', min: 0.2, max: 1.2 },
+  maxOuterDiameter: { unit: 'mm', label: 'the largest outer diameter', min: 20, max: 250 },
+  reserve: { unit: '', label: 'the reserve (float lift over the force needed)', min: 1, max: 5 },
+  reservoirArea: { unit: 'm2', label: 'the reservoir area', min: 1e-4, max: 100 },
+  reservoirRise: { unit: 'mm', label: 'the reservoir rise', min: 1, max: 1000 },
+} satisfies Record<string, QuantitySpec>;
+
+export const MAX_CALIBRATION_POINTS = 20;
+export const MAX_NAME_LENGTH = 80;
+export const MAX_NOTES_LENGTH = 2000;
+const MAX_MATERIAL_NAME_LENGTH = 40;
+
+const S = FIELD_SPECS;
+/** An absent section parses as an empty one, so its fields take their defaults. */
+const EMPTY = {} as never;
+const D = DEFAULT_DOCUMENT;
+
+const customMaterialSchema = section({
+  name: textField('the material name', MAX_MATERIAL_NAME_LENGTH),
+  density: densityField({ ...S.materialDensity }),
+});
+
+interface MaterialChoice {
+  name: string;
+  densityKgM3: number;
+  /** table name, or null for a grower's own material */
+  tableName: string | null;
+  densityShown?: string;
+}
+
+/** `print.material`: a name from the table, or `{ name, density }`. */
+const materialField = z.unknown().optional().transform((raw, ctx): MaterialChoice => {
+  const value = raw === undefined ? D.print.material : raw;
+  if (typeof value === 'string') {
+    const found = findMaterial(value);
+    if (found) return { name: found.name, densityKgM3: found.densityKgM3, tableName: found.name };
+    ctx.issues.push({
+      code: 'custom',
+      input: raw,
+      message: `${showInput(value)} is not a material in the table (${materialNames().join(', ')}); give one of those or { "name": "...", "density": "1.15 g/cm3" }.`,
+    });
+    return z.NEVER;
+  }
+  if (value !== null && typeof value === 'object' && !Array.isArray(value)) {
+    const parsed = customMaterialSchema.safeParse(value);
+    if (!parsed.success) {
+      for (const issue of parsed.error.issues) ctx.issues.push({ ...issue } as never);
+      return z.NEVER;
+    }
+    const { name, density } = parsed.data;
+    if (!name || name.trim() === '') {
+      ctx.issues.push({ code: 'custom', input: value, path: ['name'], message: 'missing; give your material a name, e.g. "PETG-CF".' });
+      return z.NEVER;
+    }
+    return { name, densityKgM3: density.si, tableName: null, densityShown: density.shown };
+  }
+  ctx.issues.push({
+    code: 'custom',
+    input: raw,
+    message: `${showInput(raw)} is not a material; give a name (${materialNames().join(', ')}) or { "name": "...", "density": "1.15 g/cm3" }.`,
+  });
+  return z.NEVER;
+}) as unknown as z.ZodType<MaterialChoice>;
+
+const calibrationPoint = section({
+  head: headField({ ...S.calibrationHead, required: true }),
+  mass: massField({ ...S.calibrationMass }),
+});
+
+const calibrationField = z
+  .array(calibrationPoint, {
+    error: (issue) =>
+      issue.code === 'invalid_type'
+        ? `${showInput(issue.input)} is not a list; give bench points as [{ "head": "0.8 m", "mass": "31 g" }, ...].`
+        : undefined,
+  })
+  .max(MAX_CALIBRATION_POINTS, {
+    error: (issue) =>
+      `${Array.isArray(issue.input) ? issue.input.length : 'too many'} points is too many; give at most ${MAX_CALIBRATION_POINTS} calibration points.`,
+  })
+  .optional();
+
+const documentShape = {
+  name: textField('the name', MAX_NAME_LENGTH),
+  notes: textField('the notes', MAX_NOTES_LENGTH),
+  supply: section({
+    headMax: headField({ ...S.headMax, required: true }),
+    headMin: headField({ ...S.headMin, required: false }),
+    tubeInnerDiameter: lengthField({ ...S.tubeInnerDiameter, fallback: D.supply.tubeInnerDiameter }),
+    tubeLength: lengthField({ ...S.tubeLength, fallback: D.supply.tubeLength }),
+  }).prefault(EMPTY),
+  level: section({
+    target: lengthField({ ...S.target }),
+  }).prefault(EMPTY),
+  liquid: section({
+    density: densityField({ ...S.liquidDensity, fallback: D.liquid.density }),
+    viscosity: viscosityField({ ...S.viscosity, fallback: D.liquid.viscosity }),
+  }).prefault(EMPTY),
+  nozzle: section({
+    orifice: lengthField({ ...S.orifice, fallback: D.nozzle.orifice }),
+    sealDiameter: lengthField({ ...S.sealDiameter, fallback: D.nozzle.sealDiameter }),
+  }).prefault(EMPTY),
+  seal: section({
+    preload: forceField({ ...S.preload, fallback: D.seal.preload }),
+    padThickness: lengthField({ ...S.padThickness, fallback: D.seal.padThickness }),
+    indentation: lengthField({ ...S.indentation, fallback: D.seal.indentation }),
+    padDensity: densityField({ ...S.padDensity, fallback: D.seal.padDensity }),
+    calibration: calibrationField,
+  }).prefault(EMPTY),
+  print: section({
+    material: materialField,
+    wall: lengthField({ ...S.wall, fallback: D.print.wall }),
+    lineWidth: lengthField({ ...S.lineWidth, fallback: D.print.lineWidth }),
+  }).prefault(EMPTY),
+  limits: section({
+    maxOuterDiameter: lengthField({ ...S.maxOuterDiameter, fallback: D.limits.maxOuterDiameter }),
+  }).prefault(EMPTY),
+  reserve: numberField({ ...S.reserve, fallback: D.reserve }),
+  reservoir: section({
+    area: optionalQuantityField('area', S.reservoirArea),
+    rise: optionalQuantityField('length', S.reservoirRise),
+  }).optional(),
+};
+
+/** The document written out in full: every value in its field's unit, defaults filled in. Parses back to the same inputs. */
+export interface NormalizedDoc {
+  name?: string;
+  notes?: string;
+  supply: { headMax: string; headMin: string; tubeInnerDiameter: string; tubeLength: string };
+  level: { target: string };
+  liquid: { density: string; viscosity: string };
+  nozzle: { orifice: string; sealDiameter: string };
+  seal: { preload: string; padThickness: string; indentation: string; padDensity: string; calibration: { head: string; mass: string }[] };
+  print: { material: string | { name: string; density: string }; wall: string; lineWidth: string };
+  limits: { maxOuterDiameter: string };
+  reserve: number;
+  reservoir?: { area: string; rise: string };
+}
+
+export interface ParsedDesign {
+  inputs: DesignInputs;
+  document: NormalizedDoc;
+}
+
+type Ctx = { issues: unknown[] };
+function fail(ctx: Ctx, path: (string | number)[], input: unknown, message: string): void {
+  (ctx.issues as object[]).push({ code: 'custom', path, input, message });
+}
+
+/** The design document schema: raw JSON in, `{ inputs, document }` out. */
+export const designSchema = section(documentShape).transform((doc, ctx): ParsedDesign => {
+  const rho = doc.liquid.density.si;
+  const issuesBefore = ctx.issues.length;
+  const { supply, nozzle, seal, print, reservoir } = doc;
+
+  // Heads: a pressure becomes a height with the liquid's density (H = p / (rho g)).
+  const headMaxResult = resolveHead(supply.headMax!, rho, S.headMax, STANDARD_GRAVITY);
+  if (!headMaxResult.ok) fail(ctx, ['supply', 'headMax'], supply.headMax?.raw, headMaxResult.message);
+  let headMin: Measured | null = null;
+  if (headMaxResult.ok) {
+    headMin = headMaxResult.measured;
+    if (supply.headMin) {
+      const lowResult = resolveHead(supply.headMin, rho, S.headMin, STANDARD_GRAVITY);
+      if (!lowResult.ok) fail(ctx, ['supply', 'headMin'], supply.headMin.raw, lowResult.message);
+      else if (lowResult.measured.si > headMaxResult.measured.si * (1 + 1e-12)) {
+        fail(ctx, ['supply', 'headMin'], supply.headMin.raw,
+          `${lowResult.measured.shown} is above supply.headMax (${normalizedText(headMaxResult.measured.si, 'm')}); the lowest head must be more than 0 m and at most the highest head.`);
+      } else headMin = lowResult.measured;
+    }
+  }
+
+  if (nozzle.orifice.si >= nozzle.sealDiameter.si) {
+    fail(ctx, ['nozzle', 'orifice'], undefined,
+      `${nozzle.orifice.shown} is not smaller than nozzle.sealDiameter (${normalizedText(nozzle.sealDiameter.si, 'mm')}); the orifice must be narrower than the lip that seals around it.`);
+  }
+
+  const halfPadMm = fromSi(seal.padThickness.si, 'mm') / 2;
+  const indentationSpec = { ...S.indentation, max: halfPadMm, label: `the pad indentation (at most half the ${normalizedText(seal.padThickness.si, 'mm')} pad)` };
+  const indentationProblem = checkRange(seal.indentation.si, seal.indentation.shown, indentationSpec);
+  if (indentationProblem) fail(ctx, ['seal', 'indentation'], undefined, indentationProblem);
+
+  const calibration: CalibrationPoint[] = [];
+  const calibrationText: { head: string; mass: string }[] = [];
+  (seal.calibration ?? []).forEach((point, i) => {
+    const head = resolveHead(point.head!, rho, S.calibrationHead, STANDARD_GRAVITY);
+    if (!head.ok) return fail(ctx, ['seal', 'calibration', i, 'head'], point.head?.raw, head.message);
+    calibration.push({ headM: head.measured.si, massKg: point.mass.si });
+    calibrationText.push({ head: normalizedText(head.measured.si, 'm'), mass: normalizedText(point.mass.si, 'g') });
+  });
+
+  const lineMm = fromSi(print.lineWidth.si, 'mm');
+  const wallSpec = { ...S.wall, min: 2 * lineMm, minExclusive: false, label: `the wall thickness (at least two ${formatNumber(lineMm)} mm line widths)` };
+  const wallProblem = checkRange(print.wall.si, print.wall.shown, wallSpec);
+  if (wallProblem) fail(ctx, ['print', 'wall'], undefined, wallProblem);
+
+  if (reservoir && (reservoir.area === null) !== (reservoir.rise === null)) {
+    const missing = reservoir.area === null ? 'area' : 'rise';
+    const other = missing === 'area' ? 'rise' : 'area';
+    fail(ctx, ['reservoir', missing], undefined,
+      `missing; give reservoir.${missing} together with reservoir.${other} (both are needed for a fill time), or leave both out.`);
+  }
+
+  if (ctx.issues.length > issuesBefore || !headMaxResult.ok || !headMin) return z.NEVER;
+
+  const area = reservoir?.area ?? null;
+  const rise = reservoir?.rise ?? null;
+  const inputs: DesignInputs = {
+    headMaxM: headMaxResult.measured.si,
+    headMinM: headMin.si,
+    targetLevelM: doc.level.target.si,
+    liquidDensityKgM3: rho,
+    liquidViscosityPaS: doc.liquid.viscosity.si,
+    orificeM: nozzle.orifice.si,
+    sealDiameterM: nozzle.sealDiameter.si,
+    preloadN: seal.preload.si,
+    padThicknessM: seal.padThickness.si,
+    indentationM: seal.indentation.si,
+    padDensityKgM3: seal.padDensity.si,
+    calibration,
+    materialName: print.material.name,
+    materialDensityKgM3: print.material.densityKgM3,
+    wallM: print.wall.si,
+    lineWidthM: print.lineWidth.si,
+    maxOuterDiameterM: doc.limits.maxOuterDiameter.si,
+    reserve: doc.reserve.si,
+    tubeInnerDiameterM: supply.tubeInnerDiameter.si,
+    tubeLengthM: supply.tubeLength.si,
+    reservoirAreaM2: area ? area.si : null,
+    reservoirRiseM: rise ? rise.si : null,
+  };
+  const U = FIELD_UNITS;
+  const document: NormalizedDoc = {
+    ...(doc.name !== undefined ? { name: doc.name } : {}),
+    ...(doc.notes !== undefined ? { notes: doc.notes } : {}),
+    supply: {
+      headMax: normalizedText(inputs.headMaxM, U['supply.headMax']),
+      headMin: normalizedText(inputs.headMinM, U['supply.headMin']),
+      tubeInnerDiameter: normalizedText(inputs.tubeInnerDiameterM, U['supply.tubeInnerDiameter']),
+      tubeLength: normalizedText(inputs.tubeLengthM, U['supply.tubeLength']),
+    },
+    level: { target: normalizedText(inputs.targetLevelM, U['level.target']) },
+    liquid: {
+      density: normalizedText(rho, U['liquid.density']),
+      viscosity: normalizedText(inputs.liquidViscosityPaS, U['liquid.viscosity']),
+    },
+    nozzle: {
+      orifice: normalizedText(inputs.orificeM, U['nozzle.orifice']),
+      sealDiameter: normalizedText(inputs.sealDiameterM, U['nozzle.sealDiameter']),
+    },
+    seal: {
+      preload: normalizedText(inputs.preloadN, U['seal.preload']),
+      padThickness: normalizedText(inputs.padThicknessM, U['seal.padThickness']),
+      indentation: normalizedText(inputs.indentationM, U['seal.indentation']),
+      padDensity: normalizedText(inputs.padDensityKgM3, U['seal.padDensity']),
+      calibration: calibrationText,
+    },
+    print: {
+      material: print.material.tableName ?? {
+        name: print.material.name,
+        density: normalizedText(print.material.densityKgM3, U['print.material.density']),
+      },
+      wall: normalizedText(inputs.wallM, U['print.wall']),
+      lineWidth: normalizedText(inputs.lineWidthM, U['print.lineWidth']),
+    },
+    limits: { maxOuterDiameter: normalizedText(inputs.maxOuterDiameterM, U['limits.maxOuterDiameter']) },
+    reserve: Number(formatNumber(inputs.reserve, 10)),
+    ...(area && rise
+      ? { reservoir: { area: normalizedText(area.si, U['reservoir.area']), rise: normalizedText(rise.si, U['reservoir.rise']) } }
+      : {}),
+  };
+  return { inputs, document };
+});
+
+export type DesignParse = { ok: true; inputs: DesignInputs; document: NormalizedDoc } | { ok: false; errors: FieldError[] };
+
+/**
+ * Check a design document (as from JSON.parse) and return the sizing core's
+ * SI input and the full normalized document, or every problem found, each
+ * naming its document path, the value and the allowed range.
+ */
+export function parseDesign(doc: unknown): DesignParse {
+  if (doc === null || typeof doc !== 'object' || Array.isArray(doc)) {
+    return {
+      ok: false,
+      errors: [{ field: ROOT_FIELD, message: `${showInput(doc)} is not a design document; expected an object such as { "supply": { "headMax": "2.2 m" }, "level": { "target": "40 mm" } }.` }],
+    };
+  }
+  const forbidden = scanForbiddenKeys(doc);
+  if (forbidden.length) return { ok: false, errors: forbidden };
+  const result = designSchema.safeParse(doc);
+  if (!result.success) return { ok: false, errors: zodIssuesToFieldErrors(result.error.issues) };
+  return { ok: true, inputs: result.data.inputs, document: result.data.document };
+}
+
+/** Check one field's value on its own (for forms and flags): null when fine, else the message. */
+export function checkQuantity(kind: Parameters<typeof measure>[1], value: unknown, spec: QuantitySpec): string | null {
+  const result = measure(value, kind, spec);
+  return result.ok ? null : result.message;
+}
+
+function isPlainObject(value: unknown): value is Record<string, unknown> {
+  return value !== null && typeof value === 'object' && !Array.isArray(value);
+}
+
+/**
+ * A copy of `doc` with values set at dotted paths (`{ "supply.headMax": "2.4m" }`),
+ * for command-line flags. The input is not changed. Missing sections are
+ * created; a path through something that is not an object is left alone so
+ * the schema reports the real problem. Prototype keys are never written.
+ */
+export function mergeOverrides(doc: unknown, overrides: Readonly<Record<string, unknown>>): unknown {
+  const base: unknown = doc === undefined ? {} : structuredClone(doc);
+  if (!isPlainObject(base)) return base;
+  for (const [path, value] of Object.entries(overrides)) {
+    if (value === undefined) continue;
+    const keys = path.split('.');
+    if (keys.some((k) => k === '' || ['__proto__', 'constructor', 'prototype'].includes(k))) continue;
+    let node: Record<string, unknown> = base;
+    let blocked = false;
+    for (const key of keys.slice(0, -1)) {
+      if (!Object.hasOwn(node, key) || node[key] === undefined) node[key] = {};
+      const next = node[key];
+      if (!isPlainObject(next)) {
+        blocked = true;
+        break;
+      }
+      node = next;
+    }
+    if (!blocked) node[keys[keys.length - 1]] = value;
+  }
+  return base;
+}
+
+/** Range text for a field spec, e.g. FIELD_SPECS.target -> "from 5 mm to 250 mm" (for help and forms). */
+export function fieldRangeText(spec: QuantitySpec): string {
+  return rangeText(spec);
+}
+
+export type { FieldError } from './fields.ts';
