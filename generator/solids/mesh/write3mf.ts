@@ -76,7 +76,7 @@ export function write3mf(objects: readonly ThreeMfObject[], options: ThreeMfOpti
   );
   if (!layout.fits) {
     throw new RangeError(
-      `write3mf.options: plate ${options.plateWidthMm} × ${options.plateDepthMm} mm is too small for these ${objects.length} parts ` +
+      `write3mf.options: plate ${options.plateWidthMm} × ${options.plateDepthMm} mm is too small for ${objects.length === 1 ? 'this part' : `these ${objects.length} parts`} ` +
         `(they need ${layout.usedWidthMm.toFixed(1)} × ${layout.usedDepthMm.toFixed(1)} mm with spacingMm = ${options.spacingMm}); ` +
         `allowed: a plate at least that large, or fewer parts per file`,
     );
