@@ -1,0 +1,54 @@
+/**
+ * The float, in print pose = mounted pose (flat bottom on z = 0).
+ *
+ * One solid of revolution, no booleans: the profile is the shell's half
+ * section, the sealed cavity and the pad pocket are notches in it that reach
+ * the axis. Outer: cylinder R to h_c, 45-degree cone to the plateau r_p at
+ * h_f, pocket (r_pocket, depth) cut into the plateau. Cavity: r_cav from the
+ * bottom shell t up to the inner cone start, 45-degree roof in to r_roof at
+ * roof z, flat roof (the one short bridge). Every dimension is FloatSpec's.
+ *
+ * Facets: one count for the whole float, from its outer radius at the asked
+ * quality, so every section is the same N-gon and the volume is exactly
+ * k(N) times FloatSpec's analytic shell (see revolveProfile).
+ */
+import { geom3ToMesh, segmentsFor, type IndexedMesh, type Quality } from '../mesh/index.ts';
+import type { FloatSpec } from '../../sizing/result.ts';
+import { revolveProfile } from '../shapes/revolve-profile.ts';
+
+/** Profile corners [r, z], counter-clockwise. */
+export function floatProfile(f: FloatSpec): [number, number][] {
+  const R = f.outerDiameterMm / 2;
+  const H = f.heightMm;
+  const pocketFloor = H - f.pocketDepthMm;
+  const outer: [number, number][] = [
+    [0, 0],
+    [R, 0],
+    [R, f.cylinderHeightMm],
+    [f.plateauRadiusMm, H],
+  ];
+  const pocket: [number, number][] =
+    f.pocketDepthMm > 0
+      ? [
+          [f.pocketRadiusMm, H],
+          [f.pocketRadiusMm, pocketFloor],
+          [0, pocketFloor],
+        ]
+      : [[0, H]];
+  const cavity: [number, number][] = [
+    [0, f.cavityRoofZMm],
+    [f.cavityRoofRadiusMm, f.cavityRoofZMm],
+    [f.cavityRadiusMm, f.cavityConeStartZMm],
+    [f.cavityRadiusMm, f.cavityBottomZMm],
+    [0, f.cavityBottomZMm],
+  ];
+  return [...outer, ...pocket, ...cavity];
+}
+
+export function floatSegments(f: FloatSpec, quality: Quality): number {
+  return segmentsFor(f.outerDiameterMm / 2, quality);
+}
+
+export function buildFloatMesh(f: FloatSpec, quality: Quality): IndexedMesh {
+  return geom3ToMesh(revolveProfile(floatProfile(f), floatSegments(f, quality)));
+}
