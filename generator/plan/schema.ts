@@ -105,7 +105,7 @@ const planSchema = section({
   }).prefault(EMPTY),
   design: passOn,
   starvingShare: numberField({ ...S.starvingShare, fallback: DEFAULT_STARVING_SHARE }),
-  containers: z.array(containerSchema, {
+  containers: z.array(passOn, {
     error: (issue) =>
       issue.code === 'invalid_type'
         ? `${showInput(issue.input)} is not a list; give containers as [{ "name": "top shelf", "floorElevation": "0.9 m", "level": "35 mm" }, ...].`
@@ -180,6 +180,53 @@ function pushUnique(errors: FieldError[], error: FieldError): void {
 }
 
 /**
+ * One row's valve as a design document: the plan's design, the row's own
+ * design, then the row's fields (CONTAINER_FIELD_MAP), checked by parseDesign
+ * with its error paths turned into plan paths. Null (with errors pushed) when wrong.
+ */
+function rowDesign(raw: Record<string, unknown>, at: string, shared: Record<string, unknown>, errors: FieldError[]) {
+  const own = raw.design === undefined ? {} : raw.design;
+  if (!isPlainObject(own)) {
+    errors.push({ field: `${at}.design`, message: `${showInput(own)} is not a section; give this container's own design settings as a design document.` });
+    return null;
+  }
+  const before = errors.length;
+  refuseComputed(own, `${at}.design`, errors, { liquid: 'one tank holds one liquid: set it once, in the plan\'s design.liquid' });
+
+  const origins: Record<string, string> = {};
+  const claim = (designPath: string, planPath: string) => {
+    for (const k of Object.keys(origins)) if (k === designPath || k.startsWith(`${designPath}.`) || designPath.startsWith(`${k}.`)) delete origins[k];
+    origins[designPath] = planPath;
+  };
+  for (const p of leafPaths(shared)) origins[p] = `design.${p}`;
+  for (const p of leafPaths(own)) claim(p, `${at}.design.${p}`);
+  const merged = deepMerge(shared, own) as Record<string, unknown>;
+  for (const [key, designPath] of Object.entries(CONTAINER_FIELD_MAP)) {
+    const value = getPath(raw, key);
+    if (value === undefined) continue;
+    if (getPath(own, designPath) !== undefined) {
+      errors.push({ field: `${at}.${key}`, message: `is also given as ${at}.design.${designPath}; give it once.` });
+      continue;
+    }
+    setPath(merged, designPath, value);
+    claim(designPath, `${at}.${key}`);
+  }
+  origins['level.target'] ??= `${at}.level`;
+  setPath(merged, 'supply.headMax', PLACEHOLDER_HEAD);
+  delete (merged.supply as Record<string, unknown>).headMin;
+  if (typeof raw.name === 'string' && raw.name.length <= MAX_NAME_LENGTH) merged.name = raw.name;
+  else delete merged.name;
+  if (errors.length > before) return null;
+
+  const design = parseDesign(merged);
+  if (!design.ok) {
+    for (const e of design.errors) pushUnique(errors, { field: planPathFor(e.field, origins, `design.${e.field}`), message: e.message });
+    return null;
+  }
+  return { inputs: design.inputs, document: design.document, origins };
+}
+
+/**
  * Check a plan document (as from JSON.parse) and return it in SI with every
  * container's design inputs, or every problem found, each naming its plan
  * path, the value and the allowed range.
@@ -204,6 +251,15 @@ export function parsePlan(doc: unknown): PlanParse {
     return { ok: false, errors };
   }
   const plan = parsed.data;
+  // Each row on its own, so one bad row does not hide the others' problems.
+  const rows = plan.containers.map((raw, i) => {
+    const one = containerSchema.safeParse(raw);
+    if (one.success) return one.data;
+    for (const e of zodIssuesToFieldErrors(one.error.issues)) {
+      errors.push({ ...e, field: e.field === ROOT_FIELD ? `containers.${i}` : `containers.${i}.${e.field}` });
+    }
+    return null;
+  });
 
   // Tank: the low surface defaults to the full one and may not be above it.
   const full = plan.tank.fullSurfaceElevation;
@@ -233,64 +289,33 @@ export function parsePlan(doc: unknown): PlanParse {
   const containers: PlanContainerInput[] = [];
   let liquid: { densityKgM3: number; viscosityPaS: number } | null = null;
 
-  plan.containers.forEach((c, i) => {
+  plan.containers.forEach((raw, i) => {
     const at = `containers.${i}`;
-    const before = errors.length;
-    if (c.name === undefined || c.name.trim() === '') {
-      errors.push({ field: `${at}.name`, message: 'missing; give each container a name, e.g. "top shelf".' });
-    } else if (names.has(c.name)) {
-      errors.push({ field: `${at}.name`, message: `${showInput(c.name)} is already the name of containers.${names.get(c.name)}; give each row its own name.` });
-    } else names.set(c.name, i);
-    if (!Number.isInteger(c.count.si)) {
-      errors.push({ field: `${at}.count`, message: `${formatNumber(c.count.si)} is not a whole number; ${S.count.label} must be a whole number from 1 to ${S.count.max}.` });
-    }
-    const own = c.design === undefined ? {} : c.design;
-    if (!isPlainObject(own)) {
-      errors.push({ field: `${at}.design`, message: `${showInput(own)} is not a section; give this container's own design settings as a design document.` });
-      return;
-    }
-    refuseComputed(own, `${at}.design`, errors, { liquid: 'one tank holds one liquid: set it once, in the plan\'s design.liquid' });
-
-    // Merge: plan design, then the container's design, then its own fields.
-    const origins: Record<string, string> = {};
-    for (const p of leafPaths(shared)) origins[p] = `design.${p}`;
-    for (const p of leafPaths(own)) {
-      for (const k of Object.keys(origins)) if (k === p || k.startsWith(`${p}.`) || p.startsWith(`${k}.`)) delete origins[k];
-      origins[p] = `${at}.design.${p}`;
-    }
-    const merged = deepMerge(shared, own) as Record<string, unknown>;
-    for (const [key, designPath] of Object.entries(CONTAINER_FIELD_MAP)) {
-      const value = getPath(c, key);
-      if (value === undefined) continue;
-      if (getPath(own, designPath) !== undefined) {
-        errors.push({ field: `${at}.${key}`, message: `is also given as ${at}.design.${designPath}; give it once.` });
-        continue;
+    const c = rows[i];
+    if (c) {
+      if (c.name === undefined || c.name.trim() === '') {
+        errors.push({ field: `${at}.name`, message: 'missing; give each container a name, e.g. "top shelf".' });
+      } else if (names.has(c.name)) {
+        errors.push({ field: `${at}.name`, message: `${showInput(c.name)} is already the name of containers.${names.get(c.name)}; give each row its own name.` });
+      } else names.set(c.name, i);
+      if (!Number.isInteger(c.count.si)) {
+        errors.push({ field: `${at}.count`, message: `${formatNumber(c.count.si)} is not a whole number; ${S.count.label} must be a whole number from 1 to ${S.count.max}.` });
       }
-      setPath(merged, designPath, value);
-      for (const k of Object.keys(origins)) if (k === designPath || k.startsWith(`${designPath}.`)) delete origins[k];
-      origins[designPath] = `${at}.${key}`;
     }
-    setPath(merged, 'supply.headMax', PLACEHOLDER_HEAD);
-    delete (merged.supply as Record<string, unknown>).headMin;
-    if (c.name !== undefined) merged.name = c.name;
-    if (errors.length > before) return;
-
-    const design = parseDesign(merged);
-    if (!design.ok) {
-      const fallbackFor = (p: string) => (p === 'level.target' ? `${at}.level` : `design.${p}`);
-      for (const e of design.errors) pushUnique(errors, { field: planPathFor(e.field, origins, fallbackFor(e.field)), message: e.message });
-      return;
-    }
+    // The design is checked from the raw row even when the row's own fields are wrong, so every problem shows at once.
+    if (!isPlainObject(raw)) return;
+    const design = rowDesign(raw, at, shared, errors);
+    if (!design || !c || c.name === undefined) return;
     liquid ??= { densityKgM3: design.inputs.liquidDensityKgM3, viscosityPaS: design.inputs.liquidViscosityPaS };
     containers.push({
       index: i,
-      name: c.name!,
+      name: c.name,
       count: c.count.si,
       floorElevationM: c.floorElevation.si,
       mainLengthM: c.mainLength.si,
       inputs: design.inputs,
       document: design.document,
-      origins: { ...origins, 'level.target': origins['level.target'] ?? `${at}.level` },
+      origins: design.origins,
     });
   });
 
