@@ -1,0 +1,366 @@
+import { LitElement, css, html, nothing } from 'lit';
+import { customElement, query, state } from 'lit/decorators.js';
+import { parseDesign } from '../../generator/doc/schema.ts';
+import type { SizingResult, SizingSuccess, WayOut } from '../../generator/sizing/result.ts';
+import { BuildClient, type WorkerFactory } from '../lib/build-client.ts';
+import { getAt, setAt, type Doc } from '../lib/doc-path.ts';
+import { ALL_FIELDS } from '../lib/form-fields.ts';
+import { presets, type Preset } from '../lib/presets.ts';
+import { decodeDesign, designFromHash, shareUrl } from '../lib/share-link.ts';
+import { loadSaved, save } from '../lib/storage.ts';
+import { convertDocument, type UnitSystem } from '../lib/units-system.ts';
+import type { BuiltReply, ExportFile } from '../worker/protocol.ts';
+import type { PartMeshes, PartTransforms } from '../worker/parts-contract.ts';
+import type { FieldInputDetail } from './fw-design-form.ts';
+import type { ExportRequest } from './fw-file-bar.ts';
+import type { FwValveView, ViewOptions } from './fw-valve-view.ts';
+import { shared } from './shared-styles.ts';
+import './fw-design-form.ts';
+import './fw-results.ts';
+import './fw-push-plot.ts';
+import './fw-valve-view.ts';
+import './fw-file-bar.ts';
+import './fw-cautions.ts';
+
+/** Wait after the last keystroke before sizing: short enough to feel live, long enough to skip half-typed numbers. */
+export const TYPING_PAUSE_MS = 40;
+
+type Notice = { kind: 'bad' | 'good'; text: string; link?: string } | null;
+
+/** Blank bench rows the grower has just added are not errors yet. */
+function withoutBlankPoints(doc: Doc): Doc {
+  const points = getAt(doc, 'seal.calibration');
+  if (!Array.isArray(points)) return doc;
+  const kept = points.filter((p) => !(p && typeof p === 'object' && !(p as Doc).head && !(p as Doc).mass));
+  return setAt(doc, 'seal.calibration', kept.length ? kept : undefined);
+}
+
+function download(file: { name: string; mime: string; bytes: Uint8Array }): void {
+  const url = URL.createObjectURL(new Blob([file.bytes as BlobPart], { type: file.mime }));
+  const a = document.createElement('a');
+  a.href = url;
+  a.download = file.name;
+  document.body.append(a);
+  a.click();
+  a.remove();
+  setTimeout(() => URL.revokeObjectURL(url), 60_000);
+}
+
+function errorList(errors: { field: string; message: string }[]): string {
+  return errors.map((e) => `${e.field}: ${e.message}`).join(' ');
+}
+
+/** The workbench: holds the design, talks to the build worker, hands state down to the panels. */
+@customElement('fw-app')
+export class FwApp extends LitElement {
+  static override styles = [
+    shared,
+    css`
+      :host { display: grid; grid-template-rows: auto 1fr auto; height: 100vh; background: var(--paper); }
+      header { display: flex; flex-wrap: wrap; align-items: center; gap: 0.6rem 1.2rem; padding: 0.45rem 1rem; background: var(--leaf); color: #fff; }
+      header h1 { font-size: 1.15rem; margin: 0; }
+      header h1 small { font-weight: normal; opacity: 0.85; }
+      header label, header legend { font-size: 0.9rem; }
+      header select { font: inherit; padding: 0.15rem 0.3rem; border-radius: 5px; }
+      header fieldset { border: 0; margin: 0; padding: 0; display: flex; gap: 0.5rem; align-items: center; }
+      header legend { float: left; margin-right: 0.3rem; }
+      .status { margin-left: auto; font-size: 0.82rem; opacity: 0.9; }
+      main { display: grid; grid-template-columns: minmax(17rem, 21rem) minmax(22rem, 1fr) minmax(19rem, 25rem); gap: 0.8rem; padding: 0.8rem; overflow: hidden; min-height: 0; }
+      main > * { overflow: auto; min-height: 0; }
+      .middle { display: flex; flex-direction: column; gap: 0.6rem; }
+      fw-valve-view { flex: 1 1 auto; min-height: 320px; }
+      .viewbar { display: flex; flex-wrap: wrap; gap: 0.3rem 1rem; align-items: center; font-size: 0.9rem; }
+      .viewbar fieldset { border: 0; padding: 0; margin: 0; display: flex; gap: 0.5rem; }
+      .viewbar legend { float: left; margin-right: 0.3rem; color: var(--muted); }
+      .notice { margin: 0 0.8rem; padding: 0.4rem 0.7rem; border-radius: 6px; display: flex; gap: 0.6rem; align-items: baseline; }
+      .notice.bad { background: var(--bad-soft); border: 1px solid var(--bad); }
+      .notice.good { background: var(--leaf-soft); border: 1px solid var(--leaf); }
+      .notice input { flex: 1; font: inherit; min-width: 10rem; }
+      .notice button { margin-left: auto; }
+      .right { display: flex; flex-direction: column; gap: 0.6rem; }
+      @media (max-width: 900px) {
+        :host { height: auto; }
+        main { grid-template-columns: 1fr; overflow: visible; }
+        fw-cautions { position: sticky; bottom: 0; }
+      }
+    `,
+  ];
+
+  @state() private doc: Doc = {};
+  @state() private units: UnitSystem = 'metric';
+  @state() private errors: Record<string, string> = {};
+  @state() private result: SizingResult | null = null;
+  @state() private lastGood: SizingSuccess | null = null;
+  @state() private meshes: PartMeshes | null = null;
+  @state() private transforms: { rest: PartTransforms; seal: PartTransforms } | null = null;
+  @state() private meshBuildId = 0;
+  @state() private view: ViewOptions = { pose: 'seal', section: true, exploded: false, water: true };
+  @state() private notice: Notice = null;
+  @state() private busy = '';
+  @state() private presetId = '';
+  @state() private timing = '';
+
+  @query('fw-valve-view') private viewer!: FwValveView;
+
+  /** set before connecting to run the builds somewhere else (tests) */
+  workerFactory: WorkerFactory | undefined;
+
+  private client: BuildClient | null = null;
+  private presetList: Preset[] = presets();
+  private typingTimer: ReturnType<typeof setTimeout> | null = null;
+  private lastEditAt = 0;
+  private firstBuildAfterEdit = 0;
+  /** the document each build request came from */
+  private docsById = new Map<number, Doc>();
+  private lastGoodDoc: Doc | null = null;
+  private readonly onHashChange = () => this.openFromHash();
+
+  override connectedCallback(): void {
+    super.connectedCallback();
+    this.client = new BuildClient(
+      (reply, newer) => this.built(reply, newer),
+      (message) => (this.notice = { kind: 'bad', text: `Building the parts failed: ${message}` }),
+      this.workerFactory,
+    );
+    const saved = loadSaved(globalThis.localStorage);
+    if (saved) {
+      this.units = saved.units;
+      this.doc = saved.doc;
+    } else {
+      this.doc = this.presetList[0].doc;
+      this.presetId = this.presetList[0].id;
+    }
+    this.evaluate();
+    this.openFromHash();
+    globalThis.addEventListener?.('hashchange', this.onHashChange);
+  }
+
+  override disconnectedCallback(): void {
+    super.disconnectedCallback();
+    globalThis.removeEventListener?.('hashchange', this.onHashChange);
+    this.client?.dispose();
+  }
+
+  /** A design from a share link: used only when it is valid; otherwise say why and keep the current one. */
+  private openFromHash(): void {
+    const encoded = designFromHash(globalThis.location?.hash ?? '');
+    if (encoded === null) return;
+    history.replaceState(null, '', location.pathname + location.search);
+    const decoded = decodeDesign(encoded);
+    if (!decoded.ok) {
+      this.notice = { kind: 'bad', text: `The shared link could not be used: ${decoded.message} Your current design is unchanged.` };
+      return;
+    }
+    const parsed = parseDesign(decoded.doc);
+    if (!parsed.ok) {
+      this.notice = { kind: 'bad', text: `The shared link holds a design with problems, so it was not opened. ${errorList(parsed.errors)} Your current design is unchanged.` };
+      return;
+    }
+    this.replaceDoc(decoded.doc as Doc, 'Opened the design from the link.');
+  }
+
+  private replaceDoc(doc: Doc, message?: string): void {
+    this.doc = doc;
+    this.presetId = '';
+    if (message) this.notice = { kind: 'good', text: message };
+    this.lastEditAt = performance.now();
+    this.firstBuildAfterEdit = Infinity;
+    this.evaluate();
+  }
+
+  private fieldInput(e: CustomEvent<FieldInputDetail>): void {
+    this.doc = setAt(this.doc, e.detail.path, e.detail.value);
+    this.lastEditAt = performance.now();
+    this.firstBuildAfterEdit = Infinity;
+    if (this.typingTimer) clearTimeout(this.typingTimer);
+    this.typingTimer = setTimeout(() => this.evaluate(), TYPING_PAUSE_MS);
+  }
+
+  /** Check the document; when it is good, ask the worker to size and build it. */
+  private evaluate(): void {
+    this.typingTimer = null;
+    const parsed = parseDesign(withoutBlankPoints(this.doc));
+    if (!parsed.ok) {
+      this.errors = Object.fromEntries(parsed.errors.map((e) => [e.field, e.message]));
+      return;
+    }
+    this.errors = {};
+    const id = this.client!.build(parsed.inputs);
+    this.docsById.set(id, this.doc);
+    if (this.firstBuildAfterEdit === Infinity) this.firstBuildAfterEdit = id;
+  }
+
+  private built(reply: BuiltReply, newerWaiting: boolean): void {
+    const doc = this.docsById.get(reply.id);
+    for (const k of this.docsById.keys()) if (k <= reply.id) this.docsById.delete(k);
+    this.result = reply.sizing;
+    this.timing = `sized in ${reply.sizeMs.toFixed(0)} ms, parts in ${reply.buildMs.toFixed(0)} ms`;
+    this.setAttribute('data-size-ms', reply.sizeMs.toFixed(1));
+    this.setAttribute('data-parts-ms', reply.buildMs.toFixed(1));
+    if (reply.sizing.ok) {
+      this.lastGood = reply.sizing;
+      if (reply.meshes && reply.transforms) {
+        this.meshes = reply.meshes;
+        this.transforms = reply.transforms;
+        this.meshBuildId = reply.id;
+      }
+      if (reply.solidError) this.notice = { kind: 'bad', text: `The parts could not be drawn: ${reply.solidError}` };
+      if (doc) {
+        this.lastGoodDoc = doc;
+        save(globalThis.localStorage, { doc, units: this.units });
+      }
+    }
+    this.setAttribute('data-result', reply.sizing.ok ? 'sized' : 'no-fit');
+    this.setAttribute('data-build-id', String(reply.id));
+    if (!newerWaiting && !reply.sizing.ok) this.dispatchEvent(new CustomEvent('design-settled', { detail: { buildId: reply.id } }));
+  }
+
+  /** Input-to-preview time: from the last keystroke to the preview drawn from a build that includes it. */
+  private previewRendered(e: CustomEvent<{ buildId: number; at: number }>): void {
+    if (this.lastEditAt > 0 && e.detail.buildId >= this.firstBuildAfterEdit) {
+      const ms = e.detail.at - this.lastEditAt;
+      this.setAttribute('data-input-to-preview-ms', ms.toFixed(1));
+    }
+    this.setAttribute('data-preview-build-id', String(e.detail.buildId));
+    this.dispatchEvent(new CustomEvent('design-settled', { detail: { buildId: e.detail.buildId } }));
+  }
+
+  private setUnits(units: UnitSystem): void {
+    if (units === this.units) return;
+    this.units = units;
+    this.doc = convertDocument(this.doc, ALL_FIELDS, units);
+    if (this.lastGoodDoc) save(globalThis.localStorage, { doc: this.lastGoodDoc, units });
+    this.evaluate();
+  }
+
+  private choosePreset(id: string): void {
+    const preset = this.presetList.find((p) => p.id === id);
+    if (!preset) return;
+    this.replaceDoc(convertDocument(preset.doc, ALL_FIELDS, this.units));
+    this.presetId = id;
+  }
+
+  private applyWayOut(e: CustomEvent<WayOut>): void {
+    this.replaceDoc(setAt(this.doc, e.detail.field, e.detail.value));
+  }
+
+  private async exportRequest(e: CustomEvent<ExportRequest>): Promise<void> {
+    const good = this.lastGood;
+    const doc = this.lastGoodDoc;
+    if (!good || !doc) return;
+    if (e.detail.kind === 'json') {
+      download({ name: 'floatwright-design.json', mime: 'application/json', bytes: new TextEncoder().encode(JSON.stringify(doc, null, 2) + '\n') });
+      return;
+    }
+    this.busy = 'Making your files at print quality…';
+    try {
+      const files: ExportFile[] = await this.client!.exportFiles(good.inputs, doc, e.detail.kind, e.detail.part);
+      for (const f of files) download(f);
+      this.busy = '';
+    } catch (error) {
+      this.busy = '';
+      this.notice = { kind: 'bad', text: `The files could not be made: ${error instanceof Error ? error.message : String(error)}` };
+    }
+  }
+
+  private async importFile(e: CustomEvent<File>): Promise<void> {
+    const file = e.detail;
+    let doc: unknown;
+    try {
+      doc = JSON.parse(await file.text());
+    } catch {
+      this.notice = { kind: 'bad', text: `${file.name} is not a design file (it is not readable JSON). Your current design is unchanged.` };
+      return;
+    }
+    const parsed = parseDesign(doc);
+    if (!parsed.ok) {
+      this.notice = { kind: 'bad', text: `${file.name} was not opened: ${errorList(parsed.errors)} Your current design is unchanged.` };
+      return;
+    }
+    this.replaceDoc(doc as Doc, `Opened ${file.name}.`);
+  }
+
+  private async shareLink(): Promise<void> {
+    const doc = this.lastGoodDoc ?? this.doc;
+    const link = shareUrl(location.href, doc);
+    let copied = false;
+    try {
+      await navigator.clipboard.writeText(link);
+      copied = true;
+    } catch {
+      // clipboard blocked: the link is shown to copy by hand
+    }
+    this.notice = { kind: 'good', text: copied ? 'Link copied. Anyone who opens it gets this design:' : 'Copy this link to share the design:', link };
+  }
+
+  private setView(patch: Partial<ViewOptions>): void {
+    this.view = { ...this.view, ...patch };
+  }
+
+  private renderNotice() {
+    const n = this.notice;
+    if (!n) return nothing;
+    return html`<div class="notice ${n.kind}" role=${n.kind === 'bad' ? 'alert' : 'status'} data-notice=${n.kind}>
+      <span>${n.text}</span>
+      ${n.link ? html`<input readonly aria-label="Share link" .value=${n.link} @focus=${(e: FocusEvent) => (e.target as HTMLInputElement).select()} />` : nothing}
+      <button @click=${() => (this.notice = null)}>Dismiss</button>
+    </div>`;
+  }
+
+  override render() {
+    const formErrors = Object.entries(this.errors).filter(([k]) => !ALL_FIELDS.some((f) => f.path === k) && !k.startsWith('seal.calibration') && !k.startsWith('print.material'));
+    const good = this.lastGood;
+    return html`
+      <header>
+        <h1>floatwright <small>float valve workbench</small></h1>
+        <label>Start from
+          <select @change=${(e: Event) => this.choosePreset((e.target as HTMLSelectElement).value)} aria-label="Start from a ready-made design">
+            <option value="" ?selected=${this.presetId === ''}>(your design)</option>
+            ${this.presetList.map((p) => html`<option value=${p.id} ?selected=${p.id === this.presetId}>${p.title}</option>`)}
+          </select>
+        </label>
+        <fieldset>
+          <legend>Units</legend>
+          <label><input type="radio" name="units" value="metric" .checked=${this.units === 'metric'} @change=${() => this.setUnits('metric')} /> metric</label>
+          <label><input type="radio" name="units" value="imperial" .checked=${this.units === 'imperial'} @change=${() => this.setUnits('imperial')} /> imperial</label>
+        </fieldset>
+        <span class="status" role="status">${this.timing}</span>
+      </header>
+      <div>
+        ${this.renderNotice()}
+        ${formErrors.length ? html`<div class="notice bad" role="alert">${formErrors.map(([k, m]) => html`<div>${k}: ${m}</div>`)}</div>` : nothing}
+      </div>
+      <main>
+        <div class="left">
+          <fw-design-form .doc=${this.doc} .units=${this.units} .errors=${this.errors} @field-input=${this.fieldInput}></fw-design-form>
+        </div>
+        <div class="middle">
+          <div class="viewbar">
+            <fieldset>
+              <legend>Float</legend>
+              <label><input type="radio" name="pose" .checked=${this.view.pose === 'rest'} @change=${() => this.setView({ pose: 'rest' })} /> resting on its pin</label>
+              <label><input type="radio" name="pose" .checked=${this.view.pose === 'seal'} @change=${() => this.setView({ pose: 'seal' })} /> shut against the nozzle</label>
+            </fieldset>
+            <label><input type="checkbox" name="section" .checked=${this.view.section} @change=${(e: Event) => this.setView({ section: (e.target as HTMLInputElement).checked })} /> cut open</label>
+            <label><input type="checkbox" name="exploded" .checked=${this.view.exploded} @change=${(e: Event) => this.setView({ exploded: (e.target as HTMLInputElement).checked })} /> parts apart</label>
+            <label><input type="checkbox" name="water" .checked=${this.view.water} @change=${(e: Event) => this.setView({ water: (e.target as HTMLInputElement).checked })} /> water line</label>
+            <button @click=${() => this.viewer?.resetView()}>Reset view</button>
+          </div>
+          <fw-valve-view .meshes=${this.meshes} .transforms=${this.transforms} .sizing=${good} .options=${this.view} .buildId=${this.meshBuildId} @preview-rendered=${this.previewRendered}></fw-valve-view>
+          <fw-push-plot .sizing=${good} .units=${this.units}></fw-push-plot>
+        </div>
+        <div class="right">
+          <fw-results .result=${this.result} .lastGood=${good} .units=${this.units} .stale=${Object.keys(this.errors).length > 0} @apply-way-out=${this.applyWayOut}></fw-results>
+          <fw-file-bar .disabled=${!good} .busy=${this.busy} @export-request=${this.exportRequest} @import-file=${this.importFile} @share-link=${this.shareLink}></fw-file-bar>
+        </div>
+      </main>
+      <fw-cautions></fw-cautions>
+    `;
+  }
+}
+
+declare global {
+  interface HTMLElementTagNameMap {
+    'fw-app': FwApp;
+  }
+}

@@ -1,0 +1,141 @@
+import { LitElement, css, html, nothing } from 'lit';
+import { customElement, property } from 'lit/decorators.js';
+import { CONSTRAINT_TEXT } from '../../generator/sizing/layout/constraint-text.ts';
+import type { SizingResult, SizingSuccess, WayOut } from '../../generator/sizing/result.ts';
+import * as f from '../lib/format.ts';
+import type { UnitSystem } from '../lib/units-system.ts';
+import { shared } from './shared-styles.ts';
+
+/** Document paths in plain words, for ways out. */
+const FIELD_WORDS: Record<string, string> = {
+  'level.target': 'water depth to hold',
+  'supply.headMax': 'tank full height',
+  'nozzle.sealDiameter': 'nozzle lip width',
+  'nozzle.orifice': 'nozzle hole',
+  'supply.tubeInnerDiameter': 'feed tube width',
+  'limits.maxOuterDiameter': 'widest valve that fits',
+};
+
+/**
+ * The sized valve in numbers, or why it cannot be sized with one-click ways out.
+ * Emits `apply-way-out` with the WayOut chosen.
+ */
+@customElement('fw-results')
+export class FwResults extends LitElement {
+  static override styles = [
+    shared,
+    css`
+      :host { display: block; }
+      section { background: var(--panel); border: 1px solid var(--line); border-radius: 8px; padding: 0.5rem 0.8rem; margin-bottom: 0.7rem; }
+      dl { display: grid; grid-template-columns: auto auto; gap: 0.1rem 0.8rem; margin: 0; }
+      dt { color: var(--muted); }
+      dd { margin: 0; font-variant-numeric: tabular-nums; text-align: right; }
+      .headline { display: flex; gap: 0.6rem; flex-wrap: wrap; }
+      .big { background: var(--leaf-soft); border-radius: 6px; padding: 0.3rem 0.6rem; }
+      .big b { display: block; font-size: 1.15rem; }
+      .warn { background: var(--warn-soft); color: #4d3400; border-left: 4px solid var(--warn); padding: 0.3rem 0.6rem; margin: 0.3rem 0; border-radius: 4px; }
+      .fail { background: var(--bad-soft); border-color: var(--bad); }
+      .fail h2 { color: var(--bad); }
+      .ways button { display: block; margin: 0.3rem 0; text-align: left; }
+      .stale { opacity: 0.55; }
+      ul { margin: 0.2rem 0; padding-left: 1.2rem; }
+    `,
+  ];
+
+  @property({ attribute: false }) result: SizingResult | null = null;
+  /** last design that sized, kept on screen while the current one fails */
+  @property({ attribute: false }) lastGood: SizingSuccess | null = null;
+  @property() units: UnitSystem = 'metric';
+  @property({ type: Boolean }) stale = false;
+
+  private wayOut(w: WayOut) {
+    this.dispatchEvent(new CustomEvent<WayOut>('apply-way-out', { detail: w, bubbles: true, composed: true }));
+  }
+
+  private renderSuccess(s: SizingSuccess) {
+    const u = this.units;
+    const same = Math.abs(s.inputs.headMaxM - s.inputs.headMinM) < 1e-9;
+    return html`
+      <section aria-label="Valve size">
+        <h2>Your valve</h2>
+        <div class="headline">
+          <div class="big" data-result="float">Float <b>${f.lengthMm(s.float.outerDiameterMm, u)} × ${f.lengthMm(s.float.heightMm, u)}</b></div>
+          <div class="big" data-result="housing">Housing <b>${f.lengthMm(s.housing.outerDiameterMm, u)} × ${f.lengthMm(s.housing.heightMm, u)}</b></div>
+          <div class="big" data-result="held-full">Holds water at <b>${f.lengthMm(s.levels.shutOffAtHeadMaxMm, u)}</b></div>
+        </div>
+      </section>
+      <section aria-label="Water levels">
+        <h2>Water levels</h2>
+        <dl>
+          <dt>Held with the tank full (${f.headM(s.inputs.headMaxM, u)})</dt><dd data-result="level-full">${f.lengthMm(s.levels.shutOffAtHeadMaxMm, u)}</dd>
+          ${same ? nothing : html`<dt>Held with the tank low (${f.headM(s.inputs.headMinM, u)})</dt><dd data-result="level-low">${f.lengthMm(s.levels.shutOffAtHeadMinMm, u)}</dd>`}
+          <dt>Float lifts off its pin at</dt><dd>${f.lengthMm(s.levels.liftOffMm, u)}</dd>
+          <dt>Pad first touches the nozzle at</dt><dd>${f.lengthMm(s.levels.firstTouchMm, u)}</dd>
+          <dt>Shallowest depth this float can hold</dt><dd>${f.lengthMm(s.levels.minimumReachableMm, u)}</dd>
+        </dl>
+      </section>
+      <section aria-label="Flow">
+        <h2>Refill</h2>
+        <dl>
+          <dt>Flow, tank full</dt><dd data-result="flow-full">${f.flowLph(s.flow.atHeadMaxLph, u)}</dd>
+          ${same ? nothing : html`<dt>Flow, tank low</dt><dd>${f.flowLph(s.flow.atHeadMinLph, u)}</dd>`}
+          ${s.flow.fillTimeAtHeadMaxMin !== null ? html`<dt>Refill time, tank full</dt><dd>${f.minutes(s.flow.fillTimeAtHeadMaxMin)}</dd>` : nothing}
+          ${s.flow.fillTimeAtHeadMinMin !== null && !same ? html`<dt>Refill time, tank low</dt><dd>${f.minutes(s.flow.fillTimeAtHeadMinMin)}</dd>` : nothing}
+          <dt>Push needed to shut, tank full</dt><dd>${f.forceN(s.closingForce.atHeadMaxN, u)}</dd>
+          <dt>Float's lift when under water</dt><dd>${f.forceN(s.float.availableForceN, u)} (${s.float.reserve.toFixed(2)}×)</dd>
+          <dt>Drain slots at the bottom</dt><dd>${s.drain.notchCount}, ${f.areaMm2(s.drain.providedAreaMm2, u)} (needs ${f.areaMm2(s.drain.requiredAreaMm2, u)})</dd>
+          <dt>Air vents on top</dt><dd>${s.vents.count} × ${f.printMm(s.vents.diameterMm)}</dd>
+          ${s.closingForce.fromCalibration ? html`<dt>Lip width from your bench test</dt><dd>${f.printMm(s.closingForce.equivalentSealDiameterMm, 2)}</dd>` : nothing}
+        </dl>
+      </section>
+      <section aria-label="Holding down">
+        <h2>Holding it down</h2>
+        <p data-result="ballast">${s.holdDown.ballastSteelG > 0
+          ? html`If the container floods the float lifts ${f.forceN(s.holdDown.upliftN, u)}: pin the foot down or add <b>${f.massG(s.holdDown.ballastSteelG, u)}</b> of steel.`
+          : 'The valve is heavy enough to stay put if the container floods.'}</p>
+      </section>
+      <section aria-label="Plastic">
+        <h2>Plastic (${s.inputs.materialName})</h2>
+        <dl>
+          <dt>Housing</dt><dd>${f.massG(s.mass.byPart.housing, u, 1)}</dd>
+          <dt>Float</dt><dd>${f.massG(s.mass.byPart.float, u, 1)}</dd>
+          <dt>Nozzle</dt><dd>${f.massG(s.mass.byPart.nozzle, u, 1)}</dd>
+          <dt>Pin</dt><dd>${f.massG(s.mass.byPart.pin, u, 1)}</dd>
+          <dt>All parts</dt><dd data-result="mass-total"><b>${f.massG(s.mass.totalG, u)}</b>, ${s.mass.filamentM.toFixed(1)} m of filament</dd>
+        </dl>
+      </section>
+      <section aria-label="What set the size">
+        <h2>What set the size</h2>
+        <ul>${s.boundBy.map((b) => html`<li>${(CONSTRAINT_TEXT as Record<string, string>)[b] ?? b}</li>`)}</ul>
+        ${s.warnings.map((w) => html`<div class="warn" data-warning=${w.code}>${w.message}</div>`)}
+      </section>`;
+  }
+
+  override render() {
+    const r = this.result;
+    const failure = r && !r.ok ? r : null;
+    const shown = r && r.ok ? r : this.lastGood;
+    return html`
+      ${failure
+        ? html`<section class="fail" role="alert" aria-label="Cannot size">
+            <h2>No valve fits these numbers</h2>
+            <ul>${failure.reasons.map((x) => html`<li>${x.message}</li>`)}</ul>
+            ${failure.waysOut.length
+              ? html`<div class="ways"><p>Any one of these would work:</p>
+                  ${failure.waysOut.map(
+                    (w) => html`<button data-way-out=${w.field} @click=${() => this.wayOut(w)}>Set ${FIELD_WORDS[w.field] ?? w.field} to ${w.value}: ${w.message}</button>`,
+                  )}</div>`
+              : nothing}
+            ${shown ? html`<p>Below: the last design that worked.</p>` : nothing}
+          </section>`
+        : nothing}
+      <div class=${failure || this.stale ? 'stale' : ''}>${shown ? this.renderSuccess(shown) : html`<p>Sizing…</p>`}</div>
+    `;
+  }
+}
+
+declare global {
+  interface HTMLElementTagNameMap {
+    'fw-results': FwResults;
+  }
+}

@@ -1,0 +1,217 @@
+import { LitElement, css, html } from 'lit';
+import { customElement, property, query } from 'lit/decorators.js';
+import * as THREE from 'three';
+import { OrbitControls } from 'three/examples/jsm/controls/OrbitControls.js';
+import type { SizingSuccess } from '../../generator/sizing/result.ts';
+import { PART_NAMES, type FloatPose, type PartMeshes, type PartName, type PartTransforms } from '../worker/parts-contract.ts';
+import { shared } from './shared-styles.ts';
+
+export interface ViewOptions {
+  pose: FloatPose;
+  section: boolean;
+  exploded: boolean;
+  water: boolean;
+}
+
+const COLOURS: Record<PartName, number> = { housing: 0xcdbb98, float: 0xe07b39, nozzle: 0x4f7b9a, pin: 0x6d8f4e };
+
+/**
+ * The valve in 3D, as mounted: orbit (drag), zoom (wheel), a cut through the
+ * axis, the water surface at the level held with the tank full, the float at
+ * rest on its pin or shut against the nozzle, and the parts pulled apart.
+ * Fires `preview-rendered` after drawing a new set of parts.
+ */
+@customElement('fw-valve-view')
+export class FwValveView extends LitElement {
+  static override styles = [
+    shared,
+    css`
+      :host { display: block; position: relative; }
+      .stage { width: 100%; height: 100%; min-height: 300px; border-radius: 8px; overflow: hidden; background: linear-gradient(#eef3f1, #dfe7e2); border: 1px solid var(--line); }
+      canvas { display: block; width: 100%; height: 100%; }
+      .legend { position: absolute; left: 0.6rem; bottom: 0.5rem; font-size: 0.78rem; color: #333; background: #ffffffcc; padding: 0.15rem 0.45rem; border-radius: 4px; }
+      .legend span { display: inline-block; width: 0.7rem; height: 0.7rem; border-radius: 2px; margin: 0 0.2rem 0 0.5rem; vertical-align: -1px; }
+      .fallback { padding: 1rem; }
+    `,
+  ];
+
+  @property({ attribute: false }) meshes: PartMeshes | null = null;
+  @property({ attribute: false }) transforms: { rest: PartTransforms; seal: PartTransforms } | null = null;
+  @property({ attribute: false }) sizing: SizingSuccess | null = null;
+  @property({ attribute: false }) options: ViewOptions = { pose: 'rest', section: true, exploded: false, water: true };
+  /** id of the build the meshes came from (reported with `preview-rendered`) */
+  @property({ type: Number }) buildId = 0;
+
+  @query('.stage') private stage!: HTMLDivElement;
+
+  private renderer: THREE.WebGLRenderer | null = null;
+  private scene = new THREE.Scene();
+  private camera = new THREE.PerspectiveCamera(35, 1, 1, 5000);
+  private controls: OrbitControls | null = null;
+  private parts = new Map<PartName, THREE.Mesh>();
+  private water: THREE.Mesh | null = null;
+  private cut = new THREE.Plane(new THREE.Vector3(0, 1, 0), 0);
+  private framed = false;
+  private resizeObserver: ResizeObserver | null = null;
+  private webglError = '';
+
+  override firstUpdated(): void {
+    try {
+      this.renderer = new THREE.WebGLRenderer({ antialias: true, alpha: true, preserveDrawingBuffer: true });
+    } catch (error) {
+      this.webglError = error instanceof Error ? error.message : String(error);
+      this.requestUpdate();
+      return;
+    }
+    this.renderer.localClippingEnabled = true;
+    this.renderer.setPixelRatio(Math.min(2, globalThis.devicePixelRatio || 1));
+    this.stage.append(this.renderer.domElement);
+    this.renderer.domElement.setAttribute('aria-label', '3D view of the valve: drag to turn, wheel to zoom');
+    this.renderer.domElement.setAttribute('role', 'img');
+    this.camera.up.set(0, 0, 1);
+    this.scene.add(new THREE.HemisphereLight(0xffffff, 0x8a8270, 1.6));
+    const sun = new THREE.DirectionalLight(0xffffff, 1.6);
+    sun.position.set(-150, -250, 300);
+    this.scene.add(sun);
+    this.controls = new OrbitControls(this.camera, this.renderer.domElement);
+    this.controls.addEventListener('change', () => this.draw());
+    this.resizeObserver = new ResizeObserver(() => this.resize());
+    this.resizeObserver.observe(this.stage);
+    this.resize();
+    this.syncScene(true);
+  }
+
+  override disconnectedCallback(): void {
+    super.disconnectedCallback();
+    this.resizeObserver?.disconnect();
+    this.controls?.dispose();
+    this.renderer?.dispose();
+  }
+
+  override updated(changed: Map<string, unknown>): void {
+    if (!this.renderer) return;
+    this.syncScene(changed.has('meshes'));
+  }
+
+  private resize(): void {
+    if (!this.renderer) return;
+    const w = this.stage.clientWidth || 400;
+    const h = this.stage.clientHeight || 300;
+    this.renderer.setSize(w, h, false);
+    this.camera.aspect = w / h;
+    this.camera.updateProjectionMatrix();
+    this.draw();
+  }
+
+  private draw(): void {
+    this.renderer?.render(this.scene, this.camera);
+  }
+
+  private syncScene(newMeshes: boolean): void {
+    if (newMeshes && this.meshes) {
+      for (const name of PART_NAMES) {
+        const old = this.parts.get(name);
+        if (old) {
+          this.scene.remove(old);
+          old.geometry.dispose();
+          (old.material as THREE.Material).dispose();
+        }
+        const m = this.meshes[name];
+        const geometry = new THREE.BufferGeometry();
+        geometry.setAttribute('position', new THREE.BufferAttribute(m.positions, 3));
+        geometry.setIndex(new THREE.BufferAttribute(m.indices, 1));
+        geometry.computeVertexNormals();
+        const material = new THREE.MeshStandardMaterial({ color: COLOURS[name], roughness: 0.75, metalness: 0.02, flatShading: true, side: THREE.DoubleSide });
+        const mesh = new THREE.Mesh(geometry, material);
+        mesh.matrixAutoUpdate = false;
+        mesh.name = name;
+        this.parts.set(name, mesh);
+        this.scene.add(mesh);
+      }
+    }
+    this.placeParts();
+    this.placeWater();
+    if (newMeshes && this.meshes && !this.framed) this.frame();
+    this.draw();
+    if (newMeshes && this.meshes) {
+      this.dispatchEvent(new CustomEvent('preview-rendered', { detail: { buildId: this.buildId, at: performance.now() }, bubbles: true, composed: true }));
+    }
+  }
+
+  /** Offsets that pull the parts apart, in mm (float sideways, nozzle up, pin out along its axis). */
+  private explodeOffset(name: PartName): THREE.Vector3 {
+    const s = this.sizing;
+    if (!this.options.exploded || !s) return new THREE.Vector3();
+    const foot = s.housing.footDiameterMm;
+    switch (name) {
+      case 'float': return new THREE.Vector3(-foot * 0.95, 0, 0);
+      case 'nozzle': return new THREE.Vector3(0, 0, Math.max(30, s.housing.heightMm * 0.45));
+      case 'pin': return new THREE.Vector3(foot * 0.95, 0, 0);
+      default: return new THREE.Vector3();
+    }
+  }
+
+  private placeParts(): void {
+    const t = this.transforms?.[this.options.pose];
+    const planes = this.options.section ? [this.cut] : [];
+    for (const [name, mesh] of this.parts) {
+      const m = new THREE.Matrix4();
+      if (t) m.fromArray(t[name]);
+      const off = this.explodeOffset(name);
+      mesh.matrix.copy(new THREE.Matrix4().makeTranslation(off.x, off.y, off.z).multiply(m));
+      mesh.matrixWorldNeedsUpdate = true;
+      const material = mesh.material as THREE.MeshStandardMaterial;
+      material.clippingPlanes = planes;
+      material.needsUpdate = true;
+    }
+  }
+
+  private placeWater(): void {
+    const s = this.sizing;
+    if (!s) return;
+    if (!this.water) {
+      const material = new THREE.MeshStandardMaterial({ color: 0x3d8fd1, transparent: true, opacity: 0.35, side: THREE.DoubleSide, depthWrite: false });
+      this.water = new THREE.Mesh(new THREE.PlaneGeometry(1, 1), material);
+      this.water.renderOrder = 2;
+      this.water.name = 'water';
+      this.scene.add(this.water);
+    }
+    const size = s.housing.footDiameterMm * 1.6;
+    this.water.scale.set(size, size, 1);
+    this.water.position.set(0, 0, s.levels.shutOffAtHeadMaxMm);
+    this.water.visible = this.options.water;
+  }
+
+  private frame(): void {
+    const s = this.sizing;
+    if (!s || !this.controls) return;
+    const h = s.housing.heightMm;
+    const d = Math.max(s.housing.footDiameterMm, h);
+    const target = new THREE.Vector3(0, 0, h * 0.5);
+    this.controls.target.copy(target);
+    this.camera.position.set(d * 1.1, -d * 2.1, h * 0.5 + d * 0.9);
+    this.camera.near = d / 50;
+    this.camera.far = d * 50;
+    this.camera.updateProjectionMatrix();
+    this.controls.update();
+    this.framed = true;
+  }
+
+  /** Put the camera back to its first view. */
+  resetView(): void {
+    this.framed = false;
+    this.frame();
+    this.draw();
+  }
+
+  override render() {
+    return html`<div class="stage">${this.webglError ? html`<p class="fallback">This browser could not start 3D drawing (${this.webglError}). The sizes, plot and downloads still work.</p>` : ''}</div>
+      <div class="legend" aria-hidden="true"><span style="background:#cdbb98"></span>housing<span style="background:#e07b39"></span>float<span style="background:#4f7b9a"></span>nozzle<span style="background:#6d8f4e"></span>pin<span style="background:#3d8fd1;opacity:.6"></span>water held (tank full)</div>`;
+  }
+}
+
+declare global {
+  interface HTMLElementTagNameMap {
+    'fw-valve-view': FwValveView;
+  }
+}

@@ -1,0 +1,56 @@
+/** The workbench's input fields, grouped the way a grower thinks about the job. */
+import type { FieldDef } from './units-system.ts';
+
+export interface FieldGroup {
+  id: string;
+  title: string;
+  intro?: string;
+  fields: FieldDef[];
+}
+
+export const FIELD_GROUPS: readonly FieldGroup[] = [
+  {
+    id: 'tank',
+    title: 'Tank and feed line',
+    intro: 'Heights of the tank water surface above the valve nozzle.',
+    fields: [
+      { path: 'supply.headMax', label: 'Tank full: water height above the valve', kind: 'head', metric: 'm', imperial: 'ft', hint: 'also takes kPa or psi' },
+      { path: 'supply.headMin', label: 'Tank low: water height above the valve', kind: 'head', metric: 'm', imperial: 'ft', optional: true, hint: 'blank: same as full' },
+      { path: 'supply.tubeInnerDiameter', label: 'Feed tube, inside width', kind: 'length', metric: 'mm', imperial: 'in' },
+      { path: 'supply.tubeLength', label: 'Feed tube, length', kind: 'length', metric: 'm', imperial: 'ft' },
+    ],
+  },
+  {
+    id: 'container',
+    title: 'Container',
+    fields: [
+      { path: 'level.target', label: 'Water depth to hold', kind: 'length', metric: 'mm', imperial: 'in', hint: 'above the container floor' },
+      { path: 'limits.maxOuterDiameter', label: 'Widest valve that fits', kind: 'length', metric: 'mm', imperial: 'in', optional: true },
+      { path: 'reservoir.area', label: 'Water surface area', kind: 'area', metric: 'm2', imperial: 'ft2', optional: true, hint: 'for the refill time' },
+      { path: 'reservoir.rise', label: 'Refill depth', kind: 'length', metric: 'mm', imperial: 'in', optional: true, hint: 'for the refill time' },
+    ],
+  },
+  {
+    id: 'print',
+    title: 'Printing',
+    intro: 'Print settings stay in millimetres, as your slicer uses them.',
+    fields: [
+      { path: 'print.wall', label: 'Housing wall', kind: 'length', metric: 'mm', imperial: 'mm', optional: true },
+      { path: 'print.lineWidth', label: 'Line width', kind: 'length', metric: 'mm', imperial: 'mm', optional: true },
+    ],
+  },
+  {
+    id: 'nozzle',
+    title: 'Nozzle and seal pad',
+    fields: [
+      { path: 'nozzle.orifice', label: 'Nozzle hole', kind: 'length', metric: 'mm', imperial: 'mm', optional: true },
+      { path: 'nozzle.sealDiameter', label: 'Nozzle lip, outside width', kind: 'length', metric: 'mm', imperial: 'mm', optional: true },
+      { path: 'seal.padThickness', label: 'Pad thickness', kind: 'length', metric: 'mm', imperial: 'mm', optional: true },
+      { path: 'seal.indentation', label: 'Pad squeeze when shut', kind: 'length', metric: 'mm', imperial: 'mm', optional: true },
+      { path: 'seal.preload', label: 'Push to dent the pad', kind: 'force', metric: 'N', imperial: 'ozf', optional: true },
+      { path: 'reserve', label: 'Spare lift (times the push needed)', kind: 'number', metric: '', imperial: '', optional: true },
+    ],
+  },
+];
+
+export const ALL_FIELDS: readonly FieldDef[] = FIELD_GROUPS.flatMap((g) => g.fields);

@@ -1,0 +1,2 @@
+/** Entry point of the workbench page. */
+import './components/fw-app.ts';
