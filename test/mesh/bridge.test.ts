@@ -1,6 +1,6 @@
 /**
  * Loader, geom3 <-> mesh <-> Manifold bridges, booleans and measurements.
- * Expected volumes from elementary geometry (cube a^3; overlap of two cubes;
+ * Sources: expected volumes from elementary geometry (cube a^3; overlap of two cubes;
  * prism over a regular N-gon (N/2) r^2 sin(2 pi / N) h). Closedness is
  * checked with manifold-3d itself (an independent library) besides our own
  * edge count; JSCAD's measureVolume is the second opinion on volumes.
@@ -50,7 +50,7 @@ describe('geom3ToMesh', () => {
     expect(triangleCount(mesh)).toBe(12);
     expect(meshVolumeMm3(mesh)).toBeCloseTo(1000, 9);
     expect(countEdgeUses(mesh)).toEqual({
-      edges: 18, // Euler: V - E + F = 8 - 18 + 12 = 2
+      edges: 18, // source: Euler's polyhedron formula V - E + F = 8 - 18 + 12 = 2
       boundaryEdges: 0,
       overusedEdges: 0,
       inconsistentlyOriented: 0,

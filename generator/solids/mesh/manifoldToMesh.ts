@@ -3,7 +3,8 @@
  *
  * Only positions are kept. If manifold-3d split a vertex across property
  * seams it lists the copies in its merge vectors; they are folded back and
- * unused vertices dropped, so every position appears once.
+ * unused vertices dropped, so every position appears once. Throws if the
+ * Manifold carries an error status (it would read back empty).
  */
 import type { Manifold } from 'manifold-3d';
 import type { IndexedMesh } from './types.ts';
@@ -14,8 +15,11 @@ export interface ManifoldToMeshOptions {
 }
 
 export function manifoldToMesh(manifold: Manifold, options: ManifoldToMeshOptions = {}): IndexedMesh {
-  const mesh = manifold.getMesh();
+  // An errored Manifold reads back as an empty mesh; say why instead.
+  const status = manifold.status();
+  const mesh = status === 'NoError' ? manifold.getMesh() : undefined;
   if (options.dispose) manifold.delete();
+  if (!mesh) throw new Error(`manifoldToMesh: the Manifold carries manifold-3d status ${status}, so it has no mesh`);
   const { numProp, vertProperties, triVerts, mergeFromVert, mergeToVert } = mesh;
   const vertexCount = vertProperties.length / numProp;
 
