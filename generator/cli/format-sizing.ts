@@ -1,0 +1,216 @@
+/**
+ * A sizing result as plain text: sections of label / value / unit rows,
+ * aligned for a terminal. The build sheet and the plan report reuse the rows.
+ */
+import { cautionLines } from '../doc/cautions.ts';
+import type { FieldError } from '../doc/fields.ts';
+import { CONSTRAINT_TEXT } from '../sizing/layout/constraint-text.ts';
+import type { SizingFailure, SizingSuccess, Warning } from '../sizing/result.ts';
+
+export interface Row {
+  label: string;
+  /** already formatted */
+  value: string;
+  unit: string;
+}
+
+export interface Section {
+  title: string;
+  rows: Row[];
+}
+
+/** Fixed decimals, with "-" for a missing or non-finite value. */
+export function fixed(value: number | null | undefined, decimals: number): string {
+  if (value === null || value === undefined || !Number.isFinite(value)) return '-';
+  const text = value.toFixed(decimals);
+  return text === `-${(0).toFixed(decimals)}` ? (0).toFixed(decimals) : text;
+}
+
+const row = (label: string, value: string, unit = ''): Row => ({ label, value, unit });
+
+/** The result as titled sections of rows (closing force, float, housing, nozzle, pin, levels, flow, drain, hold-down, tilt, mass). */
+export function sizingSections(result: SizingSuccess): Section[] {
+  const { closingForce: cf, pressure, float: fl, housing, nozzle, pin, levels, flow, drain, vents, holdDown, tilt, mass } = result;
+  const headMaxM = result.inputs.headMaxM;
+  const headMinM = result.inputs.headMinM;
+  const halfIndentMm = (result.inputs.indentationM * 1e3) / 2;
+  const fill = (minutes: number | null) => (minutes === null ? [] : [minutes]);
+  return [
+    {
+      title: 'Closing force (float on pad)',
+      rows: [
+        row(`at highest head ${fixed(headMaxM, 2)} m (${fixed(pressure.atHeadMaxKPa, 1)} kPa)`, fixed(cf.atHeadMaxN, 3), 'N'),
+        row(`at lowest head ${fixed(headMinM, 2)} m (${fixed(pressure.atHeadMinKPa, 1)} kPa)`, fixed(cf.atHeadMinN, 3), 'N'),
+        row('pad preload', fixed(cf.preloadN, 3), 'N'),
+        row(
+          cf.fromCalibration ? 'seal area (bench calibration fit)' : 'seal area (nozzle lip)',
+          `${fixed(cf.sealAreaMm2, 1)} (d ${fixed(cf.equivalentSealDiameterMm, 2)} mm)`,
+          'mm2',
+        ),
+      ],
+    },
+    {
+      title: 'Float',
+      rows: [
+        row('outer diameter', fixed(fl.outerDiameterMm, 1), 'mm'),
+        row('height (straight side)', `${fixed(fl.heightMm, 1)} (${fixed(fl.cylinderHeightMm, 1)})`, 'mm'),
+        row('displaced volume, fully submerged', fixed(fl.volumeMm3 / 1000, 1), 'cm3'),
+        row('mass with pad', fixed(fl.massG, 1), 'g'),
+        row('lift when fully submerged', fixed(fl.availableForceN, 3), 'N'),
+        row('reserve (lift / force at highest head)', fixed(fl.reserve, 2), 'x'),
+        row('depth at seal, highest / lowest head', `${fixed(fl.sealDepthAtHeadMaxMm, 1)} / ${fixed(fl.sealDepthAtHeadMinMm, 1)}`, 'mm'),
+      ],
+    },
+    {
+      title: 'Housing',
+      rows: [
+        row('bore', fixed(housing.boreMm, 1), 'mm'),
+        row('outer diameter (foot)', `${fixed(housing.outerDiameterMm, 1)} (${fixed(housing.footDiameterMm, 1)})`, 'mm'),
+        row('height', fixed(housing.heightMm, 1), 'mm'),
+        row('wall', fixed(housing.wallMm, 2), 'mm'),
+        row('mass', fixed(housing.massG, 1), 'g'),
+      ],
+    },
+    {
+      title: 'Nozzle and pin',
+      rows: [
+        row('nozzle tip above the base', fixed(nozzle.tipHeightMm, 1), 'mm'),
+        row('travel (at least)', `${fixed(nozzle.travelMm, 2)} (${fixed(nozzle.minimumTravelMm, 2)})`, 'mm'),
+        row('orifice / lip diameter', `${fixed(nozzle.orificeMm, 2)} / ${fixed(nozzle.sealDiameterMm, 2)}`, 'mm'),
+        row('retainer pin top above the base', fixed(pin.topHeightMm, 1), 'mm'),
+      ],
+    },
+    {
+      title: 'Levels (water depth above the container floor)',
+      rows: [
+        row('target', fixed(levels.targetMm, 1), 'mm'),
+        row('shuts off at highest head', fixed(levels.shutOffAtHeadMaxMm, 1), 'mm'),
+        row('shuts off at lowest head', fixed(levels.shutOffAtHeadMinMm, 1), 'mm'),
+        row('float lifts off the pin', fixed(levels.liftOffMm, 1), 'mm'),
+        row('pad first touches the lip', fixed(levels.firstTouchMm, 1), 'mm'),
+        row('lowest target this float can reach', fixed(levels.minimumReachableMm, 1), 'mm'),
+      ],
+    },
+    {
+      title: 'Flow with the valve wide open',
+      rows: [
+        row(`at highest head (Re ${fixed(flow.reynoldsAtHeadMax, 0)}, ${flow.regimeAtHeadMax})`, fixed(flow.atHeadMaxLph, 1), 'L/h'),
+        row(`at lowest head (Re ${fixed(flow.reynoldsAtHeadMin, 0)})`, fixed(flow.atHeadMinLph, 1), 'L/h'),
+        ...fill(flow.fillTimeAtHeadMaxMin).map((m) => row('time to fill the reservoir rise, highest head', fixed(m, 1), 'min')),
+        ...fill(flow.fillTimeAtHeadMinMin).map((m) => row('time to fill the reservoir rise, lowest head', fixed(m, 1), 'min')),
+      ],
+    },
+    {
+      title: 'Drain and vents',
+      rows: [
+        row('drain area needed', fixed(drain.requiredAreaMm2, 1), 'mm2'),
+        row(`drain area provided (${drain.notchCount} notches)`, fixed(drain.providedAreaMm2, 1), 'mm2'),
+        row(`vents (${vents.count} x ${fixed(vents.diameterMm, 1)} mm)`, fixed(vents.areaMm2, 1), 'mm2'),
+      ],
+    },
+    {
+      title: 'Hold-down (container flooded)',
+      rows: [
+        row('float uplift', fixed(holdDown.upliftN, 3), 'N'),
+        row('housing, nozzle and pin weight in water', fixed(holdDown.netWeightN, 3), 'N'),
+        row('still needed (1.5 x uplift - weight)', fixed(holdDown.neededN, 3), 'N'),
+        row('or steel ballast', fixed(holdDown.ballastSteelG, 0), 'g'),
+      ],
+    },
+    {
+      title: 'Tilt',
+      rows: [
+        row('largest float tilt in the bore', fixed(tilt.maxAngleDeg, 1), 'deg'),
+        row(`gap at the lip when tilted (limit ${fixed(halfIndentMm, 2)})`, fixed(tilt.lipGapMm, 2), 'mm'),
+      ],
+    },
+    {
+      title: 'Mass and filament',
+      rows: [
+        row(`total (${result.inputs.materialName})`, fixed(mass.totalG, 1), 'g'),
+        row('filament (1.75 mm)', fixed(mass.filamentM, 1), 'm'),
+        row('housing / float / nozzle / pin', [mass.byPart.housing, mass.byPart.float, mass.byPart.nozzle, mass.byPart.pin].map((g) => fixed(g, 1)).join(' / '), 'g'),
+        row('seal pad (not printed)', fixed(mass.byPart.pad, 2), 'g'),
+      ],
+    },
+  ];
+}
+
+/** Sections as aligned text: a title line, then label, right-aligned value, unit. */
+export function renderSections(sections: Section[]): string {
+  const rows = sections.flatMap((s) => s.rows);
+  const labelWidth = Math.max(0, ...rows.map((r) => r.label.length));
+  const valueWidth = Math.max(0, ...rows.map((r) => r.value.length));
+  const out: string[] = [];
+  for (const s of sections) {
+    out.push(s.title);
+    for (const r of s.rows) out.push(`  ${r.label.padEnd(labelWidth)}  ${r.value.padStart(valueWidth)}${r.unit ? ` ${r.unit}` : ''}`.trimEnd());
+    out.push('');
+  }
+  return out.join('\n');
+}
+
+/** Wrap a sentence to `width` columns with a hanging indent. */
+export function wrap(text: string, width = 78, indent = '    '): string {
+  const words = text.split(/\s+/).filter(Boolean);
+  const lines: string[] = [];
+  let line = '';
+  for (const word of words) {
+    if (line && line.length + 1 + word.length > width) {
+      lines.push(line);
+      line = indent + word;
+    } else line = line ? `${line} ${word}` : word;
+  }
+  if (line) lines.push(line);
+  return lines.join('\n');
+}
+
+/** The constraints that bound the design, in words. */
+export function boundByLines(boundBy: readonly string[]): string[] {
+  const text = CONSTRAINT_TEXT as Record<string, string>;
+  return boundBy.map((code) => `  - ${wrap(`${code}: ${text[code] ?? code}`, 76)}`);
+}
+
+function warningLines(warnings: readonly Warning[]): string[] {
+  return warnings.map((w) => `  - ${wrap(w.message, 76)}`);
+}
+
+/** The cautions, for the end of every result. */
+export function formatCautions(): string {
+  return ['Cautions', ...cautionLines().map((line) => `  - ${wrap(line, 76)}`), ''].join('\n');
+}
+
+/** A sized design as text: heading, tables, what bound it, warnings, then the cautions. */
+export function formatSizingText(result: SizingSuccess, heading?: string): string {
+  const parts = [heading ? `${heading}\n` : '', renderSections(sizingSections(result))];
+  parts.push(['Bound by', ...boundByLines(result.boundBy), ''].join('\n'));
+  parts.push(['Warnings', ...(result.warnings.length ? warningLines(result.warnings) : ['  none']), ''].join('\n'));
+  parts.push(formatCautions());
+  return parts.join('\n');
+}
+
+/** A design no size fits: why, and what would make it work. */
+export function formatFailureText(failure: SizingFailure): string {
+  const lines = ['No valve size works for this design.', '', 'Why'];
+  lines.push(...failure.reasons.map((r) => `  - ${wrap(r.message, 76)}`));
+  lines.push('', 'Ways out (change one of these)');
+  if (failure.waysOut.length === 0) lines.push('  - none found within the limits');
+  lines.push(...failure.waysOut.map((w) => `  - ${wrap(`${w.field} = ${w.value}: ${w.message}`, 76)}`));
+  if (failure.warnings.length) lines.push('', 'Warnings', ...warningLines(failure.warnings));
+  lines.push('', formatCautions());
+  return lines.join('\n');
+}
+
+/** Input problems, one per line, each with its field (and the flag that sets it, when given). */
+export function formatFieldErrors(
+  errors: readonly FieldError[],
+  flagFor: (field: string) => string | undefined = () => undefined,
+  subject = 'the design',
+): string {
+  const heading = errors.length === 1 ? `There is a problem with ${subject}:` : `There are ${errors.length} problems with ${subject}:`;
+  const lines = errors.map((e) => {
+    const flag = flagFor(e.field);
+    return `  - ${wrap(`${e.field}${flag ? ` (${flag})` : ''}: ${e.message}`, 76)}`;
+  });
+  return [heading, ...lines, ''].join('\n');
+}

@@ -1,0 +1,236 @@
+// The `size` command, run as a grower runs it: `node generator/cli/bin.js size ...`.
+// Outside checks: the closing force at the highest head against F = rho g H (pi/4) d_s^2 + F_pre
+// (hydrostatics, p A; g = 9.80665 m/s2, NIST SP 330; water 998.2 kg/m3, CRC Handbook, from memory);
+// the 10 ft head cap, 1 ft = 0.3048 m (NIST SP 811). The cautions are the shared project text.
+import { execFile } from 'node:child_process';
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { CAUTIONS } from '../../generator/doc/cautions.ts';
+import { reportFault, runCli } from '../../generator/cli/main.ts';
+import type { Io } from '../../generator/cli/command.ts';
+
+const ROOT = fileURLToPath(new URL('../..', import.meta.url));
+const BIN = join(ROOT, 'generator/cli/bin.js');
+const PRESETS = ['rooftop-tubs', 'greenhouse-trays', 'bucket-tote'];
+
+interface Run {
+  status: number | null;
+  stdout: string;
+  stderr: string;
+}
+/** Run the command line in a child process (several can run at once). */
+function floatwright(...args: string[]): Promise<Run> {
+  return new Promise((resolve) => {
+    execFile(process.execPath, [BIN, ...args], { cwd: ROOT, encoding: 'utf8', timeout: 60_000 }, (error, stdout, stderr) => {
+      const status = error ? (typeof error.code === 'number' ? error.code : null) : 0;
+      resolve({ status, stdout, stderr });
+    });
+  });
+}
+function json(run: Run): any {
+  return JSON.parse(run.stdout);
+}
+const flat = (text: string) => text.replace(/\s+/g, ' ');
+
+/** Every field the issue asks the JSON to carry (paths into SizingSuccess). */
+const REQUIRED_NUMBERS = [
+  'closingForce.atHeadMaxN', 'closingForce.atHeadMinN',
+  'float.outerDiameterMm', 'float.heightMm', 'float.massG', 'float.volumeMm3', 'float.availableForceN',
+  'housing.boreMm', 'housing.outerDiameterMm', 'housing.heightMm', 'housing.massG',
+  'nozzle.tipHeightMm', 'nozzle.travelMm',
+  'levels.shutOffAtHeadMaxMm', 'levels.shutOffAtHeadMinMm', 'levels.liftOffMm', 'levels.minimumReachableMm',
+  'flow.atHeadMaxLph', 'flow.atHeadMinLph', 'flow.reynoldsAtHeadMax',
+  'drain.requiredAreaMm2', 'drain.providedAreaMm2',
+  'holdDown.upliftN', 'holdDown.netWeightN', 'holdDown.ballastSteelG',
+  'tilt.maxAngleDeg', 'tilt.lipGapMm',
+];
+const at = (obj: any, path: string) => path.split('.').reduce((o, k) => (o == null ? undefined : o[k]), obj);
+
+describe('floatwright size --design PRESET --json', () => {
+  const runs = new Map<string, Run>();
+  beforeAll(async () => {
+    const done = await Promise.all(PRESETS.map((preset) => floatwright('size', '--design', `presets/${preset}.json`, '--json')));
+    PRESETS.forEach((preset, i) => runs.set(preset, done[i]));
+  });
+
+  it.each(PRESETS)('%s: exits 0 with every required field', (preset) => {
+    const run = runs.get(preset)!;
+    expect(run.stderr).toBe('');
+    expect(run.status).toBe(0);
+    const result = json(run);
+    expect(result.ok).toBe(true);
+    for (const path of REQUIRED_NUMBERS) {
+      expect(Number.isFinite(at(result, path)), path).toBe(true);
+    }
+    expect(Array.isArray(result.boundBy)).toBe(true);
+    expect(result.boundBy.length).toBeGreaterThan(0);
+    expect(Array.isArray(result.warnings)).toBe(true);
+    expect(result.levels.shutOffAtHeadMaxMm).toBeCloseTo(result.levels.targetMm, 6);
+  });
+
+  it('rooftop-tubs: closing force at 2.2 m equals rho g H (pi/4) d_s^2 + F_pre (hydrostatics, p A)', async () => {
+    const result = json(runs.get('rooftop-tubs')!);
+    const expected = 998.2 * 9.80665 * 2.2 * (Math.PI / 4) * 0.005 ** 2 + 0.1; // 0.5229 N
+    expect(result.closingForce.atHeadMaxN).toBeCloseTo(expected, 6);
+    expect(result.inputs.headMinM).toBe(1.6);
+    expect(result.inputs.materialName).toBe('PETG');
+  });
+});
+
+describe('input handling', () => {
+  it('flags override the file', async () => {
+    const result = json(await floatwright('size', '--design', 'presets/rooftop-tubs.json', '--level', '50mm', '--material', 'pla', '--head-min', '1.8 m', '--json'));
+    expect(result.ok).toBe(true);
+    expect(result.levels.targetMm).toBeCloseTo(50, 9);
+    expect(result.inputs.targetLevelM).toBe(0.05);
+    expect(result.inputs.materialName).toBe('PLA');
+    expect(result.inputs.headMinM).toBe(1.8);
+    expect(result.inputs.headMaxM).toBe(2.2); // from the file
+  });
+
+  it('flags alone size a valve; without --head-max they name the field', async () => {
+    const [sized, missing] = await Promise.all([
+      floatwright('size', '--head-max', '7ft', '--level', '1.5in', '--json'),
+      floatwright('size', '--level', '40mm', '--json'),
+    ]);
+    expect(sized.status).toBe(0);
+    expect(json(sized).inputs.headMaxM).toBeCloseTo(7 * 0.3048, 12); // 1 ft = 0.3048 m (NIST SP 811)
+    expect(missing.status).toBe(2);
+    expect(json(missing)).toEqual({ ok: false, errors: [expect.objectContaining({ field: 'supply.headMax' })] });
+  });
+
+  it('bad input exits 2 naming the field, the value and the range, with no stack trace', async () => {
+    const [asJson, asText] = await Promise.all([
+      floatwright('size', '--design', 'presets/greenhouse-trays.json', '--head-max', '11 ft', '--json'),
+      floatwright('size', '--head-max', '2m', '--level', 'deep'),
+    ]);
+    expect(asJson.status).toBe(2);
+    const body = json(asJson);
+    expect(body.ok).toBe(false);
+    expect(body.errors[0].field).toBe('supply.headMax');
+    expect(body.errors[0].message).toContain('"11 ft"');
+    expect(body.errors[0].message).toContain('3.05 m');
+    expect(body.errors[0].message).toContain('mains pressure');
+
+    expect(asText.status).toBe(2);
+    expect(asText.stdout).toBe('');
+    expect(asText.stderr).toContain('level.target (--level)');
+    expect(asText.stderr).toContain('"deep" is not a length');
+    expect(asText.stderr).not.toMatch(/\n\s+at /);
+  });
+
+  it('a missing, non-JSON or oversized file is a "design" error', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'floatwright-cli-'));
+    const notJson = join(dir, 'broken.json');
+    writeFileSync(notJson, '{ "supply": { "headMax": "2 m" ');
+    const big = join(dir, 'big.json');
+    writeFileSync(big, `{"notes": "${'x'.repeat(1_100_000)}"}`);
+    const cases: [string, string][] = [
+      [join(dir, 'absent.json'), 'cannot find'],
+      [notJson, 'not valid JSON'],
+      [big, 'at most 1 MB'],
+      [dir, 'not a file'],
+    ];
+    const runs = await Promise.all(cases.map(([path]) => floatwright('size', '--design', path, '--json')));
+    for (const [i, [path, text]] of cases.entries()) {
+      const run = runs[i];
+      expect(run.status, path).toBe(2);
+      const body = json(run);
+      expect(body.errors[0].field).toBe('design');
+      expect(body.errors[0].message).toContain(text);
+    }
+  });
+
+  it('an unknown key in the file is named, with a guess', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'floatwright-cli-'));
+    const file = join(dir, 'typo.json');
+    writeFileSync(file, JSON.stringify({ supply: { headMax: '1 m', headmin: '0.5 m' }, level: { target: '30 mm' } }));
+    const body = json(await floatwright('size', '--design', file, '--json'));
+    expect(body.errors).toEqual([{ field: 'supply.headmin', message: 'unknown key "headmin"; did you mean "headMin"?' }]);
+  });
+
+  it('an unknown option or a stray word exits 2 with a guess', async () => {
+    const [run, stray] = await Promise.all([
+      floatwright('size', '--design', 'presets/bucket-tote.json', '--materal', 'pla', '--json'),
+      floatwright('size', 'presets/bucket-tote.json'),
+    ]);
+    expect(run.status).toBe(2);
+    expect(json(run).errors[0]).toEqual({ field: '--materal', message: expect.stringContaining('did you mean --material?') });
+    expect(stray.status).toBe(2);
+  });
+});
+
+describe('infeasible designs', () => {
+  it('exit 2 with reasons and ways out, in JSON and in text', async () => {
+    // A 6 mm target at the 10 ft cap cannot be reached by any float within a 60 mm limit.
+    const args = ['size', '--head-max', '3m', '--level', '6mm', '--max-diameter', '60mm'];
+    const [asJson, asText] = await Promise.all([floatwright(...args, '--json'), floatwright(...args)]);
+    expect(asJson.status).toBe(2);
+    const body = json(asJson);
+    expect(body.ok).toBe(false);
+    expect(Array.isArray(body.reasons) && body.reasons.length > 0).toBe(true);
+    expect(Array.isArray(body.waysOut)).toBe(true);
+    expect(asText.status).toBe(2);
+    expect(asText.stderr).toContain('No valve size works');
+    expect(asText.stderr).toContain('Ways out');
+  });
+});
+
+describe('text output', () => {
+  it('shows the tables, what bound the size, the warnings and every caution', async () => {
+    const run = await floatwright('size', '--design', 'presets/rooftop-tubs.json');
+    expect(run.status).toBe(0);
+    for (const heading of ['Closing force', 'Float', 'Housing', 'Nozzle', 'Levels', 'Flow', 'Drain', 'Hold-down', 'Tilt', 'Mass', 'Bound by', 'Warnings', 'Cautions']) {
+      expect(run.stdout).toContain(heading);
+    }
+    const text = flat(run.stdout);
+    for (const caution of CAUTIONS) expect(text).toContain(flat(`${caution.title}: ${caution.text}`));
+    expect(text).toMatch(/shuts off at highest head 45\.0 mm/);
+  });
+
+  it('answers --help for the program and the command', async () => {
+    const [top, size, helpSize, typo] = await Promise.all([
+      floatwright('--help'),
+      floatwright('size', '--help'),
+      floatwright('help', 'size'),
+      floatwright('sise'),
+    ]);
+    expect(top.status).toBe(0);
+    expect(top.stdout).toContain('size');
+    expect(size.status).toBe(0);
+    for (const flag of ['--design', '--head-max', '--head-min', '--level', '--material', '--wall', '--orifice', '--seal-diameter', '--tube-diameter', '--tube-length', '--max-diameter', '--reserve', '--json']) {
+      expect(size.stdout).toContain(flag);
+    }
+    expect(helpSize.stdout).toBe(size.stdout);
+    expect(typo.status).toBe(2);
+  });
+});
+
+describe('faults inside floatwright', () => {
+  function capture(): Io & { text: () => string } {
+    let buffer = '';
+    return { out: (t) => (buffer += t), err: (t) => (buffer += t), text: () => buffer };
+  }
+
+  it('exit 1 with a one-line apology and how to report; the stack only with --debug', async () => {
+    const quiet = capture();
+    expect(reportFault(new Error('boom'), false, quiet)).toBe(1);
+    expect(quiet.text().trim().split('\n')).toHaveLength(1);
+    expect(quiet.text()).toContain('sorry');
+    expect(quiet.text()).toContain('report');
+    expect(quiet.text()).toContain('--debug');
+    const loud = capture();
+    reportFault(new Error('boom'), true, loud);
+    expect(loud.text()).toMatch(/\n\s+at /);
+  });
+
+  it('runs in-process and returns exit codes', async () => {
+    const io = capture();
+    expect(await runCli(['size', '--design', join(ROOT, 'presets/bucket-tote.json'), '--json'], io)).toBe(0);
+    expect(JSON.parse(io.text()).ok).toBe(true);
+    expect(await runCli(['--version'], capture())).toBe(0);
+  });
+});
