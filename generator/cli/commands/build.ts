@@ -1,0 +1,136 @@
+/**
+ * `floatwright build`: size one valve and write its printable files (one STL
+ * per part, a 3MF plate, the design document, the build sheet) into a folder.
+ */
+import { parseArgs } from 'node:util';
+import type { FieldError } from '../../doc/fields.ts';
+import { sizeDesign } from '../../sizing/size-design.ts';
+import { PartBuildError } from '../../solids/build-parts.ts';
+import { writeDesignFiles } from '../../solids/write-design-files.ts';
+import { EXIT_INPUT, EXIT_OK, type Command, type Io } from '../command.ts';
+import { argumentError, DESIGN_OPTIONS, designFlagsHelp, flagForField, loadDesign } from '../design-input.ts';
+import { fixed, formatCautions, formatFailureText, formatFieldErrors } from '../format-sizing.ts';
+
+const OPTIONS = {
+  ...DESIGN_OPTIONS,
+  out: { type: 'string' },
+  quality: { type: 'string' },
+  'with-pad': { type: 'boolean' },
+  json: { type: 'boolean' },
+  help: { type: 'boolean', short: 'h' },
+  debug: { type: 'boolean' },
+} as const;
+
+const HELP = `Usage: floatwright build --design FILE --out DIR [options]
+
+Sizes one float valve and writes the files to print it into DIR: one binary STL
+per part (housing, float, nozzle insert, retainer pin) in print orientation, a
+3MF with every part on one plate, the design document and a build sheet
+(Markdown and a printable HTML page). Files are named after the design.
+
+  --design FILE            design document (JSON); flags below override its values
+  --out DIR                folder for the files (made if missing)
+  --quality Q              export (default: chord error at most 0.05 mm) or preview (coarse, quick)
+  --with-pad               also write a printable seal pad (TPU); the default pad is a bought disc
+${designFlagsHelp()}
+  --json                   print the sizing result as JSON with a "parts" list of the files written
+  --debug                  show the stack trace if floatwright itself fails
+  -h, --help               show this help
+
+Examples:
+  floatwright build --design presets/rooftop-tubs.json --out out/rooftop
+  floatwright build --design presets/bucket-tote.json --out out/tote --quality preview --json
+
+Exit status: 0 written; 2 bad input, no size fits, or a part could not be built (nothing is written then);
+1 a fault in floatwright.
+`;
+
+function inputErrors(errors: FieldError[], json: boolean, io: Io, subject = 'the design'): number {
+  if (json) io.out(`${JSON.stringify({ ok: false, errors }, null, 2)}\n`);
+  else io.err(`floatwright build: ${formatFieldErrors(errors, flagForField, subject)}`);
+  return EXIT_INPUT;
+}
+
+async function run(argv: string[], io: Io): Promise<number> {
+  const json = argv.includes('--json');
+  let values: Record<string, unknown>;
+  try {
+    ({ values } = parseArgs({ args: argv, options: OPTIONS, strict: true, allowPositionals: false }));
+  } catch (error) {
+    const problem = argumentError(error, Object.keys(OPTIONS));
+    if (!problem) throw error;
+    return inputErrors([problem], json, io, 'the command line');
+  }
+  if (values.help) {
+    io.out(HELP);
+    return EXIT_OK;
+  }
+  const problems: FieldError[] = [];
+  const out = values.out;
+  if (typeof out !== 'string' || out.trim() === '') {
+    problems.push({ field: '--out', message: 'give the folder to write the files into, e.g. --out out/my-valve.' });
+  }
+  const quality = (values.quality ?? 'export') as string;
+  if (quality !== 'export' && quality !== 'preview') {
+    problems.push({ field: '--quality', message: `${JSON.stringify(quality)} is not a quality; allowed: export or preview.` });
+  }
+  if (problems.length) return inputErrors(problems, json, io, 'the command line');
+
+  const parsed = await loadDesign(values);
+  if (!parsed.ok) return inputErrors(parsed.errors, json, io);
+  const result = sizeDesign(parsed.inputs);
+  if (!result.ok) {
+    if (json) io.out(`${JSON.stringify(result, null, 2)}\n`);
+    else io.err(formatFailureText(result));
+    return EXIT_INPUT;
+  }
+
+  let written;
+  try {
+    written = await writeDesignFiles(result, parsed.document, out as string, {
+      quality: quality as 'export' | 'preview',
+      withPad: values['with-pad'] === true,
+    });
+  } catch (error) {
+    if (!(error instanceof PartBuildError) && !(error instanceof Error && /^(3MF plate|design document|build sheet|\w+ STL)/.test(error.message))) {
+      if (!(error as NodeJS.ErrnoException)?.code) throw error;
+    }
+    const message = error instanceof Error ? error.message : String(error);
+    if (json) io.out(`${JSON.stringify({ ok: false, errors: [{ field: error instanceof PartBuildError ? error.part : 'files', message }] }, null, 2)}\n`);
+    else io.err(`floatwright build: could not write the files, so none were written. ${message}\n`);
+    return EXIT_INPUT;
+  }
+
+  if (json) {
+    // the sizing result's part dimensions move to `partSpecs`; `parts` lists the files written
+    const { parts: partSpecs, ...rest } = result;
+    io.out(`${JSON.stringify({ ...rest, partSpecs, parts: written.parts, files: written.files }, null, 2)}\n`);
+    return EXIT_OK;
+  }
+  const rows = written.parts.map(
+    (p) =>
+      `  ${p.name.padEnd(8)} ${fixed(p.volumeMm3 / 1000, 2).padStart(8)} cm3 ${fixed(p.massG, 1).padStart(7)} g ${String(p.triangles).padStart(7)} triangles  ${p.file}`,
+  );
+  const others = written.files.filter((f) => !written.parts.some((p) => p.file === f));
+  io.out(
+    [
+      `floatwright build: ${parsed.document.name ?? 'design'} (${quality} quality)`,
+      '',
+      'Parts (print orientation, resting on z = 0)',
+      ...rows,
+      '',
+      'Also written',
+      ...others.map((f) => `  ${f}`),
+      '',
+      formatCautions(),
+    ].join('\n'),
+  );
+  return EXIT_OK;
+}
+
+export const command: Command = {
+  name: 'build',
+  summary: 'size one valve and write its printable STL / 3MF files and build sheet',
+  help: HELP,
+  run,
+};

@@ -1,0 +1,247 @@
+/**
+ * The build sheet a grower prints and keeps by the printer: the sizing
+ * figures with units, the bill of materials (pad, tube, ballast or anchors),
+ * print settings per part (orientation, walls, infill, layer height), the
+ * assembly steps and the cautions. Markdown for the repository and terminals,
+ * HTML for a printable page. Built from the sizing result and the normalized
+ * design document only; no I/O.
+ *
+ * Print settings are common practice for a 0.4 mm nozzle (0.2 mm layers);
+ * wall counts follow from the design's wall and line width.
+ */
+import { CAUTIONS } from './cautions.ts';
+import type { NormalizedDoc } from './schema.ts';
+import { sizingSections, type Section } from '../cli/format-sizing.ts';
+import { CONSTRAINT_TEXT } from '../sizing/layout/constraint-text.ts';
+import type { SizingSuccess } from '../sizing/result.ts';
+
+/** Layer height suggested for every part but the nozzle, mm (common practice for a 0.4 mm nozzle). */
+export const LAYER_HEIGHT_MM = 0.2;
+/** Finer layers for the nozzle's barb and lip, mm (common practice). */
+export const NOZZLE_LAYER_HEIGHT_MM = 0.12;
+
+/** Optional details of the files written with the sheet. */
+export interface BuildSheetFiles {
+  /** file names per part, e.g. { housing: "rooftop-tubs-housing.stl" } */
+  stl?: Partial<Record<string, string>>;
+  plate3mf?: string;
+  /** whether the printed pad was written */
+  withPad?: boolean;
+}
+
+interface Table {
+  title: string;
+  head: string[];
+  rows: string[][];
+}
+
+interface Sheet {
+  title: string;
+  intro: string[];
+  figures: Section[];
+  boundBy: string[];
+  warnings: string[];
+  bom: Table;
+  print: Table;
+  printNotes: string[];
+  steps: string[];
+  cautions: { title: string; text: string }[];
+}
+
+const f1 = (x: number) => (Math.round(x * 10) / 10).toFixed(1);
+const f2 = (x: number) => (Math.round(x * 100) / 100).toFixed(2);
+
+function materialName(doc: NormalizedDoc): string {
+  return typeof doc.print.material === 'string' ? doc.print.material : doc.print.material.name;
+}
+
+/** Lines of width w to fill t, and whether t is a whole number of lines (DESIGN: warn otherwise). */
+function lines(thicknessMm: number, lineMm: number): { count: number; whole: boolean } {
+  const exact = thicknessMm / lineMm;
+  return { count: Math.ceil(exact - 1e-6), whole: Math.abs(exact - Math.round(exact)) < 1e-6 };
+}
+
+function sheetContent(s: SizingSuccess, doc: NormalizedDoc, files: BuildSheetFiles = {}): Sheet {
+  const P = s.parts;
+  const inp = s.inputs;
+  const material = materialName(doc);
+  const lineMm = inp.lineWidthM * 1e3;
+  const wall = lines(P.housing.wallMm, lineMm);
+  const shell = lines(P.float.shellMm, lineMm);
+  const shellLayers = Math.ceil(P.float.shellMm / LAYER_HEIGHT_MM - 1e-6);
+  const name = doc.name ?? 'Float valve';
+  const stl = (part: string) => files.stl?.[part] ?? `${part}.stl`;
+  const ah = P.housing.foot.anchorHoles;
+
+  const bom: Table = {
+    title: 'Bill of materials (one valve)',
+    head: ['item', 'quantity', 'details'],
+    rows: [
+      ['Housing (printed)', '1', `${material}, ${f1(s.mass.byPart.housing)} g, file ${stl('housing')}`],
+      ['Float (printed)', '1', `${material}, ${f1(s.mass.byPart.float)} g, file ${stl('float')}`],
+      ['Nozzle insert (printed)', '1', `${material}, ${f2(s.mass.byPart.nozzle)} g, file ${stl('nozzle')}`],
+      ['Retainer pin (printed)', '1', `${material}, ${f2(s.mass.byPart.pin)} g, file ${stl('pin')}`],
+      [
+        'Seal pad',
+        '1',
+        `disc ${f1(P.float.padDiameterMm)} mm across, ${f1(P.float.padThicknessMm)} mm thick, closed-cell foam or soft rubber` +
+          (files.withPad ? ` (or print ${stl('pad')} in TPU 95A or softer)` : '') +
+          `; ${f2(s.mass.byPart.pad)} g, counted in the float's mass`,
+      ],
+      ['Supply tube', `${doc.supply.tubeLength}`, `inner diameter ${doc.supply.tubeInnerDiameter}, pushed over the barb`],
+      [
+        'Hold-down',
+        s.holdDown.neededN > 0 ? '1 set' : 'none needed',
+        s.holdDown.neededN > 0
+          ? `${f1(s.holdDown.ballastSteelG)} g of steel on the foot, or ${ah.count} pins or M3 screws through the ${f1(ah.diameterMm)} mm anchor holes into the container floor`
+          : `the housing outweighs the flooded float's uplift; the ${ah.count} anchor holes are there if you want them`,
+      ],
+    ],
+  };
+
+  const print: Table = {
+    title: 'Print settings',
+    head: ['part', 'on the bed', 'walls', 'infill', 'layer height', 'supports'],
+    rows: [
+      [
+        'Housing',
+        'deck down, foot up',
+        `${wall.count} lines (${f2(P.housing.wallMm)} mm wall at ${f2(lineMm)} mm)`,
+        '100 %',
+        `${LAYER_HEIGHT_MM} mm`,
+        'none: the foot flares at 45 degrees, pin holes are teardrops, drain notches open at the rim',
+      ],
+      [
+        'Float',
+        'flat bottom down',
+        `${shell.count} lines; ${shellLayers} top and bottom layers`,
+        'any: the shell is modelled solid and the cavity hollow, so the mass does not depend on infill',
+        `${LAYER_HEIGHT_MM} mm`,
+        `none: the cavity roof is a 45-degree cone with a ${f1(2 * P.float.cavityRoofRadiusMm)} mm bridge at the top`,
+      ],
+      [
+        'Nozzle insert',
+        'sealing face down (tip down)',
+        '3 lines or more',
+        '100 %',
+        `${NOZZLE_LAYER_HEIGHT_MM} mm`,
+        'none; no brim or raft on the sealing face: the first layer is the seal',
+      ],
+      ['Retainer pin', 'flat side down', '3 lines', '100 %', `${LAYER_HEIGHT_MM} mm`, 'none'],
+      ...(files.withPad ? [['Seal pad (TPU, optional)', 'flat', '2 lines', '100 %', `${LAYER_HEIGHT_MM} mm`, 'none']] : []),
+    ],
+  };
+
+  const printNotes = [
+    `Material: ${material} (${f2(inp.materialDensityKgM3 / 1000)} g/cm3). The masses assume solid plastic.`,
+    `Every fit has the same clearance, ${f2(P.printClearanceMm)} mm per side; the nozzle's crush ribs take up the printer's spread in the seat.`,
+  ];
+  if (!wall.whole) {
+    printNotes.push(
+      `The housing wall (${f2(P.housing.wallMm)} mm) is not a whole number of ${f2(lineMm)} mm lines: the slicer will leave a gap or a thin fill line; a wall of ${f2(Math.round(P.housing.wallMm / lineMm) * lineMm)} mm would print cleaner.`,
+    );
+  }
+  if (!shell.whole) printNotes.push(`The float shell (${f2(P.float.shellMm)} mm) is not a whole number of lines; check the slicer fills it solid.`);
+  if (files.plate3mf) printNotes.push(`${files.plate3mf} holds every part laid out on one plate, already in print orientation.`);
+
+  const steps = [
+    'Rinse every part. Look at the nozzle\'s sealing face: it must be flat and clean, with no strings or blobs; clear the orifice with a needle or a ' +
+      `${f1(P.nozzle.orificeMm)} mm drill turned by hand.`,
+    `Push the nozzle insert into the seat from inside the housing, barb first, until its shoulder sits against the boss under the deck. The sealing face then stands ${f1(P.mount.nozzleTipZMm)} mm above the base.`,
+    `Put the seal pad in the float's pocket (${f1(2 * P.float.pocketRadiusMm)} mm across, ${f1(P.float.pocketDepthMm)} mm deep); it should stand ${f1(P.float.padProudMm)} mm proud. A drop of flexible glue keeps it there.`,
+    'Slide the float into the housing from below, flat bottom down, pad up.',
+    `Slide the retainer pin through the two holes near the base, flat side down, head outside. The float now rests on it, ${f1(P.mount.pinTopZMm)} mm above the base, and cannot fall out.`,
+    'Push the supply tube over the barb on the deck.',
+    s.holdDown.neededN > 0
+      ? `Stand the housing on the container floor and hold it down: ${f1(s.holdDown.ballastSteelG)} g of steel on the foot, or pins or screws through the anchor holes.`
+      : 'Stand the housing on the container floor (anchor it if you like).',
+    `Open the supply. The level should settle near ${f1(s.levels.shutOffAtHeadMaxMm)} mm with the tank full and ${f1(s.levels.shutOffAtHeadMinMm)} mm when it runs low. Check for drips at the nozzle with the tank full.`,
+  ];
+
+  const boundByText = CONSTRAINT_TEXT as Record<string, string>;
+  return {
+    title: `${name}: build sheet`,
+    intro: [
+      `Head ${doc.supply.headMax} (full) to ${doc.supply.headMin} (low), target level ${doc.level.target}, printed in ${material}.`,
+      ...(doc.notes ? [doc.notes] : []),
+    ],
+    figures: sizingSections(s),
+    boundBy: s.boundBy.map((code) => `${code}: ${boundByText[code] ?? code}`),
+    warnings: s.warnings.map((w) => w.message),
+    bom,
+    print,
+    printNotes,
+    steps,
+    cautions: CAUTIONS.map((c) => ({ title: c.title, text: c.text })),
+  };
+}
+
+const mdCell = (text: string) => text.replace(/\|/g, '\\|').replace(/\n/g, ' ');
+
+function mdTable(head: string[], rows: string[][]): string[] {
+  return [`| ${head.map(mdCell).join(' | ')} |`, `| ${head.map(() => '---').join(' | ')} |`, ...rows.map((r) => `| ${r.map(mdCell).join(' | ')} |`)];
+}
+
+/** The build sheet as Markdown. */
+export function buildSheetMarkdown(sizing: SizingSuccess, document: NormalizedDoc, files?: BuildSheetFiles): string {
+  const c = sheetContent(sizing, document, files);
+  const out: string[] = [`# ${c.title}`, '', ...c.intro.flatMap((p) => [p, '']), '## Cautions', ''];
+  out.push(...c.cautions.map((x) => `- **${x.title}.** ${x.text}`), '', '## Sizing', '');
+  for (const section of c.figures) {
+    out.push(`### ${section.title}`, '', ...mdTable(['quantity', 'value', 'unit'], section.rows.map((r) => [r.label, r.value, r.unit])), '');
+  }
+  out.push('Bound by:', '', ...c.boundBy.map((b) => `- ${b}`), '');
+  out.push('Warnings:', '', ...(c.warnings.length ? c.warnings.map((w) => `- ${w}`) : ['- none']), '');
+  out.push(`## ${c.bom.title}`, '', ...mdTable(c.bom.head, c.bom.rows), '');
+  out.push(`## ${c.print.title}`, '', ...mdTable(c.print.head, c.print.rows), '', ...c.printNotes.map((n) => `- ${n}`), '');
+  out.push('## Assembly', '', ...c.steps.map((step, i) => `${i + 1}. ${step}`), '');
+  return out.join('\n');
+}
+
+const esc = (text: string) =>
+  text.replace(/[&<>"']/g, (ch) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[ch] as string);
+
+function htmlTable(head: string[], rows: string[][], caption?: string): string {
+  return [
+    '<table>',
+    caption ? `<caption>${esc(caption)}</caption>` : '',
+    `<thead><tr>${head.map((h) => `<th>${esc(h)}</th>`).join('')}</tr></thead>`,
+    `<tbody>${rows.map((r) => `<tr>${r.map((cell) => `<td>${esc(cell)}</td>`).join('')}</tr>`).join('')}</tbody>`,
+    '</table>',
+  ].join('');
+}
+
+/** The build sheet as a self-contained printable HTML page. */
+export function buildSheetHtml(sizing: SizingSuccess, document: NormalizedDoc, files?: BuildSheetFiles): string {
+  const c = sheetContent(sizing, document, files);
+  const style = [
+    'body{font:14px/1.45 system-ui,sans-serif;max-width:60rem;margin:1.5rem auto;padding:0 1rem;color:#111}',
+    'table{border-collapse:collapse;margin:.5rem 0 1rem;width:100%}',
+    'th,td{border:1px solid #999;padding:.2rem .45rem;text-align:left;vertical-align:top}',
+    'caption{text-align:left;font-weight:600;padding:.3rem 0}',
+    '.cautions{border:2px solid #000;padding:.4rem 1rem;margin:1rem 0}',
+    '.figures{columns:2;column-gap:1.5rem}.figures table{break-inside:avoid}',
+    '@media print{body{margin:0;max-width:none;font-size:11px}.figures{columns:2}h2{break-after:avoid}}',
+  ].join('');
+  const body = [
+    `<h1>${esc(c.title)}</h1>`,
+    ...c.intro.map((p) => `<p>${esc(p)}</p>`),
+    '<section class="cautions"><h2>Cautions</h2><ul>',
+    ...c.cautions.map((x) => `<li><strong>${esc(x.title)}.</strong> ${esc(x.text)}</li>`),
+    '</ul></section>',
+    '<h2>Sizing</h2><div class="figures">',
+    ...c.figures.map((s) => htmlTable(['quantity', 'value', 'unit'], s.rows.map((r) => [r.label, r.value, r.unit]), s.title)),
+    '</div>',
+    `<p><strong>Bound by:</strong></p><ul>${c.boundBy.map((b) => `<li>${esc(b)}</li>`).join('')}</ul>`,
+    `<p><strong>Warnings:</strong></p><ul>${(c.warnings.length ? c.warnings : ['none']).map((w) => `<li>${esc(w)}</li>`).join('')}</ul>`,
+    `<h2>${esc(c.bom.title)}</h2>`,
+    htmlTable(c.bom.head, c.bom.rows),
+    `<h2>${esc(c.print.title)}</h2>`,
+    htmlTable(c.print.head, c.print.rows),
+    `<ul>${c.printNotes.map((n) => `<li>${esc(n)}</li>`).join('')}</ul>`,
+    '<h2>Assembly</h2><ol>',
+    ...c.steps.map((step) => `<li>${esc(step)}</li>`),
+    '</ol>',
+  ].join('\n');
+  return `<!doctype html>\n<html lang="en">\n<head>\n<meta charset="utf-8">\n<title>${esc(c.title)}</title>\n<style>${style}</style>\n</head>\n<body>\n${body}\n</body>\n</html>\n`;
+}

@@ -1,0 +1,171 @@
+/**
+ * Writes everything a grower needs for one valve into a folder (Node only):
+ * one binary STL per part in print orientation, a 3MF with every part laid
+ * out side by side on one plate, the design document (normalized JSON) and
+ * the build sheet (Markdown and a printable HTML page). File names say the
+ * design and the part: `<baseName>-housing.stl`, `<baseName>-plate.3mf`,
+ * `<baseName>-design.json`, `<baseName>-build-sheet.md` / `.html`.
+ *
+ * All or nothing: every file is first written under a temporary name in the
+ * same folder, then renamed once all are complete; on any failure the
+ * temporary files (and any already renamed) are removed, and the error names
+ * the part or file at fault. Used by `floatwright build` and the bench planner.
+ *
+ * Options: quality ('preview' | 'export', required); baseName (default: the
+ * design's name made file-safe, else "float-valve"); withPad (default false:
+ * also write the printed seal pad).
+ */
+import { randomBytes } from 'node:crypto';
+import { mkdir, rename, rm, writeFile } from 'node:fs/promises';
+import { join } from 'node:path';
+import { buildSheetHtml, buildSheetMarkdown } from '../doc/build-sheet.ts';
+import type { NormalizedDoc } from '../doc/schema.ts';
+import type { SizingSuccess } from '../sizing/result.ts';
+import { PART_NAMES, type PartName } from './assembly.ts';
+import { buildParts, PartBuildError } from './build-parts.ts';
+import {
+  countEdgeUses,
+  meshBounds,
+  meshVolumeMm3,
+  triangleCount,
+  write3mf,
+  writeStlBinary,
+  type BoundsMm,
+  type IndexedMesh,
+  type Quality,
+} from './mesh/index.ts';
+
+export interface WriteDesignOptions {
+  quality: Quality;
+  baseName?: string;
+  withPad?: boolean;
+}
+
+export interface WrittenPart {
+  name: PartName | 'pad';
+  /** path of the part's STL */
+  file: string;
+  volumeMm3: number;
+  massG: number;
+  triangles: number;
+  bounds: BoundsMm;
+}
+
+export interface WrittenDesign {
+  /** every file written, paths */
+  files: string[];
+  parts: WrittenPart[];
+}
+
+/** Build plate for the 3MF, mm: a common 256 mm bed; doubled until the parts fit (a slicer re-arranges them anyway). */
+const PLATE_MM = 256;
+const PLATE_SPACING_MM = 10;
+const BASE_NAME_PATTERN = /^[A-Za-z0-9][A-Za-z0-9._-]{0,79}$/;
+
+/** A file-safe base name from the design's name ("Rooftop planter tubs" -> "rooftop-planter-tubs"). */
+export function baseNameFor(document: NormalizedDoc): string {
+  const slug = (document.name ?? '')
+    .toLowerCase()
+    .normalize('NFKD')
+    .replace(/[^a-z0-9]+/g, '-')
+    .replace(/^-+|-+$/g, '')
+    .slice(0, 48)
+    .replace(/-+$/, '');
+  return slug || 'float-valve';
+}
+
+function plate3mf(meshes: { name: string; mesh: IndexedMesh }[], title: string): Uint8Array {
+  let size = PLATE_MM;
+  for (;;) {
+    try {
+      return write3mf(meshes, { plateWidthMm: size, plateDepthMm: size, spacingMm: PLATE_SPACING_MM, title });
+    } catch (error) {
+      if (!(error instanceof RangeError) || !/too small/.test(error.message) || size >= 4 * PLATE_MM) throw error;
+      size *= 2;
+    }
+  }
+}
+
+export async function writeDesignFiles(
+  sizing: SizingSuccess,
+  document: NormalizedDoc,
+  dir: string,
+  options: WriteDesignOptions,
+): Promise<WrittenDesign> {
+  if (typeof dir !== 'string' || dir.trim() === '') {
+    throw new RangeError(`writeDesignFiles.dir = ${JSON.stringify(dir)}; allowed: a folder path`);
+  }
+  const base = options?.baseName ?? baseNameFor(document);
+  if (!BASE_NAME_PATTERN.test(base)) {
+    throw new RangeError(
+      `writeDesignFiles.options.baseName = ${JSON.stringify(base)}; allowed: 1 to 80 letters, digits, ".", "_" or "-", starting with a letter or digit`,
+    );
+  }
+  const quality = options.quality;
+  const built = await buildParts(sizing, { quality, withPad: options.withPad });
+  const names: (PartName | 'pad')[] = options.withPad ? [...PART_NAMES, 'pad'] : [...PART_NAMES];
+  const density = (name: PartName | 'pad') => (name === 'pad' ? sizing.inputs.padDensityKgM3 : sizing.inputs.materialDensityKgM3);
+
+  // Everything is made in memory first, so a failure leaves the folder as it was.
+  const contents: { file: string; bytes: Uint8Array | string; what: string }[] = [];
+  const parts: WrittenPart[] = [];
+  const stlNames: Record<string, string> = {};
+  for (const name of names) {
+    const mesh = built[name] as IndexedMesh;
+    const edges = countEdgeUses(mesh);
+    if (!edges.closed) {
+      throw new PartBuildError(
+        name,
+        `the mesh is not a closed 2-manifold (${edges.boundaryEdges} open edges, ${edges.overusedEdges} over-used, ${edges.inconsistentlyOriented} flipped)`,
+      );
+    }
+    const volumeMm3 = meshVolumeMm3(mesh);
+    const file = `${base}-${name}.stl`;
+    stlNames[name] = file;
+    contents.push({ file, bytes: writeStlBinary(mesh, { header: `floatwright ${base} ${name} (mm, print pose)` }), what: `${name} STL` });
+    parts.push({
+      name,
+      file: join(dir, file),
+      volumeMm3,
+      massG: volumeMm3 * density(name) * 1e-6,
+      triangles: triangleCount(mesh),
+      bounds: meshBounds(mesh),
+    });
+  }
+  const plateFile = `${base}-plate.3mf`;
+  try {
+    const objects = names.map((name) => ({ name: `${base} ${name}`, mesh: built[name] as IndexedMesh }));
+    contents.push({ file: plateFile, bytes: plate3mf(objects, `${document.name ?? base} (${quality})`), what: '3MF plate' });
+  } catch (error) {
+    throw new Error(`3MF plate: ${error instanceof Error ? error.message : String(error)}`, { cause: error });
+  }
+  const sheetFiles = { stl: stlNames, plate3mf: plateFile, withPad: options.withPad };
+  contents.push({ file: `${base}-design.json`, bytes: `${JSON.stringify(document, null, 2)}\n`, what: 'design document' });
+  contents.push({ file: `${base}-build-sheet.md`, bytes: buildSheetMarkdown(sizing, document, sheetFiles), what: 'build sheet' });
+  contents.push({ file: `${base}-build-sheet.html`, bytes: buildSheetHtml(sizing, document, sheetFiles), what: 'build sheet' });
+
+  await mkdir(dir, { recursive: true });
+  const tag = `${process.pid}-${randomBytes(4).toString('hex')}`;
+  const temps: string[] = [];
+  const finals: string[] = [];
+  try {
+    for (const c of contents) {
+      const temp = join(dir, `.${c.file}.${tag}.tmp`);
+      temps.push(temp);
+      try {
+        await writeFile(temp, c.bytes);
+      } catch (error) {
+        throw new Error(`${c.what} (${c.file}): ${error instanceof Error ? error.message : String(error)}`, { cause: error });
+      }
+    }
+    for (let i = 0; i < contents.length; i++) {
+      const target = join(dir, contents[i].file);
+      await rename(temps[i], target);
+      finals.push(target);
+    }
+  } catch (error) {
+    await Promise.all([...temps, ...finals].map((path) => rm(path, { force: true })));
+    throw error;
+  }
+  return { files: finals, parts };
+}
