@@ -9,6 +9,7 @@ import { EXIT_FAULT, EXIT_INPUT, EXIT_OK, processIo, type Command, type Io } fro
 
 const COMMANDS: Record<string, () => Promise<{ command: Command }>> = {
   size: () => import('./commands/size.ts'),
+  plan: () => import('./commands/plan.ts'),
   build: () => import('./commands/build.ts'),
 };
 

@@ -6,9 +6,9 @@ import type { PlanResult } from './types.ts';
 /** Rounds for JSON output: enough digits for a grower, none of the float noise. */
 const r = (x: number | null, digits = 4): number | null => (x === null ? null : Number(x.toFixed(digits)));
 
-/** The sizing fields of one design (as the single-design JSON gives them; `inputs` and `parts` stay internal). */
-export function sizingFields(s: SizingSuccess): Omit<SizingSuccess, 'inputs' | 'parts' | 'ok'> {
-  const { inputs: _inputs, parts: _parts, ok: _ok, ...fields } = s;
+/** The sizing fields of one design, as `floatwright size --json` prints them (the whole result but its `ok`). */
+export function sizingFields(s: SizingSuccess): Omit<SizingSuccess, 'ok'> {
+  const { ok: _ok, ...fields } = s;
   return fields;
 }
 

@@ -1,0 +1,224 @@
+/**
+ * `floatwright plan FILE [--out DIR]`: size every valve of a bench plan (one
+ * tank, one main, many containers at their own heights), group identical
+ * valves, solve the supply with every valve open, and write a folder per
+ * design plus the plan report. Files are written into a temporary folder next
+ * to DIR and renamed into place only when everything is written.
+ */
+import { mkdtemp, readdir, rename, rm, writeFile } from 'node:fs/promises';
+import { basename, dirname, join, resolve } from 'node:path';
+import { parseArgs } from 'node:util';
+import type { FieldError } from '../../doc/fields.ts';
+import { ROOT_FIELD } from '../../doc/fields.ts';
+import { parsePlan, PLAN_ROOT_FIELD } from '../../plan/schema.ts';
+import { solvePlan } from '../../plan/solve-plan.ts';
+import { documentWithHeads, planJson } from '../../plan/plan-json.ts';
+import { planHtml, planMarkdown, planReport } from '../../plan/report.ts';
+import type { PlanResult } from '../../plan/types.ts';
+import { EXIT_INPUT, EXIT_OK, type Command, type Io } from '../command.ts';
+import { argumentError, readDesignFile } from '../design-input.ts';
+import { formatFieldErrors } from '../format-sizing.ts';
+import type { DesignJob } from '../plan/build-designs.ts';
+
+const OPTIONS = {
+  out: { type: 'string', short: 'o' },
+  quality: { type: 'string' },
+  json: { type: 'boolean' },
+  force: { type: 'boolean' },
+  help: { type: 'boolean', short: 'h' },
+  debug: { type: 'boolean' },
+} as const;
+
+const HELP = `Usage: floatwright plan FILE [--out DIR] [--quality preview|export] [--json] [--force]
+
+Plans a whole bench: one raised tank feeding many containers at their own
+heights through one supply main. Works out each valve's head from the
+elevations, sizes every valve, gives identical valves one set of files,
+solves the flows with every valve open and each alone, names the containers
+that would starve, and totals the plastic and ballast.
+
+  FILE                     plan document (JSON); see presets/plan-rooftop-shelf.json
+  -o, --out DIR            write a folder per design (STL parts, 3MF plate, build sheet)
+                           and the plan report (plan-report.md / .html, plan.json) into DIR;
+                           without it only the report is printed
+  --quality Q              export (default; 0.05 mm chord error) or preview (coarser, faster)
+  --force                  replace DIR if it already holds files
+  --json                   print {"ok", "containers", "designs", "totals"} on standard output
+  --debug                  show the stack trace if floatwright itself fails
+  -h, --help               show this help
+
+Exit status: 0 planned; 2 bad input or a container no size fits (nothing is
+written); 1 a fault in floatwright.
+`;
+
+const QUALITIES = ['export', 'preview'] as const;
+
+function inputErrors(errors: FieldError[], json: boolean, io: Io, subject = 'the plan'): number {
+  if (json) io.out(`${JSON.stringify({ ok: false, errors }, null, 2)}\n`);
+  else io.err(`floatwright plan: ${formatFieldErrors(errors, () => undefined, subject)}`);
+  return EXIT_INPUT;
+}
+
+/** A folder name from a container name: "top tier" -> "top-tier". */
+function slug(text: string): string {
+  return text.toLowerCase().normalize('NFKD').replace(/[^a-z0-9]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 40) || 'design';
+}
+
+async function isEmptyOrMissing(dir: string): Promise<boolean> {
+  try {
+    return (await readdir(dir)).length === 0;
+  } catch (error) {
+    const code = (error as NodeJS.ErrnoException).code;
+    if (code === 'ENOENT') return true;
+    if (code === 'ENOTDIR') return false;
+    throw error;
+  }
+}
+
+/** A progress bar on standard error, only for a person at a terminal. */
+function progressBar(io: Io, enabled: boolean) {
+  if (!enabled) return { update: (_d: number, _t: number) => {}, done: () => {} };
+  const width = 30;
+  return {
+    update: (done: number, total: number) => {
+      const filled = Math.round((width * done) / Math.max(total, 1));
+      io.err(`\rbuilding designs [${'#'.repeat(filled)}${'.'.repeat(width - filled)}] ${done}/${total}`);
+    },
+    done: () => io.err('\n'),
+  };
+}
+
+export interface WritePlanOptions {
+  result: PlanResult;
+  out: string;
+  quality: 'export' | 'preview';
+  force?: boolean;
+  onProgress?: (done: number, total: number) => void;
+  threads?: number;
+  /** extra keys for plan.json */
+  extra?: Record<string, unknown>;
+}
+
+/**
+ * Builds every design of a solved plan and writes the plan folder: a
+ * temporary folder beside `out`, renamed into place at the end (with
+ * `force`, an existing `out` is replaced only after the new one is complete).
+ * Returns the files per design.
+ */
+export async function writePlanFolder(opts: WritePlanOptions): Promise<{ files: Record<string, string[]>; triangles: number; threads: number }> {
+  const { buildDesigns } = await import('../plan/build-designs.ts');
+  const { result } = opts;
+  const out = resolve(opts.out);
+  const temp = await mkdtemp(join(dirname(out), `.${basename(out)}.partial-`));
+  try {
+    const used = new Set<string>();
+    const jobs: DesignJob[] = result.designs.map((d) => {
+      const first = result.containers.find((c) => c.index === d.containerIndices[0])!;
+      let folder = `${d.id}-${slug(first.name)}`;
+      while (used.has(folder)) folder += '-x';
+      used.add(folder);
+      const doc = result.plan.containers.find((c) => c.index === first.index)!.document;
+      return {
+        id: d.id,
+        folder,
+        prefix: d.id,
+        sizing: d.sizing,
+        document: { ...documentWithHeads(doc, first.headMaxM, first.headMinM), name: `${d.id}: ${first.name} (print ${d.quantity})` },
+        quality: opts.quality,
+        quantity: d.quantity,
+      };
+    });
+    const built = await buildDesigns({ jobs, root: temp, quality: opts.quality, onProgress: opts.onProgress, threads: opts.threads });
+    const report = planReport(result, built.files);
+    await writeFile(join(temp, 'plan-report.md'), planMarkdown(report));
+    await writeFile(join(temp, 'plan-report.html'), planHtml(report));
+    await writeFile(join(temp, 'plan.json'), `${JSON.stringify(planJson(result, built.files, opts.extra), null, 2)}\n`);
+
+    if (await isEmptyOrMissing(out)) {
+      await rm(out, { recursive: true, force: true });
+      await rename(temp, out);
+    } else {
+      if (!opts.force) throw new Error(`${out} is not empty`); // checked before building; a race lands here
+      const old = `${temp}-old`;
+      await rename(out, old);
+      await rename(temp, out);
+      await rm(old, { recursive: true, force: true });
+    }
+    return built;
+  } catch (error) {
+    await rm(temp, { recursive: true, force: true });
+    throw error;
+  }
+}
+
+async function run(argv: string[], io: Io): Promise<number> {
+  const json = argv.includes('--json');
+  let values: Record<string, unknown>;
+  let positionals: string[];
+  try {
+    ({ values, positionals } = parseArgs({ args: argv, options: OPTIONS, strict: true, allowPositionals: true }));
+  } catch (error) {
+    const problem = argumentError(error, Object.keys(OPTIONS));
+    if (!problem) throw error;
+    return inputErrors([problem], json, io, 'the command line');
+  }
+  if (values.help) {
+    io.out(HELP);
+    return EXIT_OK;
+  }
+  if (positionals.length !== 1) {
+    const message =
+      positionals.length === 0
+        ? 'missing; give the plan document, e.g. floatwright plan presets/plan-rooftop-shelf.json --out bench.'
+        : `${positionals.length} files given (${positionals.join(', ')}); give one plan document.`;
+    return inputErrors([{ field: 'FILE', message }], json, io, 'the command line');
+  }
+  const quality = (values.quality ?? 'export') as string;
+  if (!(QUALITIES as readonly string[]).includes(quality)) {
+    return inputErrors([{ field: '--quality', message: `${JSON.stringify(quality)} is not a quality; give export or preview.` }], json, io, 'the command line');
+  }
+  const out = typeof values.out === 'string' ? values.out : null;
+  if (out !== null && !values.force && !(await isEmptyOrMissing(resolve(out)))) {
+    return inputErrors([{ field: '--out', message: `"${out}" already holds files; choose a new folder, empty it, or add --force to replace it.` }], json, io, 'the command line');
+  }
+
+  const read = await readDesignFile(positionals[0]!);
+  if (!read.ok) {
+    return inputErrors(read.errors.map((e) => ({ ...e, field: e.field === ROOT_FIELD ? PLAN_ROOT_FIELD : e.field, message: e.message.replace('a design document', 'a plan document') })), json, io);
+  }
+  const parsed = parsePlan(read.doc);
+  if (!parsed.ok) return inputErrors(parsed.errors, json, io);
+  const solved = solvePlan(parsed.plan);
+  if (!solved.ok) return inputErrors(solved.errors, json, io);
+  const result = solved.result;
+
+  if (!result.ok) {
+    // Some container has no size that fits: say why and what would, and write nothing.
+    if (json) io.out(`${JSON.stringify(planJson(result), null, 2)}\n`);
+    else io.err(`floatwright plan: no valve size fits some containers; nothing was written.\n\n${planMarkdown(planReport(result))}`);
+    return EXIT_INPUT;
+  }
+
+  let files: Record<string, string[]> = {};
+  if (out !== null) {
+    const bar = progressBar(io, !json && process.stdout.isTTY === true);
+    const started = performance.now();
+    const built = await writePlanFolder({ result, out, quality: quality as 'export' | 'preview', force: values.force === true, onProgress: bar.update });
+    bar.done();
+    files = built.files;
+    if (!json) {
+      const count = Object.values(files).reduce((n, f) => n + f.length, 0) + 3;
+      io.err(`Wrote ${count} files for ${result.designs.length} designs to ${out} in ${((performance.now() - started) / 1000).toFixed(1)} s on ${built.threads} thread(s).\n`);
+    }
+  }
+  if (json) io.out(`${JSON.stringify(planJson(result, files, out !== null ? { out } : {}), null, 2)}\n`);
+  else io.out(planMarkdown(planReport(result, files)));
+  return EXIT_OK;
+}
+
+export const command: Command = {
+  name: 'plan',
+  summary: 'plan a whole bench: one tank, many containers at their own heights; a file set per distinct valve',
+  help: HELP,
+  run,
+};
