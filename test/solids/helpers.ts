@@ -1,0 +1,85 @@
+/**
+ * Shared by the solids tests: sized designs from the presets, and the
+ * sizing core's analytic volumes evaluated for the facets the builders draw.
+ *
+ * Faceting (elementary geometry): a regular N-gon with its corners on a circle
+ * of radius r has area (N/2) r^2 sin(2 pi / N) = k r^2 pi, k = N sin(2pi/N)/(2pi);
+ * one with its flats on the circle (a hole drawn so a pin still fits) has
+ * area N r^2 tan(pi / N) = k' r^2 pi, k' = N tan(pi/N)/pi. A circle of radius
+ * r sqrt(k) (or r sqrt(k')) has the same area, so the analytic formulas fed with
+ * those equal-area radii give the volume of the faceted solid (exactly for a
+ * solid of revolution, to second order for cuts through curved walls).
+ */
+import { readdirSync, readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { parseDesign, type NormalizedDoc } from '../../generator/doc/schema.ts';
+import { sizeDesign } from '../../generator/sizing/size-design.ts';
+import type { SizingSuccess } from '../../generator/sizing/result.ts';
+
+export const ROOT = fileURLToPath(new URL('../..', import.meta.url));
+
+export function presetFiles(): string[] {
+  return readdirSync(join(ROOT, 'presets'))
+    .filter((f) => f.endsWith('.json'))
+    .filter((f) => {
+      // design presets only (a plan preset holds several designs)
+      const doc = JSON.parse(readFileSync(join(ROOT, 'presets', f), 'utf8'));
+      return doc && typeof doc === 'object' && 'supply' in doc && 'level' in doc;
+    })
+    .sort();
+}
+
+export function sizeDoc(doc: unknown): { sizing: SizingSuccess; document: NormalizedDoc } {
+  const parsed = parseDesign(doc);
+  if (!parsed.ok) throw new Error(`design refused: ${JSON.stringify(parsed.errors)}`);
+  const sizing = sizeDesign(parsed.inputs);
+  if (!sizing.ok) throw new Error(`no size fits: ${JSON.stringify(sizing.reasons)}`);
+  return { sizing, document: parsed.document };
+}
+
+export function sizePreset(file: string): { sizing: SizingSuccess; document: NormalizedDoc } {
+  return sizeDoc(JSON.parse(readFileSync(join(ROOT, 'presets', file), 'utf8')));
+}
+
+/** DESIGN's worked scale example (2.2 m head, 45 mm level, defaults). */
+export const SCALE_EXAMPLE = { supply: { headMax: '2.2 m' }, level: { target: '45 mm' } };
+
+/** Area ratio of an N-gon with corners on the circle. */
+export const cornersOn = (n: number) => (n * Math.sin((2 * Math.PI) / n)) / (2 * Math.PI);
+/** Area ratio of an N-gon with flats on the circle. */
+export const flatsOn = (n: number) => (n * Math.tan(Math.PI / n)) / Math.PI;
+
+/** Shoelace area of a closed polygon, counter-clockwise positive. */
+export function shoelace(points: readonly (readonly [number, number])[]): number {
+  let s = 0;
+  for (let i = 0; i < points.length; i++) {
+    const [x0, y0] = points[i];
+    const [x1, y1] = points[(i + 1) % points.length];
+    s += x0 * y1 - x1 * y0;
+  }
+  return s / 2;
+}
+
+/** Regular N-gon (corners on radius r, first corner on +x) clipped to y >= yMin (one Sutherland-Hodgman pass). */
+export function clippedPolygon(r: number, n: number, yMin: number): [number, number][] {
+  const ring: [number, number][] = Array.from({ length: n }, (_, k) => [r * Math.cos((2 * Math.PI * k) / n), r * Math.sin((2 * Math.PI * k) / n)]);
+  const out: [number, number][] = [];
+  for (let i = 0; i < n; i++) {
+    const a = ring[i];
+    const b = ring[(i + 1) % n];
+    const ina = a[1] >= yMin;
+    const inb = b[1] >= yMin;
+    if (ina) out.push(a);
+    if (ina !== inb) {
+      const t = (yMin - a[1]) / (b[1] - a[1]);
+      out.push([a[0] + t * (b[0] - a[0]), yMin]);
+    }
+  }
+  return out;
+}
+
+/** Transform an xyz point by a column-major 4x4. */
+export function apply(m: readonly number[], x: number, y: number, z: number): [number, number, number] {
+  return [m[0] * x + m[4] * y + m[8] * z + m[12], m[1] * x + m[5] * y + m[9] * z + m[13], m[2] * x + m[6] * y + m[10] * z + m[14]];
+}

@@ -1,0 +1,205 @@
+/**
+ * Each printed part: a closed 2-manifold (checked by manifold-3d, a library
+ * independent of the JSCAD code that extruded it, and by counting edge uses),
+ * positive volume, resting on z = 0, and the volume the sizing core's analytic
+ * formulas give for the faceted shape (see helpers.ts: N-gon areas, elementary
+ * geometry) within 1 %. Float mass from its mesh against the sizing's
+ * float.massG (PETG 1.27 g/cm3, a typical datasheet value, from memory; the
+ * pad counted) within 1 %.
+ */
+import { beforeAll, describe, expect, it } from 'vitest';
+import { housingVolumeMm3, nozzleVolumeMm3 } from '../../generator/sizing/parts/part-volumes.ts';
+import { floatShellVolumeMm3 } from '../../generator/sizing/float/float-shape.ts';
+import type { SizingSuccess } from '../../generator/sizing/result.ts';
+import { buildPart, buildParts, PartBuildError } from '../../generator/solids/index.ts';
+import {
+  countEdgeUses,
+  loadManifold,
+  meshBounds,
+  meshToManifold,
+  meshVolumeMm3,
+  segmentsFor,
+  type IndexedMesh,
+  type ManifoldToplevel,
+  type Quality,
+} from '../../generator/solids/mesh/index.ts';
+import { clippedPolygon, cornersOn, flatsOn, SCALE_EXAMPLE, shoelace, sizeDoc } from './helpers.ts';
+
+let wasm: ManifoldToplevel;
+const { sizing } = sizeDoc(SCALE_EXAMPLE);
+const P = sizing.parts;
+
+beforeAll(async () => {
+  wasm = await loadManifold();
+});
+
+function checkClosed(mesh: IndexedMesh, name: string): void {
+  const edges = countEdgeUses(mesh);
+  expect(edges, name).toMatchObject({ boundaryEdges: 0, overusedEdges: 0, inconsistentlyOriented: 0, degenerateTriangles: 0, closed: true });
+  const manifold = meshToManifold(wasm, mesh, name);
+  try {
+    expect(manifold.status()).toBe('NoError');
+    expect(manifold.volume()).toBeGreaterThan(0);
+    expect(Math.abs(manifold.volume() / meshVolumeMm3(mesh) - 1)).toBeLessThan(1e-6);
+  } finally {
+    manifold.delete();
+  }
+}
+
+/** Analytic volumes for the faceted parts (helpers.ts explains the equal-area radii). */
+function facetedHousingMm3(s: SizingSuccess, q: Quality): number {
+  const h = structuredClone(s.parts.housing);
+  const n = segmentsFor(h.foot.outerDiameterMm / 2, q);
+  const outer = Math.sqrt(cornersOn(n));
+  const hole = Math.sqrt(flatsOn(n));
+  h.outerDiameterMm *= outer;
+  h.foot.outerDiameterMm *= outer;
+  h.bossOuterDiameterMm *= outer;
+  h.boreMm *= hole;
+  h.seatBoreMm *= hole;
+  for (const d of [h.vents, h.foot.anchorHoles, h.pinHoles]) d.diameterMm *= Math.sqrt(flatsOn(segmentsFor(d.diameterMm / 2, q)));
+  return housingVolumeMm3(h);
+}
+
+function facetedNozzleMm3(s: SizingSuccess, q: Quality): number {
+  const n = structuredClone(s.parts.nozzle);
+  const f = Math.sqrt(cornersOn(segmentsFor(n.shoulderDiameterMm / 2, q)));
+  n.orificeMm *= f;
+  n.lipDiameterMm *= f;
+  n.shoulderDiameterMm *= f;
+  n.collarDiameterMm *= f;
+  n.barb.rootDiameterMm *= f;
+  n.barb.crestDiameterMm *= f;
+  return nozzleVolumeMm3(n);
+}
+
+function facetedPinMm3(s: SizingSuccess, q: Quality): number {
+  const p = s.parts.pin;
+  const n = segmentsFor(p.diameterMm / 2, q);
+  // the section: the N-gon on the pin's circle, less what lies below the flat
+  const section = shoelace(clippedPolygon(p.diameterMm / 2, n, -p.flatOffsetMm));
+  return section * p.lengthMm + p.head.lengthMm * p.head.widthMm * p.head.heightMm;
+}
+
+describe('every part is a closed 2-manifold resting on z = 0', () => {
+  for (const quality of ['preview', 'export'] as const) {
+    it(`${quality}: housing, float, nozzle, pin and the printed pad`, async () => {
+      const parts = await buildParts(sizing, { quality, withPad: true });
+      for (const [name, mesh] of Object.entries(parts)) {
+        checkClosed(mesh as IndexedMesh, name);
+        const b = meshBounds(mesh as IndexedMesh);
+        expect(b.min[2], name).toBe(0);
+      }
+      // genus (manifold-3d): the float is a shell around one sealed cavity (two surfaces, genus -1)
+      const float = meshToManifold(wasm, parts.float, 'float');
+      expect(float.genus()).toBe(-1);
+      float.delete();
+    });
+  }
+});
+
+describe('mesh volume vs the sizing core analytic volume (faceting accounted for)', () => {
+  it('float: exactly k(N) times the analytic shell, N-gon sections (both qualities)', async () => {
+    for (const q of ['preview', 'export'] as const) {
+      const mesh = await buildPart('float', sizing, { quality: q });
+      const expected = floatShellVolumeMm3(P.float) * cornersOn(segmentsFor(P.float.outerDiameterMm / 2, q));
+      expect(Math.abs(meshVolumeMm3(mesh) / expected - 1)).toBeLessThan(1e-4);
+      expect(P.volumes.floatMm3).toBeCloseTo(floatShellVolumeMm3(P.float), 6);
+    }
+  });
+
+  it('housing within 1 % at both qualities', async () => {
+    for (const q of ['preview', 'export'] as const) {
+      const mesh = await buildPart('housing', sizing, { quality: q });
+      expect(Math.abs(meshVolumeMm3(mesh) / facetedHousingMm3(sizing, q) - 1)).toBeLessThan(0.01);
+    }
+  });
+
+  it('nozzle and pin within 1 % at both qualities; raw export-quality volumes within 2.5 % of true circles', async () => {
+    for (const q of ['preview', 'export'] as const) {
+      const nozzle = await buildPart('nozzle', sizing, { quality: q });
+      expect(Math.abs(meshVolumeMm3(nozzle) / facetedNozzleMm3(sizing, q) - 1)).toBeLessThan(0.01);
+      const pin = await buildPart('pin', sizing, { quality: q });
+      expect(Math.abs(meshVolumeMm3(pin) / facetedPinMm3(sizing, q) - 1)).toBeLessThan(0.01);
+      if (q === 'export') {
+        // the 4 mm pin at 0.05 mm chord error is a 16-gon: 2.5 % less area than its circle (k(16) = 0.9745)
+        expect(Math.abs(meshVolumeMm3(pin) / P.volumes.pinMm3 - 1)).toBeLessThan(0.025);
+        expect(Math.abs(meshVolumeMm3(nozzle) / P.volumes.nozzleMm3 - 1)).toBeLessThan(0.025);
+      }
+    }
+  });
+
+  it('float mass from the mesh (plus the pad) matches float.massG within 1 % at export quality', async () => {
+    const mesh = await buildPart('float', sizing, { quality: 'export' });
+    const shellG = meshVolumeMm3(mesh) * sizing.inputs.materialDensityKgM3 * 1e-6; // kg/m3 -> g/mm3
+    expect(sizing.inputs.materialDensityKgM3).toBe(1270); // PETG default, DESIGN materials table (from memory)
+    expect(Math.abs((shellG + sizing.mass.byPart.pad) / sizing.float.massG - 1)).toBeLessThan(0.01);
+  });
+});
+
+describe('print poses', () => {
+  it('housing deck down: the deck top is the bed, the foot is up, the seat bore opens on the bed', async () => {
+    const mesh = await buildPart('housing', sizing, { quality: 'preview' });
+    const b = meshBounds(mesh);
+    expect(b.max[2]).toBeCloseTo(P.housing.heightMm, 4);
+    // widest at the top of the print (the foot), tube-wide at the bed
+    let bedRadius = 0;
+    let topRadius = 0;
+    for (let i = 0; i < mesh.positions.length; i += 3) {
+      const r = Math.hypot(mesh.positions[i], mesh.positions[i + 1]);
+      if (mesh.positions[i + 2] === 0) bedRadius = Math.max(bedRadius, r);
+      if (Math.abs(mesh.positions[i + 2] - b.max[2]) < 1e-4) topRadius = Math.max(topRadius, r);
+    }
+    expect(bedRadius).toBeCloseTo(P.housing.outerDiameterMm / 2, 3);
+    expect(topRadius).toBeCloseTo(P.housing.foot.outerDiameterMm / 2, 3);
+  });
+
+  it('pin lies on its flat: height = flat offset + radius, length = head + body', async () => {
+    const mesh = await buildPart('pin', sizing, { quality: 'preview' });
+    const b = meshBounds(mesh);
+    expect(b.max[2]).toBeCloseTo(P.pin.flatOffsetMm + P.pin.diameterMm / 2, 5);
+    expect(b.max[0] - b.min[0]).toBeCloseTo(P.pin.lengthMm + P.pin.head.lengthMm, 4);
+    expect(b.max[1] - b.min[1]).toBeCloseTo(P.pin.head.widthMm, 4);
+  });
+
+  it('no downward-facing face is flatter than 45 degrees except on the bed or stated bridges', async () => {
+    // printability rule of the issue (common practice: 45-degree overhang limit for FDM)
+    const parts = await buildParts(sizing, { quality: 'preview' });
+    const bridges: Record<string, number> = {
+      // the float's cavity roof (a disc of cavityRoofRadius) is the one stated bridge
+      float: P.float.cavityRoofRadiusMm,
+      // the housing: the vents' tops and the seat cut through the deck are holes, not faces; the boss top and tube end bridge nothing
+      housing: 0,
+      nozzle: 0,
+      pin: 0,
+    };
+    for (const [name, mesh] of Object.entries(parts)) {
+      const p = mesh.positions;
+      const idx = mesh.indices;
+      for (let t = 0; t < idx.length; t += 3) {
+        const [a, b, c] = [3 * idx[t], 3 * idx[t + 1], 3 * idx[t + 2]];
+        const ux = p[b] - p[a], uy = p[b + 1] - p[a + 1], uz = p[b + 2] - p[a + 2];
+        const vx = p[c] - p[a], vy = p[c + 1] - p[a + 1], vz = p[c + 2] - p[a + 2];
+        const nx = uy * vz - uz * vy, ny = uz * vx - ux * vz, nz = ux * vy - uy * vx;
+        const len = Math.hypot(nx, ny, nz);
+        if (len === 0) continue;
+        const down = -nz / len; // cosine of the angle to straight down
+        const zMin = Math.min(p[a + 2], p[b + 2], p[c + 2]);
+        if (down <= Math.SQRT1_2 + 1e-4 || zMin === 0) continue; // 45 degrees or steeper, or on the bed
+        // a flat downward face: allowed only as the float's stated bridge
+        const r = Math.max(...[a, b, c].map((v) => Math.hypot(p[v], p[v + 1])));
+        expect(r, `${name}: downward face at z ${zMin.toFixed(2)} r ${r.toFixed(2)}`).toBeLessThanOrEqual(bridges[name] + 1e-4);
+      }
+    }
+  });
+});
+
+describe('builder failures name the part', () => {
+  it('a spec the sizing would never make throws PartBuildError starting with the part name', async () => {
+    const broken = structuredClone(sizing);
+    broken.parts.float.cavityRadiusMm = -1;
+    await expect(buildPart('float', broken, { quality: 'preview' })).rejects.toThrow(/^float: /);
+    await expect(buildParts(broken, { quality: 'preview' })).rejects.toBeInstanceOf(PartBuildError);
+    await expect(buildParts(sizing, { quality: 'draft' as never })).rejects.toThrow(/quality/);
+  });
+});
