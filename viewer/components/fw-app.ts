@@ -113,6 +113,7 @@ export class FwApp extends LitElement {
   /** the document each build request came from */
   private docsById = new Map<number, Doc>();
   private lastGoodDoc: Doc | null = null;
+  private beforeSwitch: { units: UnitSystem; doc: Doc; convertedDoc: Doc } | null = null;
   private readonly onHashChange = () => this.openFromHash();
 
   override connectedCallback(): void {
@@ -228,7 +229,16 @@ export class FwApp extends LitElement {
   private setUnits(units: UnitSystem): void {
     if (units === this.units) return;
     this.units = units;
-    this.doc = convertDocument(this.doc, ALL_FIELDS, units);
+    // Switching back with no edit in between restores the exact values (no rounding drift from the round trip).
+    const back = this.beforeSwitch;
+    if (back && back.units === units && back.convertedDoc === this.doc) {
+      this.doc = back.doc;
+      this.beforeSwitch = null;
+    } else {
+      const converted = convertDocument(this.doc, ALL_FIELDS, units);
+      this.beforeSwitch = { units: units === 'metric' ? 'imperial' : 'metric', doc: this.doc, convertedDoc: converted };
+      this.doc = converted;
+    }
     if (this.lastGoodDoc) save(globalThis.localStorage, { doc: this.lastGoodDoc, units });
     this.evaluate();
   }

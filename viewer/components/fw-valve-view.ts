@@ -3,7 +3,7 @@ import { customElement, property, query } from 'lit/decorators.js';
 import * as THREE from 'three';
 import { OrbitControls } from 'three/examples/jsm/controls/OrbitControls.js';
 import type { SizingSuccess } from '../../generator/sizing/result.ts';
-import { PART_NAMES, type FloatPose, type PartMeshes, type PartName, type PartTransforms } from '../worker/parts-contract.ts';
+import type { FloatPose, PartMeshes, PartTransforms, ShownPart } from '../worker/parts-contract.ts';
 import { shared } from './shared-styles.ts';
 
 export interface ViewOptions {
@@ -13,7 +13,7 @@ export interface ViewOptions {
   water: boolean;
 }
 
-const COLOURS: Record<PartName, number> = { housing: 0xcdbb98, float: 0xe07b39, nozzle: 0x4f7b9a, pin: 0x6d8f4e };
+const COLOURS: Record<ShownPart, number> = { housing: 0xcdbb98, float: 0xe07b39, nozzle: 0x4f7b9a, pin: 0x6d8f4e, pad: 0x2e2e2e };
 
 /**
  * The valve in 3D, as mounted: orbit (drag), zoom (wheel), a cut through the
@@ -48,7 +48,7 @@ export class FwValveView extends LitElement {
   private scene = new THREE.Scene();
   private camera = new THREE.PerspectiveCamera(35, 1, 1, 5000);
   private controls: OrbitControls | null = null;
-  private parts = new Map<PartName, THREE.Mesh>();
+  private parts = new Map<ShownPart, THREE.Mesh>();
   private water: THREE.Mesh | null = null;
   private cut = new THREE.Plane(new THREE.Vector3(0, 1, 0), 0);
   private framed = false;
@@ -90,6 +90,8 @@ export class FwValveView extends LitElement {
 
   override updated(changed: Map<string, unknown>): void {
     if (!this.renderer) return;
+    const options = changed.get('options') as ViewOptions | undefined;
+    if (options && options.exploded !== this.options.exploded) this.framed = false;
     this.syncScene(changed.has('meshes'));
   }
 
@@ -109,14 +111,15 @@ export class FwValveView extends LitElement {
 
   private syncScene(newMeshes: boolean): void {
     if (newMeshes && this.meshes) {
-      for (const name of PART_NAMES) {
-        const old = this.parts.get(name);
-        if (old) {
-          this.scene.remove(old);
-          old.geometry.dispose();
-          (old.material as THREE.Material).dispose();
-        }
+      for (const old of this.parts.values()) {
+        this.scene.remove(old);
+        old.geometry.dispose();
+        (old.material as THREE.Material).dispose();
+      }
+      this.parts.clear();
+      for (const name of Object.keys(this.meshes) as ShownPart[]) {
         const m = this.meshes[name];
+        if (!m) continue;
         const geometry = new THREE.BufferGeometry();
         geometry.setAttribute('position', new THREE.BufferAttribute(m.positions, 3));
         geometry.setIndex(new THREE.BufferAttribute(m.indices, 1));
@@ -131,22 +134,23 @@ export class FwValveView extends LitElement {
     }
     this.placeParts();
     this.placeWater();
-    if (newMeshes && this.meshes && !this.framed) this.frame();
+    if (this.meshes && !this.framed) this.frame();
     this.draw();
     if (newMeshes && this.meshes) {
       this.dispatchEvent(new CustomEvent('preview-rendered', { detail: { buildId: this.buildId, at: performance.now() }, bubbles: true, composed: true }));
     }
   }
 
-  /** Offsets that pull the parts apart, in mm (float sideways, nozzle up, pin out along its axis). */
-  private explodeOffset(name: PartName): THREE.Vector3 {
+  /** Offsets that pull the parts apart, in mm (float and pad to +x, nozzle up, pin out along its axis to -x). */
+  private explodeOffset(name: ShownPart): THREE.Vector3 {
     const s = this.sizing;
     if (!this.options.exploded || !s) return new THREE.Vector3();
     const foot = s.housing.footDiameterMm;
     switch (name) {
-      case 'float': return new THREE.Vector3(-foot * 0.95, 0, 0);
-      case 'nozzle': return new THREE.Vector3(0, 0, Math.max(30, s.housing.heightMm * 0.45));
-      case 'pin': return new THREE.Vector3(foot * 0.95, 0, 0);
+      case 'float':
+      case 'pad': return new THREE.Vector3(foot * 0.95, 0, 0);
+      case 'nozzle': return new THREE.Vector3(0, 0, Math.max(25, s.housing.heightMm * 0.35));
+      case 'pin': return new THREE.Vector3(-foot * 1.15, 0, 0);
       default: return new THREE.Vector3();
     }
   }
@@ -170,26 +174,33 @@ export class FwValveView extends LitElement {
     const s = this.sizing;
     if (!s) return;
     if (!this.water) {
-      const material = new THREE.MeshStandardMaterial({ color: 0x3d8fd1, transparent: true, opacity: 0.35, side: THREE.DoubleSide, depthWrite: false });
-      this.water = new THREE.Mesh(new THREE.PlaneGeometry(1, 1), material);
+      const material = new THREE.MeshStandardMaterial({ color: 0x3d8fd1, transparent: true, opacity: 0.28, side: THREE.DoubleSide, depthWrite: false });
+      this.water = new THREE.Mesh(new THREE.BoxGeometry(1, 1, 1), material);
       this.water.renderOrder = 2;
       this.water.name = 'water';
       this.scene.add(this.water);
     }
-    const size = s.housing.footDiameterMm * 1.6;
-    this.water.scale.set(size, size, 1);
-    this.water.position.set(0, 0, s.levels.shutOffAtHeadMaxMm);
+    // the water in the container up to the level held with the tank full, as a block cut with the parts
+    const size = s.housing.footDiameterMm * 1.5;
+    const level = Math.max(0.1, s.levels.shutOffAtHeadMaxMm);
+    this.water.scale.set(size, size, level);
+    this.water.position.set(0, 0, level / 2);
     this.water.visible = this.options.water;
+    (this.water.material as THREE.Material).clippingPlanes = this.options.section ? [this.cut] : [];
   }
 
   private frame(): void {
-    const s = this.sizing;
-    if (!s || !this.controls) return;
-    const h = s.housing.heightMm;
-    const d = Math.max(s.housing.footDiameterMm, h);
-    const target = new THREE.Vector3(0, 0, h * 0.5);
-    this.controls.target.copy(target);
-    this.camera.position.set(d * 1.1, -d * 2.1, h * 0.5 + d * 0.9);
+    if (!this.controls || this.parts.size === 0) return;
+    const box = new THREE.Box3();
+    for (const mesh of this.parts.values()) {
+      mesh.geometry.computeBoundingBox();
+      box.union(mesh.geometry.boundingBox!.clone().applyMatrix4(mesh.matrix));
+    }
+    const sphere = box.getBoundingSphere(new THREE.Sphere());
+    const d = sphere.radius / Math.sin(THREE.MathUtils.degToRad(this.camera.fov / 2)) * 0.92;
+    this.controls.target.copy(sphere.center);
+    const dir = new THREE.Vector3(0.45, -1, 0.5).normalize();
+    this.camera.position.copy(sphere.center).addScaledVector(dir, d);
     this.camera.near = d / 50;
     this.camera.far = d * 50;
     this.camera.updateProjectionMatrix();
@@ -206,7 +217,7 @@ export class FwValveView extends LitElement {
 
   override render() {
     return html`<div class="stage">${this.webglError ? html`<p class="fallback">This browser could not start 3D drawing (${this.webglError}). The sizes, plot and downloads still work.</p>` : ''}</div>
-      <div class="legend" aria-hidden="true"><span style="background:#cdbb98"></span>housing<span style="background:#e07b39"></span>float<span style="background:#4f7b9a"></span>nozzle<span style="background:#6d8f4e"></span>pin<span style="background:#3d8fd1;opacity:.6"></span>water held (tank full)</div>`;
+      <div class="legend" aria-hidden="true"><span style="background:#cdbb98"></span>housing<span style="background:#e07b39"></span>float<span style="background:#4f7b9a"></span>nozzle<span style="background:#6d8f4e"></span>pin<span style="background:#2e2e2e"></span>pad<span style="background:#3d8fd1;opacity:.6"></span>water held (tank full)</div>`;
   }
 }
 

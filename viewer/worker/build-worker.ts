@@ -13,7 +13,7 @@ const scope = self as unknown as DedicatedWorkerGlobalScope;
 
 function transferables(meshes: PartMeshes | null): Transferable[] {
   if (!meshes) return [];
-  return Object.values(meshes).flatMap((m) => [m.positions.buffer, m.indices.buffer]);
+  return Object.values(meshes).flatMap((m) => (m ? [m.positions.buffer, m.indices.buffer] : []));
 }
 
 async function handle(req: WorkerRequest): Promise<void> {
@@ -24,7 +24,7 @@ async function handle(req: WorkerRequest): Promise<void> {
     const reply: BuiltReply = { type: 'built', id: req.id, sizing, meshes: null, transforms: null, sizeMs: t1 - t0, buildMs: 0 };
     if (sizing.ok) {
       try {
-        reply.meshes = await buildParts(sizing, { quality: 'preview' });
+        reply.meshes = await buildParts(sizing, { quality: 'preview', withPad: true });
         reply.transforms = { rest: assemblyTransforms(sizing, 'rest'), seal: assemblyTransforms(sizing, 'seal') };
       } catch (error) {
         reply.solidError = error instanceof Error ? error.message : String(error);

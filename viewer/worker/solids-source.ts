@@ -1,2 +1,2 @@
-/** Where the workbench gets its part builders (one line to switch). */
-export { buildParts, assemblyTransforms } from './stand-in-solids.ts';
+/** Where the workbench gets its part builders. */
+export { buildParts, assemblyTransforms } from '../../generator/solids/index.ts';

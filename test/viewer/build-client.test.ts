@@ -1,0 +1,45 @@
+/**
+ * The build queue: at most one build running and one waiting, the newest input
+ * replacing the waiting one (common practice for live previews: never queue stale work).
+ */
+import { describe, expect, it } from 'vitest';
+import { BuildClient } from '../../viewer/lib/build-client.ts';
+import type { DesignInputs } from '../../generator/sizing/inputs.ts';
+import type { WorkerReply, WorkerRequest } from '../../viewer/worker/protocol.ts';
+
+class FakeWorker {
+  sent: WorkerRequest[] = [];
+  onmessage: ((e: MessageEvent<WorkerReply>) => void) | null = null;
+  onerror: ((e: ErrorEvent) => void) | null = null;
+  postMessage(req: WorkerRequest) {
+    this.sent.push(req);
+  }
+  reply(id: number) {
+    this.onmessage!({ data: { type: 'built', id, sizing: { ok: false, reasons: [], waysOut: [], warnings: [] }, meshes: null, transforms: null, sizeMs: 1, buildMs: 0 } } as MessageEvent<WorkerReply>);
+  }
+  terminate() {}
+}
+
+const inputs = (headMaxM: number) => ({ headMaxM }) as DesignInputs;
+
+describe('BuildClient', () => {
+  it('sends the newest waiting input after the running build and drops the ones in between', () => {
+    const workers: FakeWorker[] = [];
+    const got: [number, boolean][] = [];
+    const client = new BuildClient((r, newer) => got.push([r.id, newer]), () => {}, () => {
+      const w = new FakeWorker();
+      workers.push(w);
+      return w as unknown as Worker;
+    });
+    const a = client.build(inputs(1));
+    client.build(inputs(2));
+    const c = client.build(inputs(3));
+    expect(workers).toHaveLength(1);
+    expect(workers[0].sent.map((r) => r.id)).toEqual([a]);
+    workers[0].reply(a);
+    expect(workers[0].sent.map((r) => r.id)).toEqual([a, c]);
+    expect((workers[0].sent[1] as { inputs: DesignInputs }).inputs.headMaxM).toBe(3);
+    workers[0].reply(c);
+    expect(got).toEqual([[a, true], [c, false]]);
+  });
+});
