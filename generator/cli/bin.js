@@ -7,5 +7,11 @@ import { register } from 'tsx/esm/api';
 const tsconfig = fileURLToPath(new URL('../../tsconfig.json', import.meta.url));
 register({ tsconfig: existsSync(tsconfig) ? tsconfig : false });
 
+// A reader that stops early (`floatwright size ... | head`) is not a fault.
+process.stdout.on('error', (error) => {
+  if (error.code === 'EPIPE') process.exit(process.exitCode ?? 0);
+  throw error;
+});
+
 const { runCli } = await import('./main.ts');
 process.exitCode = await runCli(process.argv.slice(2));
