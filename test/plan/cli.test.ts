@@ -25,7 +25,7 @@ function floatwright(...args: string[]): Promise<{ status: number | null; stdout
 
 /** Edge uses after welding STL corners by exact position: every edge twice means closed. */
 function closedStl(bytes: Buffer): boolean {
-  const geometry = new STLLoader().parse(bytes.buffer.slice(bytes.byteOffset, bytes.byteOffset + bytes.byteLength));
+  const geometry = new STLLoader().parse(bytes.buffer.slice(bytes.byteOffset, bytes.byteOffset + bytes.byteLength) as ArrayBuffer);
   const p = geometry.getAttribute('position');
   const key = (i: number) => `${p.getX(i)},${p.getY(i)},${p.getZ(i)}`;
   const uses = new Map<string, number>();
