@@ -115,16 +115,20 @@ describe.skipIf(!haveChromium)('workbench in Chromium', () => {
     await head.fill('');
     await head.pressSequentially('2.2', { delay: 30 });
     const level = page.getByLabel('Water depth to hold');
-    const before = await buildId();
-    await level.fill('');
-    await page.evaluate(() => document.querySelector('fw-app')!.removeAttribute('data-input-to-preview-ms'));
-    await level.pressSequentially('45', { delay: 60 });
-    await page.waitForFunction(() => document.querySelector('fw-app')!.hasAttribute('data-input-to-preview-ms'), null, { timeout: 20_000 });
-    await waitBuildAfter(before);
-    await expect.poll(() => page.locator('[data-result="level-full"]').textContent()).toBe('45.0 mm');
-    const ms = Number(await app().getAttribute('data-input-to-preview-ms'));
-    console.log(`[e2e] input-to-preview: ${ms.toFixed(0)} ms (last keystroke to the preview drawn; sizing ${await app().getAttribute('data-size-ms')} ms, parts ${await app().getAttribute('data-parts-ms')} ms in the worker)`);
-    expect(ms).toBeGreaterThan(0); // measured, never a pass/fail on time
+    const samples: number[] = [];
+    for (const value of ['52', '38', '45']) {
+      const before = await buildId();
+      await level.fill('');
+      await page.evaluate(() => document.querySelector('fw-app')!.removeAttribute('data-input-to-preview-ms'));
+      await level.pressSequentially(value, { delay: 60 });
+      await page.waitForFunction(() => document.querySelector('fw-app')!.hasAttribute('data-input-to-preview-ms'), null, { timeout: 20_000 });
+      await waitBuildAfter(before);
+      await expect.poll(() => page.locator('[data-result="level-full"]').textContent()).toBe(`${value}.0 mm`);
+      samples.push(Number(await app().getAttribute('data-input-to-preview-ms')));
+    }
+    const sorted = [...samples].sort((a, b) => a - b);
+    console.log(`[e2e] input-to-preview (last keystroke to the preview drawn), 3 edits: ${samples.map((m) => m.toFixed(0)).join(', ')} ms; median ${sorted[1].toFixed(0)} ms (last build: sizing ${await app().getAttribute('data-size-ms')} ms, parts ${await app().getAttribute('data-parts-ms')} ms in the worker)`);
+    expect(sorted[1]).toBeGreaterThan(0); // measured, never a pass/fail on time
     // DESIGN's worked scale (2.2 m head, 45 mm level): a float of roughly 54 mm across
     const float = await page.locator('[data-result="float"] b').textContent();
     const diameter = Number(float!.match(/([\d.]+) mm/)![1]);
@@ -176,6 +180,14 @@ describe.skipIf(!haveChromium)('workbench in Chromium', () => {
     }
     expect(names.some((n) => n.endsWith('.3mf'))).toBe(true);
     expect(names.some((n) => n.endsWith('.json'))).toBe(true);
+  });
+
+  it('opens the build sheet with the cautions in a tab to print', async () => {
+    const [sheet] = await Promise.all([context.waitForEvent('page', { timeout: 30_000 }), page.getByRole('button', { name: 'Build sheet' }).click()]);
+    await sheet.waitForFunction(() => document.body?.innerText.includes('Low pressure only'), null, { timeout: 20_000 });
+    expect(await sheet.locator('h1').count()).toBe(1);
+    await sheet.screenshot({ path: join(SHOTS, '09-build-sheet.png') });
+    await sheet.close();
   });
 
   it('marks a bad value and keeps the last good design', async () => {

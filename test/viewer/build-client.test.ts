@@ -15,7 +15,7 @@ class FakeWorker {
     this.sent.push(req);
   }
   reply(id: number) {
-    this.onmessage!({ data: { type: 'built', id, sizing: { ok: false, reasons: [], waysOut: [], warnings: [] }, meshes: null, transforms: null, sizeMs: 1, buildMs: 0 } } as MessageEvent<WorkerReply>);
+    this.onmessage!({ data: { type: 'built', id, sizing: { ok: false, reasons: [], waysOut: [], warnings: [] }, meshes: null, transforms: null, sizeMs: 1, buildMs: 0 } } as unknown as MessageEvent<WorkerReply>);
   }
   terminate() {}
 }

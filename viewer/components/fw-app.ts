@@ -262,12 +262,19 @@ export class FwApp extends LitElement {
       download({ name: 'floatwright-design.json', mime: 'application/json', bytes: new TextEncoder().encode(JSON.stringify(doc, null, 2) + '\n') });
       return;
     }
-    this.busy = 'Making your files at print quality…';
+    this.busy = e.detail.kind === 'sheet' ? 'Writing the build sheet…' : 'Making your files at print quality…';
+    // The sheet opens in a new tab to read and print; the tab must open inside the click, before the worker answers.
+    const sheetTab = e.detail.kind === 'sheet' ? globalThis.open?.('', '_blank') ?? null : null;
     try {
       const files: ExportFile[] = await this.client!.exportFiles(good.inputs, doc, e.detail.kind, e.detail.part);
-      for (const f of files) download(f);
+      for (const f of files) {
+        if (sheetTab && f.mime === 'text/html') {
+          sheetTab.location.href = URL.createObjectURL(new Blob([f.bytes as BlobPart], { type: 'text/html' }));
+        } else download(f);
+      }
       this.busy = '';
     } catch (error) {
+      sheetTab?.close();
       this.busy = '';
       this.notice = { kind: 'bad', text: `The files could not be made: ${error instanceof Error ? error.message : String(error)}` };
     }

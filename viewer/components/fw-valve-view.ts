@@ -197,7 +197,7 @@ export class FwValveView extends LitElement {
       box.union(mesh.geometry.boundingBox!.clone().applyMatrix4(mesh.matrix));
     }
     const sphere = box.getBoundingSphere(new THREE.Sphere());
-    const d = sphere.radius / Math.sin(THREE.MathUtils.degToRad(this.camera.fov / 2)) * 0.92;
+    const d = sphere.radius / Math.sin(THREE.MathUtils.degToRad(this.camera.fov / 2)) * 0.72;
     this.controls.target.copy(sphere.center);
     const dir = new THREE.Vector3(0.45, -1, 0.5).normalize();
     this.camera.position.copy(sphere.center).addScaledVector(dir, d);

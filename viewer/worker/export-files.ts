@@ -32,7 +32,7 @@ export function exportFiles(kind: ExportKind, sizing: SizingSuccess, document: u
     case '3mf':
       return [plate(base, need(), document)];
     case 'sheet':
-      return [{ name: `${base}-build-sheet.html`, mime: 'text/html', bytes: strToU8(buildSheet(sizing, document)) }];
+      return [{ name: `${base}-build-sheet.html`, mime: 'text/html', bytes: strToU8(buildSheet(sizing, document, base)) }];
     case 'zip': {
       const m = need();
       const entries: Record<string, Uint8Array> = {};
@@ -42,7 +42,7 @@ export function exportFiles(kind: ExportKind, sizing: SizingSuccess, document: u
       }
       const p = plate(base, m, document);
       entries[p.name] = p.bytes;
-      entries[`${base}-build-sheet.html`] = strToU8(buildSheet(sizing, document));
+      entries[`${base}-build-sheet.html`] = strToU8(buildSheet(sizing, document, base));
       entries[`${base}.json`] = strToU8(JSON.stringify(document, null, 2) + '\n');
       return [{ name: `${base}.zip`, mime: 'application/zip', bytes: zipSync(entries, { level: 6 }) }];
     }
