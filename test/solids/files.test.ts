@@ -17,9 +17,10 @@ import type { Io } from '../../generator/cli/command.ts';
 import { buildSheetHtml, buildSheetMarkdown } from '../../generator/doc/build-sheet.ts';
 import { CAUTIONS } from '../../generator/doc/cautions.ts';
 import { buildParts } from '../../generator/solids/index.ts';
-import { countEdgeUses, meshVolumeMm3, writeStlBinary, type IndexedMesh } from '../../generator/solids/mesh/index.ts';
+import { countEdgeUses, meshVolumeMm3, segmentsFor, writeStlBinary, type IndexedMesh } from '../../generator/solids/mesh/index.ts';
+import { floatShellVolumeMm3 } from '../../generator/sizing/float/float-shape.ts';
 import { writeDesignFiles } from '../../generator/solids/write-design-files.ts';
-import { presetFiles, ROOT, sizePreset } from './helpers.ts';
+import { cornersOn, facetedHousingMm3, facetedNozzleMm3, facetedPinMm3, presetFiles, ROOT, sizePreset } from './helpers.ts';
 
 const scratch = mkdtempSync(join(tmpdir(), 'fw-solids-'));
 afterAll(() => rmSync(scratch, { recursive: true, force: true }));
@@ -52,6 +53,16 @@ describe('every preset builds', () => {
       const position = geometry.getAttribute('position');
       expect(position.count / 3, `${file} ${name}`).toBe(mesh.indices.length / 3);
       expect(Math.abs(soupVolume(position.array) / meshVolumeMm3(mesh) - 1), `${file} ${name}`).toBeLessThan(1e-6);
+    }
+    // volumes against the sizing core's formulas for the drawn facets (helpers.ts), within 1 %
+    const expected = {
+      housing: facetedHousingMm3(sizing, 'preview'),
+      float: floatShellVolumeMm3(sizing.parts.float) * cornersOn(segmentsFor(sizing.parts.float.outerDiameterMm / 2, 'preview')),
+      nozzle: facetedNozzleMm3(sizing, 'preview'),
+      pin: facetedPinMm3(sizing, 'preview'),
+    };
+    for (const [name, v] of Object.entries(expected)) {
+      expect(Math.abs(meshVolumeMm3(parts[name as keyof typeof expected]) / v - 1), `${file} ${name}`).toBeLessThan(0.01);
     }
   });
 });

@@ -16,6 +16,8 @@ import { fileURLToPath } from 'node:url';
 import { parseDesign, type NormalizedDoc } from '../../generator/doc/schema.ts';
 import { sizeDesign } from '../../generator/sizing/size-design.ts';
 import type { SizingSuccess } from '../../generator/sizing/result.ts';
+import { housingVolumeMm3, nozzleVolumeMm3 } from '../../generator/sizing/parts/part-volumes.ts';
+import { segmentsFor, type Quality } from '../../generator/solids/mesh/index.ts';
 
 export const ROOT = fileURLToPath(new URL('../..', import.meta.url));
 
@@ -82,4 +84,39 @@ export function clippedPolygon(r: number, n: number, yMin: number): [number, num
 /** Transform an xyz point by a column-major 4x4. */
 export function apply(m: readonly number[], x: number, y: number, z: number): [number, number, number] {
   return [m[0] * x + m[4] * y + m[8] * z + m[12], m[1] * x + m[5] * y + m[9] * z + m[13], m[2] * x + m[6] * y + m[10] * z + m[14]];
+}
+
+/** Analytic volumes for the faceted parts (helpers.ts explains the equal-area radii). */
+export function facetedHousingMm3(s: SizingSuccess, q: Quality): number {
+  const h = structuredClone(s.parts.housing);
+  const n = segmentsFor(h.foot.outerDiameterMm / 2, q);
+  const outer = Math.sqrt(cornersOn(n));
+  const hole = Math.sqrt(flatsOn(n));
+  h.outerDiameterMm *= outer;
+  h.foot.outerDiameterMm *= outer;
+  h.bossOuterDiameterMm *= outer;
+  h.boreMm *= hole;
+  h.seatBoreMm *= hole;
+  for (const d of [h.vents, h.foot.anchorHoles, h.pinHoles]) d.diameterMm *= Math.sqrt(flatsOn(segmentsFor(d.diameterMm / 2, q)));
+  return housingVolumeMm3(h);
+}
+
+export function facetedNozzleMm3(s: SizingSuccess, q: Quality): number {
+  const n = structuredClone(s.parts.nozzle);
+  const f = Math.sqrt(cornersOn(segmentsFor(n.shoulderDiameterMm / 2, q)));
+  n.orificeMm *= f;
+  n.lipDiameterMm *= f;
+  n.shoulderDiameterMm *= f;
+  n.collarDiameterMm *= f;
+  n.barb.rootDiameterMm *= f;
+  n.barb.crestDiameterMm *= f;
+  return nozzleVolumeMm3(n);
+}
+
+export function facetedPinMm3(s: SizingSuccess, q: Quality): number {
+  const p = s.parts.pin;
+  const n = segmentsFor(p.diameterMm / 2, q);
+  // the section: the N-gon on the pin's circle, less what lies below the flat
+  const section = shoelace(clippedPolygon(p.diameterMm / 2, n, -p.flatOffsetMm));
+  return section * p.lengthMm + p.head.lengthMm * p.head.widthMm * p.head.heightMm;
 }

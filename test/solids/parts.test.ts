@@ -8,9 +8,7 @@
  * pad counted) within 1 %.
  */
 import { beforeAll, describe, expect, it } from 'vitest';
-import { housingVolumeMm3, nozzleVolumeMm3 } from '../../generator/sizing/parts/part-volumes.ts';
 import { floatShellVolumeMm3 } from '../../generator/sizing/float/float-shape.ts';
-import type { SizingSuccess } from '../../generator/sizing/result.ts';
 import { buildPart, buildParts, PartBuildError } from '../../generator/solids/index.ts';
 import {
   countEdgeUses,
@@ -21,9 +19,8 @@ import {
   segmentsFor,
   type IndexedMesh,
   type ManifoldToplevel,
-  type Quality,
 } from '../../generator/solids/mesh/index.ts';
-import { clippedPolygon, cornersOn, flatsOn, SCALE_EXAMPLE, shoelace, sizeDoc } from './helpers.ts';
+import { cornersOn, facetedHousingMm3, facetedNozzleMm3, facetedPinMm3, SCALE_EXAMPLE, sizeDoc } from './helpers.ts';
 
 let wasm: ManifoldToplevel;
 const { sizing } = sizeDoc(SCALE_EXAMPLE);
@@ -44,41 +41,6 @@ function checkClosed(mesh: IndexedMesh, name: string): void {
   } finally {
     manifold.delete();
   }
-}
-
-/** Analytic volumes for the faceted parts (helpers.ts explains the equal-area radii). */
-function facetedHousingMm3(s: SizingSuccess, q: Quality): number {
-  const h = structuredClone(s.parts.housing);
-  const n = segmentsFor(h.foot.outerDiameterMm / 2, q);
-  const outer = Math.sqrt(cornersOn(n));
-  const hole = Math.sqrt(flatsOn(n));
-  h.outerDiameterMm *= outer;
-  h.foot.outerDiameterMm *= outer;
-  h.bossOuterDiameterMm *= outer;
-  h.boreMm *= hole;
-  h.seatBoreMm *= hole;
-  for (const d of [h.vents, h.foot.anchorHoles, h.pinHoles]) d.diameterMm *= Math.sqrt(flatsOn(segmentsFor(d.diameterMm / 2, q)));
-  return housingVolumeMm3(h);
-}
-
-function facetedNozzleMm3(s: SizingSuccess, q: Quality): number {
-  const n = structuredClone(s.parts.nozzle);
-  const f = Math.sqrt(cornersOn(segmentsFor(n.shoulderDiameterMm / 2, q)));
-  n.orificeMm *= f;
-  n.lipDiameterMm *= f;
-  n.shoulderDiameterMm *= f;
-  n.collarDiameterMm *= f;
-  n.barb.rootDiameterMm *= f;
-  n.barb.crestDiameterMm *= f;
-  return nozzleVolumeMm3(n);
-}
-
-function facetedPinMm3(s: SizingSuccess, q: Quality): number {
-  const p = s.parts.pin;
-  const n = segmentsFor(p.diameterMm / 2, q);
-  // the section: the N-gon on the pin's circle, less what lies below the flat
-  const section = shoelace(clippedPolygon(p.diameterMm / 2, n, -p.flatOffsetMm));
-  return section * p.lengthMm + p.head.lengthMm * p.head.widthMm * p.head.heightMm;
 }
 
 describe('every part is a closed 2-manifold resting on z = 0', () => {
