@@ -17,7 +17,7 @@ export const DESIGN_FLAGS = [
   { flag: 'head-min', path: 'supply.headMin', help: 'lowest supply head (default: the highest head)', example: '1.6m' },
   { flag: 'level', path: 'level.target', help: 'target water depth above the container floor', example: '45mm' },
   { flag: 'material', path: 'print.material', help: 'print material: PLA, PETG, ABS, ASA, PP, PA12, TPU 95A', example: 'petg' },
-  { flag: 'wall', path: 'print.wall', help: 'housing wall thickness (default 2.4 mm)', example: '2.25mm' },
+  { flag: 'wall', path: 'print.wall', help: 'housing wall thickness (default 2.25 mm, five 0.45 mm lines)', example: '2.25mm' },
   { flag: 'orifice', path: 'nozzle.orifice', help: 'nozzle orifice diameter (default 2 mm)', example: '1.5mm' },
   { flag: 'seal-diameter', path: 'nozzle.sealDiameter', help: 'outer diameter of the nozzle lip (default 5 mm)', example: '4mm' },
   { flag: 'tube-diameter', path: 'supply.tubeInnerDiameter', help: 'supply tube inner diameter (default 4 mm)', example: '4mm' },

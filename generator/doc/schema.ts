@@ -77,7 +77,7 @@ export const DEFAULT_DOCUMENT = {
   },
   nozzle: { orifice: '2 mm', sealDiameter: '5 mm' },
   seal: { preload: '0.1 N', padThickness: '3 mm', indentation: '0.5 mm', padDensity: '1.2 g/cm3' },
-  print: { material: DEFAULT_MATERIAL_NAME, wall: '2.4 mm', lineWidth: '0.45 mm' },
+  print: { material: DEFAULT_MATERIAL_NAME, wall: '2.25 mm', lineWidth: '0.45 mm' },
   limits: { maxOuterDiameter: '120 mm' },
   reserve: 1.5,
 } as const;

@@ -49,7 +49,7 @@ describe('defaults', () => {
       calibration: [],
       materialName: 'PETG',
       materialDensityKgM3: 1270,
-      wallM: 0.0024,
+      wallM: 0.00225, // five 0.45 mm lines (the lead moved the default from 2.4 mm so it prints without gap fill)
       lineWidthM: 0.00045,
       maxOuterDiameterM: 0.12,
       reserve: 1.5,
