@@ -227,6 +227,12 @@ describe.skipIf(!haveChromium)('workbench in Chromium', () => {
     await shot('07-bad-link');
   });
 
+  it('refuses a bad design file and keeps the current design', async () => {
+    await page.locator('input[type="file"]').setInputFiles({ name: 'broken.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify({ supply: { headMax: '2 m' }, level: { target: '900 mm' } })) });
+    await expect.poll(() => page.locator('[data-notice="bad"]').textContent()).toMatch(/level\.target/);
+    expect(await page.getByLabel('Water depth to hold').inputValue()).toBe('50');
+  });
+
   it('offers a way out when no valve fits, and applies it in one click', async () => {
     const before = await buildId();
     await page.getByLabel('Tank full: water height above the valve').fill('3');

@@ -87,7 +87,18 @@ export class FwDesignForm extends LitElement {
   }
 
   override render() {
-    return html`${FIELD_GROUPS.map(
+    const name = getAt(this.doc, 'name');
+    const nameError = this.errors['name'];
+    return html`<fieldset>
+        <legend>This valve</legend>
+        <div class="field ${nameError ? 'bad' : ''}">
+          <label for="f-name">Name (used for the file names)</label>
+          <input id="f-name" name="name" style="width: 100%; box-sizing: border-box" maxlength="80" autocomplete="off" .value=${typeof name === 'string' ? name : ''}
+            aria-describedby="f-name-msg" @input=${(e: InputEvent) => this.emit('name', (e.target as HTMLInputElement).value || undefined)} />
+          <div class="msg" id="f-name-msg">${nameError ?? ''}</div>
+        </div>
+      </fieldset>
+      ${FIELD_GROUPS.map(
       (g) => html`<fieldset>
         <legend>${g.title}</legend>
         ${g.intro ? html`<p class="intro">${g.intro}</p>` : nothing}

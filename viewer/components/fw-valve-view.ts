@@ -66,7 +66,7 @@ export class FwValveView extends LitElement {
     this.renderer.localClippingEnabled = true;
     this.renderer.setPixelRatio(Math.min(2, globalThis.devicePixelRatio || 1));
     this.stage.append(this.renderer.domElement);
-    this.renderer.domElement.setAttribute('aria-label', '3D view of the valve: drag to turn, wheel to zoom');
+    this.renderer.domElement.setAttribute('aria-label', '3D view of the valve: drag to turn, wheel to zoom, arrow keys to move');
     this.renderer.domElement.setAttribute('role', 'img');
     this.camera.up.set(0, 0, 1);
     this.scene.add(new THREE.HemisphereLight(0xffffff, 0x8a8270, 1.6));
@@ -74,6 +74,9 @@ export class FwValveView extends LitElement {
     sun.position.set(-150, -250, 300);
     this.scene.add(sun);
     this.controls = new OrbitControls(this.camera, this.renderer.domElement);
+    // keyboard: focus the view (Tab) and use the arrow keys to move it
+    this.renderer.domElement.tabIndex = 0;
+    this.controls.listenToKeyEvents(this.renderer.domElement);
     this.controls.addEventListener('change', () => this.draw());
     this.resizeObserver = new ResizeObserver(() => this.resize());
     this.resizeObserver.observe(this.stage);
