@@ -193,7 +193,7 @@ export function formatSizingText(result: SizingSuccess, heading?: string): strin
 export function formatFailureText(failure: SizingFailure): string {
   const lines = ['No valve size works for this design.', '', 'Why'];
   lines.push(...failure.reasons.map((r) => `  - ${wrap(r.message, 76)}`));
-  lines.push('', 'Ways out (change one of these)');
+  lines.push('', 'Ways out');
   if (failure.waysOut.length === 0) lines.push('  - none found within the limits');
   lines.push(...failure.waysOut.map((w) => `  - ${wrap(`${w.field} = ${w.value}: ${w.message}`, 76)}`));
   if (failure.warnings.length) lines.push('', 'Warnings', ...warningLines(failure.warnings));

@@ -103,6 +103,15 @@ function failure(b: DesignBasis, outcome: ReturnType<typeof searchSize>): Sizing
     const v = Math.ceil(outcome.smallestWorkingFootMm);
     waysOut.push({ field: 'limits.maxOuterDiameter', value: `${v} mm`, message: `allow a housing foot of ${v} mm across` });
   }
+  // Neither the level nor the limit alone is enough: name the pair that works together.
+  const any = outcome.nearestLevelAndFoot;
+  if (waysOut.length === 0 && Number.isFinite(any.levelMm)) {
+    const level = Math.ceil(Math.max(any.levelMm, targetMm) * 2) / 2;
+    const foot = Math.ceil(any.footMm);
+    const both = `a target level of at least ${fmt(level)} mm together with a housing foot of ${foot} mm across`;
+    waysOut.push({ field: 'level.target', value: `${fmt(level)} mm`, message: both });
+    waysOut.push({ field: 'limits.maxOuterDiameter', value: `${foot} mm`, message: both });
+  }
   return { ok: false, reasons, waysOut, warnings: [] };
 }
 

@@ -18,6 +18,12 @@ export interface SearchOutcome {
   lowestReachableMm: number;
   /** smallest foot diameter among designs that work if the diameter limit is ignored, mm */
   smallestWorkingFootMm: number;
+  /**
+   * Ignoring both the target and the diameter limit, the design that needs the
+   * smallest change to the two together (relative rise of the level plus relative
+   * growth of the foot): its lowest reachable level and its foot, mm.
+   */
+  nearestLevelAndFoot: { levelMm: number; footMm: number };
 }
 
 /**
@@ -67,6 +73,8 @@ export function searchSize(b: DesignBasis, drainAreaMm2: number): SearchOutcome 
   let bestIndex = -1;
   let lowestReachable = Infinity;
   let smallestFoot = Infinity;
+  const nearest = { levelMm: Infinity, footMm: Infinity, cost: Infinity };
+  const targetMm = b.inputs.targetLevelM * 1e3;
   const results: (Candidate | ConstraintCode[])[] = [];
   const limitMm = b.inputs.maxOuterDiameterM * 1e3;
   for (let i = 0; ; i++) {
@@ -79,6 +87,12 @@ export function searchSize(b: DesignBasis, drainAreaMm2: number): SearchOutcome 
     for (const code of c.violations) rejections.set(code, (rejections.get(code) ?? 0) + 1);
     const others = c.violations.filter((v) => v !== 'travel');
     if (others.length === 0) lowestReachable = Math.min(lowestReachable, c.minimumReachableMm);
+    const rest = c.violations.filter((v) => v !== 'travel' && v !== 'outer-diameter-limit');
+    if (rest.length === 0) {
+      const foot = c.housing.foot.outerDiameterMm;
+      const cost = Math.max(0, c.minimumReachableMm - targetMm) / targetMm + Math.max(0, foot - limitMm) / limitMm;
+      if (cost < nearest.cost) Object.assign(nearest, { levelMm: c.minimumReachableMm, footMm: foot, cost });
+    }
     const allButLimit = c.violations.filter((v) => v !== 'outer-diameter-limit');
     if (allButLimit.length === 0) smallestFoot = Math.min(smallestFoot, c.housing.foot.outerDiameterMm);
     if (c.violations.length === 0 && (!best || massKey(c.totalMassKg) < massKey(best.totalMassKg))) {
@@ -104,5 +118,12 @@ export function searchSize(b: DesignBasis, drainAreaMm2: number): SearchOutcome 
       }
     }
   }
-  return { best, boundBy, rejections, lowestReachableMm: lowestReachable, smallestWorkingFootMm: smallestFoot };
+  return {
+    best,
+    boundBy,
+    rejections,
+    lowestReachableMm: lowestReachable,
+    smallestWorkingFootMm: smallestFoot,
+    nearestLevelAndFoot: { levelMm: nearest.levelMm, footMm: nearest.footMm },
+  };
 }
