@@ -137,3 +137,16 @@ describe('infeasible designs say why and how to make them work', () => {
     expect(thin.waysOut.map((w) => w.field).sort()).toEqual(['nozzle.orifice', 'supply.tubeInnerDiameter']);
   });
 });
+
+describe('when no single change helps', () => {
+  it('names a level and a diameter limit that work together', () => {
+    const inp = defaultInputs({ headMaxM: 3.0, headMinM: 3.0, targetLevelM: 0.008, maxOuterDiameterM: 0.04 });
+    const r = sizeDesign(inp) as SizingFailure;
+    expect(r.ok).toBe(false);
+    const level = r.waysOut.find((w) => w.field === 'level.target');
+    const limit = r.waysOut.find((w) => w.field === 'limits.maxOuterDiameter');
+    expect(level && limit).toBeTruthy();
+    const fixed = sizeDesign({ ...inp, targetLevelM: parseFloat(level!.value) / 1000, maxOuterDiameterM: parseFloat(limit!.value) / 1000 });
+    expect(fixed.ok).toBe(true);
+  });
+});
