@@ -6,6 +6,7 @@
  * to DIR and renamed into place only when everything is written.
  */
 import { mkdtemp, readdir, rename, rm, writeFile } from 'node:fs/promises';
+import { availableParallelism } from 'node:os';
 import { basename, dirname, join, resolve } from 'node:path';
 import { parseArgs } from 'node:util';
 import type { FieldError } from '../../doc/fields.ts';
@@ -18,7 +19,7 @@ import type { PlanResult } from '../../plan/types.ts';
 import { EXIT_INPUT, EXIT_OK, type Command, type Io } from '../command.ts';
 import { argumentError, readDesignFile } from '../design-input.ts';
 import { formatFieldErrors } from '../format-sizing.ts';
-import type { DesignJob } from '../plan/build-designs.ts';
+import type { BuildPool, DesignJob } from '../plan/build-designs.ts';
 
 const OPTIONS = {
   out: { type: 'string', short: 'o' },
@@ -97,6 +98,8 @@ export interface WritePlanOptions {
   threads?: number;
   /** extra keys for plan.json */
   extra?: Record<string, unknown>;
+  /** build workers started earlier (startBuildPool), left open for the caller to close */
+  pool?: BuildPool;
 }
 
 /**
@@ -128,7 +131,7 @@ export async function writePlanFolder(opts: WritePlanOptions): Promise<{ files: 
         quantity: d.quantity,
       };
     });
-    const built = await buildDesigns({ jobs, root: temp, quality: opts.quality, onProgress: opts.onProgress, threads: opts.threads });
+    const built = await buildDesigns({ jobs, root: temp, quality: opts.quality, onProgress: opts.onProgress, threads: opts.threads, pool: opts.pool });
     const report = planReport(result, built.files);
     await writeFile(join(temp, 'plan-report.md'), planMarkdown(report));
     await writeFile(join(temp, 'plan-report.html'), planHtml(report));
@@ -182,7 +185,17 @@ async function run(argv: string[], io: Io): Promise<number> {
     return inputErrors([{ field: '--out', message: `"${out}" already holds files; choose a new folder, empty it, or add --force to replace it.` }], json, io, 'the command line');
   }
 
-  const read = await readDesignFile(positionals[0]!);
+  // Start the build workers now, so they warm up while the plan is checked and solved.
+  const pool = out !== null && availableParallelism() > 1 ? (await import('../plan/build-designs.ts')).startBuildPool() : null;
+  try {
+    return await planAndWrite(positionals[0]!, out, quality as 'export' | 'preview', values.force === true, json, io, pool);
+  } finally {
+    await pool?.close();
+  }
+}
+
+async function planAndWrite(file: string, out: string | null, quality: 'export' | 'preview', force: boolean, json: boolean, io: Io, pool: BuildPool | null): Promise<number> {
+  const read = await readDesignFile(file);
   if (!read.ok) {
     return inputErrors(read.errors.map((e) => ({ ...e, field: e.field === ROOT_FIELD ? PLAN_ROOT_FIELD : e.field, message: e.message.replace('a design document', 'a plan document') })), json, io);
   }
@@ -203,7 +216,8 @@ async function run(argv: string[], io: Io): Promise<number> {
   if (out !== null) {
     const bar = progressBar(io, !json && process.stdout.isTTY === true);
     const started = performance.now();
-    const built = await writePlanFolder({ result, out, quality: quality as 'export' | 'preview', force: values.force === true, onProgress: bar.update });
+    // One design builds in this thread; more go to the pool.
+    const built = await writePlanFolder({ result, out, quality, force, onProgress: bar.update, ...(pool && result.designs.length > 1 ? { pool } : { threads: 1 }) });
     bar.done();
     files = built.files;
     if (!json) {

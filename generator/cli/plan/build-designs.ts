@@ -1,7 +1,11 @@
 /**
  * Builds every design of a plan into a folder: one sub-folder per design,
- * built on worker threads (one per core, at most one per design) when there
- * is more than one design, in this thread otherwise.
+ * built on this thread and worker threads (together one per core, at most one
+ * per design) when there is more than one design, on this thread otherwise.
+ *
+ * A worker takes about 1.7 s to start (tsx compiles the sources, the WASM
+ * kernel loads), so a caller can start the pool early (`startBuildPool`) and
+ * let it warm up while the plan is solved.
  */
 import { availableParallelism } from 'node:os';
 import { join } from 'node:path';
@@ -12,6 +16,21 @@ import { writeDesignFiles, type DesignFilesOptions } from './write-design-files.
 
 export type DesignJob = Omit<DesignFilesOptions, 'dir'> & { id: string; folder: string };
 
+export interface BuildPool {
+  workers: Worker[];
+  close(): Promise<void>;
+}
+
+/**
+ * Start `threads` build workers; default one fewer than the machine's cores,
+ * since this thread builds too (one worker's start-up is about five designs' build time).
+ */
+export function startBuildPool(threads: number = Math.max(1, availableParallelism() - 1)): BuildPool {
+  // A plain-JS entry that registers tsx itself: under Node 20 a worker does not inherit the parent's loader.
+  const workers = Array.from({ length: Math.max(1, threads) }, () => new Worker(new URL('./build-worker.mjs', import.meta.url)));
+  return { workers, close: async () => void (await Promise.all(workers.map((w) => w.terminate()))) };
+}
+
 export interface BuildDesignsOptions {
   jobs: readonly DesignJob[];
   /** the (temporary) output folder; each job writes into root/job.folder */
@@ -19,8 +38,10 @@ export interface BuildDesignsOptions {
   quality: Quality;
   /** called after each design is written, with how many are done */
   onProgress?: (done: number, total: number) => void;
-  /** at most this many threads; default the machine's available parallelism */
+  /** at most this many threads; default the machine's available parallelism (ignored when `pool` is given) */
   threads?: number;
+  /** an already started pool (left open: the caller closes it) */
+  pool?: BuildPool;
 }
 
 /** Files written per design id (paths relative to root), and triangles in all. */
@@ -28,11 +49,6 @@ export interface BuildDesignsResult {
   files: Record<string, string[]>;
   triangles: number;
   threads: number;
-}
-
-function spawn(): Worker {
-  // A plain-JS entry that registers tsx itself: under Node 20 a worker does not inherit the parent's loader.
-  return new Worker(new URL('./build-worker.mjs', import.meta.url));
 }
 
 export async function buildDesigns(opts: BuildDesignsOptions): Promise<BuildDesignsResult> {
@@ -45,8 +61,8 @@ export async function buildDesigns(opts: BuildDesignsOptions): Promise<BuildDesi
     triangles += tri;
     opts.onProgress?.(++done, jobs.length);
   };
-  const threads = Math.max(1, Math.min(opts.threads ?? availableParallelism(), jobs.length));
-  if (jobs.length <= 1 || threads === 1) {
+  const threads = opts.pool ? opts.pool.workers.length + 1 : Math.max(1, Math.min(opts.threads ?? availableParallelism(), jobs.length));
+  if (!opts.pool && (jobs.length <= 1 || threads === 1)) {
     for (const job of jobs) {
       const r = await writeDesignFiles({ ...job, dir: join(root, job.folder) });
       record(job, r.files, r.triangles);
@@ -55,10 +71,20 @@ export async function buildDesigns(opts: BuildDesignsOptions): Promise<BuildDesi
   }
 
   const queue = [...jobs];
-  const workers = Array.from({ length: threads }, spawn);
+  const pool = opts.pool ?? startBuildPool(threads - 1);
+  const busy = pool.workers.slice(0, Math.max(1, Math.min(pool.workers.length, jobs.length - 1)));
+  const listeners: (() => void)[] = [];
+  // This thread takes jobs from the same queue while the workers do.
+  const local = async () => {
+    for (let job = queue.shift(); job; job = queue.shift()) {
+      const r = await writeDesignFiles({ ...job, dir: join(root, job.folder) });
+      record(job, r.files, r.triangles);
+    }
+  };
   try {
-    await Promise.all(
-      workers.map(
+    await Promise.all([
+      local(),
+      ...busy.map(
         (worker) =>
           new Promise<void>((resolve, reject) => {
             let current: DesignJob | undefined;
@@ -68,21 +94,30 @@ export async function buildDesigns(opts: BuildDesignsOptions): Promise<BuildDesi
               const message: BuildJob = { ...current, dir: join(root, current.folder) };
               worker.postMessage(message);
             };
-            worker.on('message', (m: { id: string; files?: string[]; triangles?: number; error?: string }) => {
+            const onMessage = (m: { ready?: boolean; id?: string; files?: string[]; triangles?: number; error?: string }) => {
+              if (m.ready) return;
               if (m.error !== undefined || !current) return reject(new Error(`design ${m.id}: ${m.error}`));
               record(current, m.files!, m.triangles!);
               next();
-            });
-            worker.on('error', reject);
-            worker.on('exit', (code) => {
+            };
+            const onExit = (code: number) => {
               if (current && !(current.id in files)) reject(new Error(`build worker stopped (exit ${code}) while building ${current.id}`));
+            };
+            worker.on('message', onMessage);
+            worker.on('error', reject);
+            worker.on('exit', onExit);
+            listeners.push(() => {
+              worker.off('message', onMessage);
+              worker.off('error', reject);
+              worker.off('exit', onExit);
             });
             next();
           }),
       ),
-    );
+    ]);
   } finally {
-    await Promise.all(workers.map((w) => w.terminate()));
+    for (const off of listeners) off();
+    if (!opts.pool) await pool.close();
   }
-  return { files, triangles, threads };
+  return { files, triangles, threads: busy.length + 1 };
 }
