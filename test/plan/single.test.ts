@@ -45,6 +45,27 @@ describe('a flat plan with one container', () => {
     expect(c.headMinM).toBeCloseTo(c.headMaxM, 12);
   });
 
+  it('checks the doc comment example: 2.4 m tank, 0.3 m floor, 45 mm level: tip 68.7 mm, head 2.031 m', () => {
+    const doc = parseDesign({ supply: { headMax: '1 m' }, level: { target: '45 mm' } });
+    if (!doc.ok) throw new Error('bad doc');
+    const r = solveTipElevation({ inputs: doc.inputs, floorElevationM: 0.3, tankFullSurfaceElevationM: 2.4, tankLowSurfaceElevationM: 2.4 });
+    expect(r.converged).toBe(true);
+    expect((r.tipElevationM - 0.3) * 1e3).toBeCloseTo(68.7, 1);
+    expect(r.headMaxM).toBeCloseTo(2.031, 3);
+  });
+
+  it('on a float-size step where the iterates cycle, keeps the design sized for the higher head', () => {
+    // A stand-in sizing with a step: tip 70 mm above 2.0 m of head, 50 mm below (fixed-point iteration
+    // on a discontinuous map has no fixed point; Burden and Faires sec. 2.2, from memory).
+    const doc = parseDesign({ supply: { headMax: '1 m' }, level: { target: '45 mm' } });
+    if (!doc.ok) throw new Error('bad doc');
+    const size = (inp: typeof doc.inputs) => ({ ok: true, inputs: inp, nozzle: { tipHeightMm: inp.headMaxM > 2.0 ? 70 : 50 } }) as never;
+    const r = solveTipElevation({ inputs: doc.inputs, floorElevationM: 0, tankFullSurfaceElevationM: 2.06, tankLowSurfaceElevationM: 2.06, size });
+    expect(r.converged).toBe(false);
+    expect(r.tipElevationM).toBeCloseTo(0.07, 12);
+    expect((r.sizing as { inputs: { headMaxM: number } }).inputs.headMaxM).toBeCloseTo(2.01, 9);
+  });
+
   it('converges the fixed point from far-off guesses to the same tip', () => {
     const doc = parseDesign({ supply: { headMax: '1 m', tubeLength: '2 m' }, level: { target: '45 mm' } });
     if (!doc.ok) throw new Error('bad doc');
