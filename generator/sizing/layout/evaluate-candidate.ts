@@ -1,7 +1,7 @@
 import { PART_SIZE_CAP_MM, PRINT_CLEARANCE_MM } from '../constants.ts';
 import { availableLiftN, depthForForceMm } from '../float/depth-for-force.ts';
 import { floatOuterVolumeMm3, floatShape, floatShellVolumeMm3 } from '../float/float-shape.ts';
-import { drainNotchSize, housingSpec, pinTopMinimumMm, VENT_DIAMETER_MM } from '../parts/housing-spec.ts';
+import { drainNotchSize, housingSpec, pinDropBelowHoleCentreMm, pinTopMinimumMm, VENT_DIAMETER_MM } from '../parts/housing-spec.ts';
 import { housingOuterRadiusAtMm, housingVolumeMm3, nozzleVolumeMm3, pinVolumeMm3 } from '../parts/part-volumes.ts';
 import { PIN_DIAMETER_MM, pinSpec } from '../parts/pin-spec.ts';
 import type { FloatSpec, HousingSpec, PinSpec } from '../result.ts';
@@ -112,11 +112,14 @@ export function layoutCandidate(b: DesignBasis, f: FloatSizing, drainAreaMm2: nu
     bossHeightMm: b.bossHeightMm,
     notch,
     pinDiameterMm: PIN_DIAMETER_MM,
-    // the loaded pin rests one clearance below the hole centre
-    pinHoleCenterZMm: pinTop - PIN_DIAMETER_MM / 2 + PRINT_CLEARANCE_MM,
+    // the loaded pin rests in the teardrop's point, c sqrt(2) below the hole centre
+    pinHoleCenterZMm: pinTop - PIN_DIAMETER_MM / 2 + pinDropBelowHoleCentreMm(PRINT_CLEARANCE_MM),
     printClearanceMm: PRINT_CLEARANCE_MM,
   });
-  const span = 2 * housingOuterRadiusAtMm(housing, housing.pinHoles.centerZMm);
+  // the pin must cross the housing where it is widest along its section: at its flat
+  // (lowest, so deepest in the 45-degree flare), r cos 45deg below its axis
+  const pinAxisZ = pinTop - PIN_DIAMETER_MM / 2;
+  const span = 2 * housingOuterRadiusAtMm(housing, pinAxisZ - (PIN_DIAMETER_MM / 2) * Math.SQRT1_2);
   const pin = pinSpec(span, housing.pinHoles.diameterMm);
   const volumes = {
     housingMm3: housingVolumeMm3(housing),

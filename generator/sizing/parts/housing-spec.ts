@@ -41,12 +41,26 @@ export function drainNotchSize(boreMm: number, drainAreaMm2: number): { widthMm:
 }
 
 /**
+ * Where the loaded pin sits in its hole. The hole is a teardrop of radius
+ * R = r + c whose 45-degree point faces down when mounted (up in the deck-down
+ * print). The pin settles into that V: a circle of radius r touching both
+ * 45-degree sides has its centre r sqrt(2) above the point, and the point is
+ * R sqrt(2) below the hole centre, so the pin's centre sits c sqrt(2) below the
+ * hole centre. (The pin's flat, at r cos 45deg, ends exactly at those two
+ * touching points, so it sits the same either way up.) Elementary geometry.
+ */
+export function pinDropBelowHoleCentreMm(printClearanceMm: number): number {
+  return printClearanceMm * Math.SQRT2;
+}
+
+/**
  * Lowest the retainer pin's top can sit, mm: notch height, one wall of plastic
- * over the notch, then the pin hole (pin + clearance); the loaded pin rests one
- * clearance below the hole centre, so its top is notch + wall + pin diameter.
+ * between the notch and the teardrop's point, then the teardrop (its point
+ * (r + c) sqrt(2) below its centre), less the pin's drop into the point:
+ * notch + wall + r (1 + sqrt(2)).
  */
 export function pinTopMinimumMm(notchHeightMm: number, wallMm: number, pinDiameterMm: number): number {
-  return notchHeightMm + wallMm + pinDiameterMm;
+  return notchHeightMm + wallMm + (pinDiameterMm / 2) * (1 + Math.SQRT2);
 }
 
 /**
