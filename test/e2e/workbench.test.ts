@@ -227,6 +227,24 @@ describe.skipIf(!haveChromium)('workbench in Chromium', () => {
     await shot('07-bad-link');
   });
 
+  it('takes bench calibration points and sizes with the fit', async () => {
+    // DESIGN's example bench points: 31 g stops the flow at 0.8 m, 66 g at 2.1 m (our own scenario)
+    const add = page.getByRole('button', { name: 'Add a bench point' });
+    await add.click();
+    await page.getByLabel('Tank height, point 1').fill('0.8');
+    await page.getByLabel('Weight, point 1').fill('31');
+    await add.click();
+    await page.getByLabel('Tank height, point 2').fill('2.1');
+    await page.getByLabel('Weight, point 2').fill('66');
+    // Two points fit F = F_pre + A_eff rho g H exactly (DESIGN "Sizing model"): by hand,
+    // slope = (0.066 - 0.031) kg x 9.80665 / 1.3 m = 0.26402 N/m, A_eff = slope / (998.2 x 9.80665) = 26.97 mm2,
+    // so the equivalent lip is sqrt(4 A_eff / pi) = 5.86 mm.
+    await expect.poll(() => page.locator('[data-result="calibrated-lip"]').textContent()).toBe('5.86 mm');
+    await shot('10-calibrated');
+    for (const n of [2, 1]) await page.getByRole('button', { name: `Remove point ${n}` }).click();
+    await expect.poll(() => page.locator('[data-result="calibrated-lip"]').count()).toBe(0);
+  });
+
   it('refuses a bad design file and keeps the current design', async () => {
     await page.locator('input[type="file"]').setInputFiles({ name: 'broken.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify({ supply: { headMax: '2 m' }, level: { target: '900 mm' } })) });
     await expect.poll(() => page.locator('[data-notice="bad"]').textContent()).toMatch(/level\.target/);

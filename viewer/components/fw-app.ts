@@ -27,11 +27,12 @@ export const TYPING_PAUSE_MS = 40;
 
 type Notice = { kind: 'bad' | 'good'; text: string; link?: string } | null;
 
-/** Blank bench rows the grower has just added are not errors yet. */
-function withoutBlankPoints(doc: Doc): Doc {
+/** Bench rows the grower has not finished (a box still empty) are not used yet, and are not errors. */
+export function withoutBlankPoints(doc: Doc): Doc {
   const points = getAt(doc, 'seal.calibration');
   if (!Array.isArray(points)) return doc;
-  const kept = points.filter((p) => !(p && typeof p === 'object' && !(p as Doc).head && !(p as Doc).mass));
+  const blank = (v: unknown) => v === undefined || v === null || (typeof v === 'string' && v.trim() === '');
+  const kept = points.filter((p) => !(p && typeof p === 'object' && (blank((p as Doc).head) || blank((p as Doc).mass))));
   return setAt(doc, 'seal.calibration', kept.length ? kept : undefined);
 }
 

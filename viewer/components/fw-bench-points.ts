@@ -67,6 +67,7 @@ export class FwBenchPoints extends LitElement {
           </table>`
         : ''}
       ${messages.map(([k, m]) => html`<div class="msg" role="alert">${k}: ${m}</div>`)}
+      ${this.points.some((p) => !p.head || !p.mass) ? html`<p>A row with an empty box is not used until both are filled in.</p>` : ''}
       <button @click=${() => this.change([...this.points, { head: '', mass: '' }])}>Add a bench point</button>
     </fieldset>`;
   }

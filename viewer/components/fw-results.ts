@@ -85,7 +85,7 @@ export class FwResults extends LitElement {
           <dt>Float's lift when under water</dt><dd>${f.forceN(s.float.availableForceN, u)} (${s.float.reserve.toFixed(2)}×)</dd>
           <dt>Drain slots at the bottom</dt><dd>${s.drain.notchCount}, ${f.areaMm2(s.drain.providedAreaMm2, u)} (needs ${f.areaMm2(s.drain.requiredAreaMm2, u)})</dd>
           <dt>Air vents on top</dt><dd>${s.vents.count} × ${f.printMm(s.vents.diameterMm)}</dd>
-          ${s.closingForce.fromCalibration ? html`<dt>Lip width from your bench test</dt><dd>${f.printMm(s.closingForce.equivalentSealDiameterMm, 2)}</dd>` : nothing}
+          ${s.closingForce.fromCalibration ? html`<dt>Lip width from your bench test</dt><dd data-result="calibrated-lip">${f.printMm(s.closingForce.equivalentSealDiameterMm, 2)}</dd>` : nothing}
         </dl>
       </section>
       <section aria-label="Holding down">
