@@ -18,6 +18,8 @@ export type DesignJob = Omit<DesignFilesOptions, 'dir'> & { id: string; folder: 
 
 export interface BuildPool {
   workers: Worker[];
+  /** one per worker: settles when it has loaded the sources and the kernel (rejects if it fails to start) */
+  ready: Promise<void>[];
   close(): Promise<void>;
 }
 
@@ -28,7 +30,21 @@ export interface BuildPool {
 export function startBuildPool(threads: number = Math.max(1, availableParallelism() - 1)): BuildPool {
   // A plain-JS entry that registers tsx itself: under Node 20 a worker does not inherit the parent's loader.
   const workers = Array.from({ length: Math.max(1, threads) }, () => new Worker(new URL('./build-worker.mjs', import.meta.url)));
-  return { workers, close: async () => void (await Promise.all(workers.map((w) => w.terminate()))) };
+  const ready = workers.map(
+    (w) =>
+      new Promise<void>((resolve, reject) => {
+        const onMessage = (m: { ready?: boolean }) => {
+          if (!m.ready) return;
+          w.off('message', onMessage);
+          resolve();
+        };
+        w.on('message', onMessage);
+        w.once('error', reject);
+        w.once('exit', (code) => reject(new Error(`build worker exited (${code}) before it was ready`)));
+      }),
+  );
+  for (const r of ready) r.catch(() => {}); // a worker that never starts just takes no jobs
+  return { workers, ready, close: async () => void (await Promise.all(workers.map((w) => w.terminate()))) };
 }
 
 export interface BuildDesignsOptions {
@@ -85,7 +101,7 @@ export async function buildDesigns(opts: BuildDesignsOptions): Promise<BuildDesi
     await Promise.all([
       local(),
       ...busy.map(
-        (worker) =>
+        (worker, k) =>
           new Promise<void>((resolve, reject) => {
             let current: DesignJob | undefined;
             const next = () => {
@@ -111,7 +127,8 @@ export async function buildDesigns(opts: BuildDesignsOptions): Promise<BuildDesi
               worker.off('error', reject);
               worker.off('exit', onExit);
             });
-            next();
+            // A worker takes jobs only once warm, so a slow start never delays a job this thread could do.
+            pool.ready[k]!.then(next, () => resolve());
           }),
       ),
     ]);
