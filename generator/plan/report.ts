@@ -91,7 +91,7 @@ export function planReport(result: PlanResult, files: Readonly<Record<string, re
   const warnings: string[] = [];
   for (const c of result.containers) {
     if (!c.sizing.ok) {
-      warnings.push(`${c.name}: no size fits. ${c.sizing.reasons.map((r) => r.message).join(' ')}`);
+      warnings.push(`${c.name}: no size fits: ${c.sizing.reasons.map((r) => r.message.replace(/\.$/, '')).join('; ')}.`);
       for (const w of c.waysOut) warnings.push(`${c.name}: way out: ${w.field} = ${w.value} (${w.message}).`);
       continue;
     }
@@ -103,6 +103,7 @@ export function planReport(result: PlanResult, files: Readonly<Record<string, re
     `Tank surface ${f(p.tankFullSurfaceElevationM, 2)} m full, ${f(p.tankLowSurfaceElevationM, 2)} m low; main ${f(p.mainInnerDiameterM * 1e3, 1)} mm bore.`,
     `A container starves when, with every valve open, it gets less than ${Math.round(p.starvingShare * 100)} % of what it gets alone.`,
     starving.length === 0 ? 'No container starves.' : `${starving.length} of ${result.containers.length} container rows would starve: see below.`,
+    ...(result.ok ? [] : [`No valve size fits ${result.containers.filter((c) => !c.sizing.ok).map((c) => c.name).join(', ')}: see the warnings for what would.`]),
   ];
   return {
     title: `floatwright plan${p.name ? `: ${p.name}` : ''}`,

@@ -2,7 +2,7 @@ import type { FieldError } from '../doc/fields.ts';
 import { formatNumber } from '../doc/units.ts';
 import { HEAD_CAP_M } from '../sizing/constants.ts';
 import type { DesignInputs } from '../sizing/inputs.ts';
-import type { SizingResult, SizingSuccess } from '../sizing/result.ts';
+import type { SizingResult, SizingSuccess, WayOut } from '../sizing/result.ts';
 import { sizeDesign } from '../sizing/size-design.ts';
 import { groupDesigns } from './group-designs.ts';
 import { planNetwork, starvingReason } from './plan-network.ts';
@@ -42,6 +42,17 @@ function headProblem(plan: PlanInputs, c: PlanInputs['containers'][number], tip:
     };
   }
   return null;
+}
+
+/** A sizing way out in plan terms: a lower head becomes a higher floor; other fields map to where they were written. */
+function planWayOut(w: WayOut, c: PlanInputs['containers'][number], tip: TipSolution, plan: PlanInputs): WayOut {
+  const headM = w.field === 'supply.headMax' ? Number.parseFloat(w.value) : NaN;
+  if (Number.isFinite(headM)) {
+    const floorM = plan.tankFullSurfaceElevationM - headM - (tip.tipElevationM - c.floorElevationM);
+    const v = Math.ceil(floorM * 100) / 100;
+    return { field: `containers.${c.index}.floorElevation`, value: `${formatNumber(v, 4)} m`, message: `a floor at least ${formatNumber(v, 4)} m up (at most ${w.value} of head), or a lower tank` };
+  }
+  return { ...w, field: planPathFor(w.field, c.origins, `design.${w.field}`) };
 }
 
 /**
@@ -96,7 +107,7 @@ export function solvePlan(plan: PlanInputs, size: (inputs: DesignInputs) => Sizi
       starvingReason: reason,
       tipConverged: tip.converged,
       sizing: s,
-      waysOut: s.ok ? [] : s.waysOut.map((w) => ({ ...w, field: planPathFor(w.field, c.origins, `design.${w.field}`) })),
+      waysOut: s.ok ? [] : s.waysOut.map((w) => planWayOut(w, c, tip, plan)),
     };
   });
 

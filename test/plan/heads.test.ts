@@ -62,4 +62,15 @@ describe('two containers at different floor elevations', () => {
     expect(solved.ok).toBe(false);
     if (!solved.ok) expect(solved.errors[0]).toMatchObject({ field: 'containers.0.floorElevation', message: expect.stringMatching(/too low.*more than 3\.05 m/) });
   });
+
+  it('a container no size fits makes the plan not ok, with ways out named by plan path', () => {
+    const plan = planOf({ ...doc, containers: [row('fine', '0.2 m'), row('shallow', '0 m', { level: '12 mm', maxOuterDiameter: '40 mm' })] });
+    expect(plan.ok).toBe(false);
+    const bad = plan.containers[1]!;
+    expect(bad.design).toBeNull();
+    expect(bad.waysOut.length).toBeGreaterThan(0);
+    for (const w of bad.waysOut) expect(w.field).toMatch(/^containers\.1\.(level|maxOuterDiameter|floorElevation)$|^design\./);
+    expect(bad.waysOut.map((w) => w.field)).toContain('containers.1.level');
+    expect(plan.totals.valves).toBe(1); // only the valve that fits is counted
+  });
 });
