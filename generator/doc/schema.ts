@@ -10,6 +10,7 @@
 import { z } from 'zod';
 import { HEAD_CAP_M, STANDARD_GRAVITY, WATER_DENSITY_20C, WATER_VISCOSITY_20C } from '../sizing/constants.ts';
 import type { CalibrationPoint, DesignInputs } from '../sizing/inputs.ts';
+import { fitSealCalibration } from '../sizing/hydrostatics/fit-seal-calibration.ts';
 import { DEFAULT_MATERIAL_NAME, findMaterial, materialNames } from '../sizing/materials.ts';
 import {
   areaField,
@@ -296,6 +297,12 @@ export const designSchema = section(documentShape).transform((doc, ctx): ParsedD
     calibration.push({ headM: head.measured.si, massKg: point.mass.si });
     calibrationText.push({ head: normalizedText(head.measured.si, 'm'), mass: normalizedText(point.mass.si, 'g') });
   });
+  // The sizing core fits F = F_pre + A_eff rho g H to the bench points; a fit whose area is not positive
+  // (masses that fall as the head rises) cannot size a float, so it is refused here, at the door.
+  if (calibration.length > 0 && calibration.length === (seal.calibration ?? []).length) {
+    const fit = calibrationFitProblem(calibration, calibrationText, rho, seal.preload.si);
+    if (fit) fail(ctx, ['seal', 'calibration'], undefined, fit);
+  }
 
   const lineMm = fromSi(print.lineWidth.si, 'mm');
   const wallSpec = { ...S.wall, min: 2 * lineMm, minExclusive: false, label: `the wall thickness (at least two ${formatNumber(lineMm)} mm line widths)` };
@@ -379,6 +386,20 @@ export const designSchema = section(documentShape).transform((doc, ctx): ParsedD
   };
   return { inputs, document };
 });
+
+/** Why the bench points cannot be fitted (fitted seal area not positive), or null when they can. */
+function calibrationFitProblem(points: CalibrationPoint[], text: { head: string; mass: string }[], rho: number, preloadN: number): string | null {
+  let areaM2: number;
+  try {
+    areaM2 = fitSealCalibration(points, rho, preloadN).sealAreaM2;
+  } catch {
+    areaM2 = Number.NaN;
+  }
+  if (areaM2 > 0) return null;
+  const shown = text.slice(0, 4).map((p) => `${p.mass} at ${p.head}`).join(', ') + (text.length > 4 ? ', ...' : '');
+  const area = Number.isFinite(areaM2) ? ` (fitted seal area ${formatNumber(areaM2 * 1e6)} mm2)` : '';
+  return `${shown} do not rise with head${area}; the mass that stops the flow must grow with the head (fitted seal area more than 0 mm2${points.length === 1 || new Set(points.map((p) => p.headM)).size === 1 ? `, and above the ${formatNumber(preloadN)} N preload` : ''}): check the heads and masses.`;
+}
 
 export type DesignParse = { ok: true; inputs: DesignInputs; document: NormalizedDoc } | { ok: false; errors: FieldError[] };
 

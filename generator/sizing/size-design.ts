@@ -1,4 +1,4 @@
-import { FILAMENT_DIAMETER_MM, HOLD_DOWN_FACTOR, PRINT_CLEARANCE_MM, STANDARD_GRAVITY, STEEL_DENSITY } from './constants.ts';
+import { FILAMENT_DIAMETER_MM, HOLD_DOWN_FACTOR, PART_SIZE_CAP_MM, PRINT_CLEARANCE_MM, STANDARD_GRAVITY, STEEL_DENSITY } from './constants.ts';
 import { depthForForceMm } from './float/depth-for-force.ts';
 import { circleArea } from './hydrostatics/circle-area.ts';
 import { pressurePa } from './hydrostatics/pressure-pa.ts';
@@ -79,6 +79,14 @@ function largestWorking(lo: number, hi: number, ok: (x: number) => boolean, tole
 function failure(b: DesignBasis, outcome: ReturnType<typeof searchSize>): SizingFailure {
   const inp = b.inputs;
   const reasons: Warning[] = [...outcome.rejections.keys()].map((code) => ({ code, message: CONSTRAINT_TEXT[code] }));
+  if (reasons.length === 0) {
+    // No diameter up to the part-size cap had any workable cylinder (the search skips those as "too small"):
+    // even the largest float cannot lift the reserve times the closing force at H_max. Say so, never nothing.
+    reasons.push({
+      code: 'reserve',
+      message: `${CONSTRAINT_TEXT.reserve} (${fmt(b.forceAtHeadMaxN, 2)} N at ${fmt(inp.headMaxM, 2)} m); no float up to ${PART_SIZE_CAP_MM} mm can do that.`,
+    });
+  }
   const waysOut: WayOut[] = [];
   const targetMm = inp.targetLevelM * 1e3;
   if (Number.isFinite(outcome.lowestReachableMm) && outcome.lowestReachableMm > targetMm) {

@@ -220,7 +220,10 @@ describe('refusals name the field, the value and the range', () => {
     const many = Array.from({ length: 21 }, (_, i) => ({ head: `${0.1 * (i + 1)} m`, mass: '20 g' }));
     expect(errorFor(withField('seal.calibration', many), 'seal.calibration')).toContain('at most 20');
     expect(errorFor(withField('seal.calibration', 'lots'), 'seal.calibration')).toContain('not a list');
-    expect(ok(parseDesign(withField('seal.calibration', many.slice(0, 20)))).inputs.calibration).toHaveLength(20);
+    // 20 points that rise with head (hydrostatics: F = F_pre + A rho g H); flat masses cannot be fitted and are refused
+    const rising = many.slice(0, 20).map((p, i) => ({ ...p, mass: `${20 + 10 * i} g` }));
+    expect(ok(parseDesign(withField('seal.calibration', rising))).inputs.calibration).toHaveLength(20);
+    expect(errorFor(withField('seal.calibration', many.slice(0, 20)), 'seal.calibration')).toContain('do not rise with head');
   });
 
   it('checks materials: unknown name, custom density range, custom name needed', () => {

@@ -1,0 +1,245 @@
+/**
+ * Invariants a sized design must keep, written from first principles so they
+ * check the sizing core from outside, and the mesh checks for its parts.
+ * Used by the property tests (fast-check) and by the soak runner; each
+ * function returns a list of problems (empty: all good) instead of throwing,
+ * so the soak can count them.
+ *
+ * Sources:
+ * - Archimedes' principle: full-submersion lift F = (rho V_f - m_f) g.
+ * - Hydrostatics: closing force rho g H (pi/4) d_s^2 + F_pre; the shut-off level
+ *   at H_min lies (H_max - H_min) A_seal / A_float below the one at H_max
+ *   while the water line is on the float's straight side (DESIGN "Vertical layout").
+ * - Orifice equation A_d = Q / (C_d sqrt(2 g dh)), C_d = 0.61 (standard texts, from memory).
+ * - Frustum volume (pi h / 3)(R^2 + R r + r^2) (elementary geometry).
+ * - manifold-3d as the independent mesh check (its own status and volume), and
+ *   a count of edge uses (3MF core specification: every edge used twice).
+ * Design rules copied from DESIGN.md: c_gap 0.75 mm + c_print 0.25 mm (common practice),
+ * travel s >= max(d_o / 2, 1.5 mm), at least two vents of 3 mm, parts at most 250 mm,
+ * at most 200,000 triangles a part.
+ */
+import type { DesignInputs } from '../../generator/sizing/inputs.ts';
+import type { SizingResult, SizingSuccess } from '../../generator/sizing/result.ts';
+import {
+  countEdgeUses,
+  intersect,
+  meshBounds,
+  meshToManifold,
+  meshVolumeMm3,
+  triangleCount,
+  type IndexedMesh,
+  type Manifold,
+  type ManifoldToplevel,
+} from '../../generator/solids/mesh/index.ts';
+
+export const G = 9.80665; // NIST SP 330
+const C_D = 0.61; // sharp-edged orifice, standard texts (from memory)
+const DRAIN_DH_M = 0.002; // DESIGN: 2 mm
+const RADIAL_GAP_MM = 0.75 + 0.25; // DESIGN c_gap + c_print (common practice)
+export const PART_CAP_MM = 250; // DESIGN "Caps"
+export const TRIANGLE_CAP = 200_000; // DESIGN "Caps"
+/** Shut-off at H_max must equal the target within this (issue 6). */
+export const SHUT_OFF_TOLERANCE_MM = 0.5;
+
+/** Every number anywhere in a value (path -> number) that is not finite. */
+export function nonFinite(value: unknown, path = '', out: string[] = [], depth = 0): string[] {
+  if (depth > 20) return out;
+  if (typeof value === 'number') {
+    if (!Number.isFinite(value)) out.push(`${path || '(value)'} = ${value}`);
+  } else if (Array.isArray(value)) {
+    value.forEach((v, i) => nonFinite(v, `${path}[${i}]`, out, depth + 1));
+  } else if (value && typeof value === 'object') {
+    for (const [k, v] of Object.entries(value)) nonFinite(v, path ? `${path}.${k}` : k, out, depth + 1);
+  }
+  return out;
+}
+
+/** Text for a non-finite number in a message: "NaN", "Infinity" (never in output). */
+export const NON_FINITE_TEXT = /\bNaN\b|\bInfinity\b|undefined|\[object Object\]/;
+
+function frustumMm3(h: number, R: number, r: number): number {
+  return (Math.PI * h * (R * R + R * r + r * r)) / 3;
+}
+
+/** Invariants of a successful sizing (hydrostatics, Archimedes, DESIGN rules). */
+export function checkSized(inp: DesignInputs, s: SizingSuccess): string[] {
+  const p: string[] = [];
+  const expect = (ok: boolean, what: string) => {
+    if (!ok) p.push(what);
+  };
+  const bad = nonFinite(s).filter((x) => !/fillTime/.test(x));
+  if (bad.length) p.push(`non-finite numbers: ${bad.slice(0, 5).join(', ')}`);
+  for (const w of [...s.warnings]) expect(!NON_FINITE_TEXT.test(w.message), `warning text: ${w.message}`);
+
+  // shut-off at H_max equals the target (the design places z_tip so)
+  expect(Math.abs(s.levels.shutOffAtHeadMaxMm - inp.targetLevelM * 1e3) <= SHUT_OFF_TOLERANCE_MM,
+    `shut-off at H_max ${s.levels.shutOffAtHeadMaxMm} mm vs target ${inp.targetLevelM * 1e3} mm`);
+
+  // closing force (hydrostatics): rho g H A + F_pre, when not calibrated
+  const rho = inp.liquidDensityKgM3;
+  if (inp.calibration.length === 0) {
+    const f = rho * G * inp.headMaxM * (Math.PI / 4) * inp.sealDiameterM ** 2 + inp.preloadN;
+    expect(Math.abs(s.closingForce.atHeadMaxN - f) <= 1e-9 * Math.max(1, f), `closing force ${s.closingForce.atHeadMaxN} N vs rho g H A + F_pre = ${f} N`);
+  }
+  expect(s.closingForce.atHeadMaxN > 0, `closing force ${s.closingForce.atHeadMaxN} N is not positive`);
+
+  // float envelope volume, cylinder plus frustum (geometry), against the sizing's
+  const fs = s.parts.float;
+  const R = fs.outerDiameterMm / 2;
+  const vf = Math.PI * R * R * fs.cylinderHeightMm + frustumMm3(fs.coneHeightMm, R, fs.plateauRadiusMm);
+  expect(Math.abs(vf - s.float.volumeMm3) <= 1e-6 * vf, `float volume ${s.float.volumeMm3} mm3 vs cylinder + frustum ${vf} mm3`);
+  // Archimedes: lift at full submersion, and the reserve over the force needed at H_max
+  const lift = (rho * vf * 1e-9 - s.float.massG * 1e-3) * G;
+  expect(Math.abs(lift - s.float.availableForceN) <= 1e-6 * Math.max(1, Math.abs(lift)), `lift ${s.float.availableForceN} N vs Archimedes ${lift} N`);
+  expect(lift >= inp.reserve * s.closingForce.atHeadMaxN * (1 - 1e-9), `reserve: lift ${lift} N < ${inp.reserve} x ${s.closingForce.atHeadMaxN} N`);
+  // the seal at H_max happens on the straight side
+  expect(s.float.sealDepthAtHeadMaxMm <= fs.cylinderHeightMm + 1e-9, `seal depth ${s.float.sealDepthAtHeadMaxMm} mm above the cylinder ${fs.cylinderHeightMm} mm`);
+  expect(s.float.sealDepthAtHeadMaxMm > 0, 'seal depth not positive');
+
+  // shut-off at H_min: lower by (H_max - H_min) A_seal / A_float (closed form)
+  const aFloat = Math.PI * R * R;
+  const drop = (inp.headMaxM - inp.headMinM) * 1e3 * (s.closingForce.sealAreaMm2 / aFloat);
+  const dropSeen = s.levels.shutOffAtHeadMaxMm - s.levels.shutOffAtHeadMinMm;
+  expect(Math.abs(dropSeen - drop) <= 1e-3 + 1e-6 * drop, `shut-off drop H_max -> H_min ${dropSeen} mm vs closed form ${drop} mm`);
+
+  // travel s >= max(d_o / 2, 1.5 mm) and the layout that defines it
+  const minTravel = Math.max((inp.orificeM * 1e3) / 2, 1.5);
+  expect(s.nozzle.travelMm >= minTravel - 1e-9, `travel ${s.nozzle.travelMm} mm < ${minTravel} mm`);
+  const padTopRest = s.parts.mount.floatRestZMm + fs.heightMm + fs.padProudMm;
+  expect(Math.abs(s.parts.mount.nozzleTipZMm - padTopRest - s.nozzle.travelMm) <= 1e-6, `tip - pad top at rest ${s.parts.mount.nozzleTipZMm - padTopRest} mm vs travel ${s.nozzle.travelMm} mm`);
+  const sealBottom = s.parts.mount.nozzleTipZMm - fs.heightMm - fs.padProudMm + inp.indentationM * 1e3;
+  expect(Math.abs(sealBottom - s.parts.mount.floatSealZMm) <= 1e-6, `float bottom at seal ${s.parts.mount.floatSealZMm} vs z_tip - h_f - proud + delta ${sealBottom}`);
+  // levels in order: lift-off, first touch, shut-off at H_min, at H_max
+  const L = s.levels;
+  expect(L.liftOffMm <= L.firstTouchMm + 1e-9 && L.firstTouchMm <= L.shutOffAtHeadMinMm + 1e-9 && L.shutOffAtHeadMinMm <= L.shutOffAtHeadMaxMm + 1e-9,
+    `levels out of order: lift-off ${L.liftOffMm}, first touch ${L.firstTouchMm}, shut-off ${L.shutOffAtHeadMinMm} / ${L.shutOffAtHeadMaxMm}`);
+  expect(L.minimumReachableMm <= inp.targetLevelM * 1e3 + 1e-6, `target ${inp.targetLevelM * 1e3} below the minimum reachable ${L.minimumReachableMm}`);
+
+  // clearance: bore = D_f + 2 (c_gap + c_print)
+  expect(s.housing.boreMm - s.float.outerDiameterMm >= 2 * RADIAL_GAP_MM - 1e-9, `bore ${s.housing.boreMm} vs float ${s.float.outerDiameterMm}: radial gap under ${RADIAL_GAP_MM} mm`);
+  expect(s.parts.mount.floatRestZMm >= s.parts.mount.pinTopZMm - 1e-9, 'float rests below the pin top');
+
+  // drain (orifice equation) and vents
+  const q = s.flow.atHeadMaxLph / 3.6e6;
+  const need = (q / (C_D * Math.sqrt(2 * G * DRAIN_DH_M))) * 1e6;
+  expect(Math.abs(s.drain.requiredAreaMm2 - need) <= 1e-6 * Math.max(1, need), `drain required ${s.drain.requiredAreaMm2} vs orifice equation ${need}`);
+  expect(s.drain.providedAreaMm2 >= need * (1 - 1e-9), `drain provided ${s.drain.providedAreaMm2} mm2 < required ${need} mm2`);
+  expect(s.vents.count >= 2 && s.vents.diameterMm >= 3, `vents ${s.vents.count} x ${s.vents.diameterMm} mm`);
+  expect(s.flow.atHeadMaxLph > 0 && s.flow.atHeadMinLph > 0 && s.flow.atHeadMinLph <= s.flow.atHeadMaxLph * (1 + 1e-9), `flows ${s.flow.atHeadMinLph} / ${s.flow.atHeadMaxLph} L/h`);
+
+  // walls: housing wall as asked; float shell three lines (DESIGN "Solids")
+  expect(Math.abs(s.housing.wallMm - inp.wallM * 1e3) <= 1e-9, `housing wall ${s.housing.wallMm} vs ${inp.wallM * 1e3}`);
+  expect(fs.shellMm >= 3 * inp.lineWidthM * 1e3 - 1e-9, `float shell ${fs.shellMm} under three lines`);
+  // size caps and the diameter limit
+  expect(s.housing.heightMm <= PART_CAP_MM + 1e-9 && s.housing.footDiameterMm <= PART_CAP_MM + 1e-9 && s.parts.pin.lengthMm <= PART_CAP_MM + 1e-9,
+    `part over ${PART_CAP_MM} mm: housing ${s.housing.heightMm} x ${s.housing.footDiameterMm}, pin ${s.parts.pin.lengthMm}`);
+  expect(s.housing.footDiameterMm <= inp.maxOuterDiameterM * 1e3 + 1e-6, `foot ${s.housing.footDiameterMm} over the limit ${inp.maxOuterDiameterM * 1e3}`);
+  expect(s.mass.totalG > 0 && s.float.massG > 0, 'masses not positive');
+  expect(s.boundBy.length > 0, 'boundBy is empty');
+  return p;
+}
+
+/** A failed sizing: reasons in words, no non-finite numbers, ways out that name a field. */
+export function checkInfeasible(s: Exclude<SizingResult, SizingSuccess>): string[] {
+  const p: string[] = [];
+  if (s.reasons.length === 0) p.push('no reasons given');
+  for (const r of s.reasons) if (!r.message || NON_FINITE_TEXT.test(r.message)) p.push(`reason text: ${r.message}`);
+  for (const w of s.waysOut) {
+    if (!/^[a-zA-Z.]+$/.test(w.field)) p.push(`way out field ${w.field}`);
+    if (NON_FINITE_TEXT.test(w.value) || NON_FINITE_TEXT.test(w.message)) p.push(`way out text: ${w.value} ${w.message}`);
+  }
+  const bad = nonFinite(s);
+  if (bad.length) p.push(`non-finite numbers: ${bad.join(', ')}`);
+  return p;
+}
+
+/** Each part: closed 2-manifold (edge uses; manifold-3d status), positive volume, on z = 0, under the triangle cap. */
+export function checkPartMeshes(wasm: ManifoldToplevel, parts: Record<string, IndexedMesh | undefined>): string[] {
+  const p: string[] = [];
+  for (const [name, mesh] of Object.entries(parts)) {
+    if (!mesh) continue;
+    const edges = countEdgeUses(mesh);
+    if (!edges.closed || edges.degenerateTriangles > 0) p.push(`${name}: edge uses ${JSON.stringify(edges)}`);
+    if (triangleCount(mesh) > TRIANGLE_CAP) p.push(`${name}: ${triangleCount(mesh)} triangles over the cap`);
+    const b = meshBounds(mesh);
+    if (b.min[2] !== 0) p.push(`${name}: rests at z = ${b.min[2]}, not on the bed`);
+    const size = Math.max(b.max[0] - b.min[0], b.max[1] - b.min[1], b.max[2] - b.min[2]);
+    if (size > PART_CAP_MM + 1e-3) p.push(`${name}: ${size} mm across, over ${PART_CAP_MM} mm`);
+    let m: Manifold | undefined;
+    try {
+      m = meshToManifold(wasm, mesh, name);
+      if (m.status() !== 'NoError') p.push(`${name}: manifold-3d status ${m.status()}`);
+      const v = m.volume();
+      if (!(v > 0)) p.push(`${name}: manifold-3d volume ${v}`);
+      if (Math.abs(v / meshVolumeMm3(mesh) - 1) > 1e-5) p.push(`${name}: volume ${v} (manifold-3d) vs ${meshVolumeMm3(mesh)} (divergence theorem)`);
+    } catch (error) {
+      p.push(`${name}: ${(error as Error).message}`);
+    } finally {
+      m?.delete();
+    }
+  }
+  return p;
+}
+
+/** Column-major 4x4 applied to each vertex (rotations plus shifts: winding kept). */
+export function place(mesh: IndexedMesh, m: readonly number[]): IndexedMesh {
+  const src = mesh.positions;
+  const out = new Float32Array(src.length);
+  for (let i = 0; i < src.length; i += 3) {
+    const x = src[i], y = src[i + 1], z = src[i + 2];
+    out[i] = m[0] * x + m[4] * y + m[8] * z + m[12];
+    out[i + 1] = m[1] * x + m[5] * y + m[9] * z + m[13];
+    out[i + 2] = m[2] * x + m[6] * y + m[10] * z + m[14];
+  }
+  return { positions: out, indices: mesh.indices };
+}
+
+/** Overlap taken as contact: float32 rounding where faces touch, mm3 (as in test/solids/assembly.test.ts). */
+const CONTACT_MM3 = 5e-3;
+
+/**
+ * No two mounted parts overlap (manifold-3d intersection volumes), except the
+ * intended contacts: crush ribs in the seat (bounded by their analytic
+ * interference, triangles of base b and height h past the seat clearance c)
+ * and, at seal, the lip in the pad (lip disc times the indentation).
+ */
+export function checkAssembly(
+  wasm: ManifoldToplevel,
+  sizing: SizingSuccess,
+  parts: Record<string, IndexedMesh | undefined>,
+  transforms: { rest: Record<string, number[]>; seal: Record<string, number[]> },
+): string[] {
+  const p: string[] = [];
+  const P = sizing.parts;
+  const n = P.nozzle;
+  const c = (P.housing.seatBoreMm - n.collarDiameterMm) / 2;
+  const h = n.crushRibs.heightMm;
+  const ribMm3 = h > c ? n.crushRibs.count * 0.5 * n.crushRibs.baseWidthMm * ((h - c) ** 2 / h) * n.collarLengthMm : 0;
+  const lipMm3 = Math.PI * (n.lipDiameterMm / 2) ** 2 * sizing.inputs.indentationM * 1e3;
+  const names = Object.keys(parts).filter((k) => parts[k]);
+  for (const state of ['rest', 'seal'] as const) {
+    const ms: Record<string, Manifold> = {};
+    try {
+      for (const name of names) ms[name] = meshToManifold(wasm, place(parts[name]!, transforms[state][name]), name);
+      for (let i = 0; i < names.length; i++) {
+        for (let j = i + 1; j < names.length; j++) {
+          const pair = `${names[i]}+${names[j]}`;
+          // bounding boxes apart: no overlap (saves the boolean)
+          const a = ms[names[i]].boundingBox();
+          const b = ms[names[j]].boundingBox();
+          if (a.max[0] < b.min[0] || b.max[0] < a.min[0] || a.max[1] < b.min[1] || b.max[1] < a.min[1] || a.max[2] < b.min[2] || b.max[2] < a.min[2]) continue;
+          const both = intersect(wasm, ms[names[i]], ms[names[j]]);
+          const v = both.volume();
+          both.delete();
+          let allowed = CONTACT_MM3;
+          if (pair === 'housing+nozzle') allowed = ribMm3 * 1.02 + CONTACT_MM3;
+          if (state === 'seal' && (pair === 'nozzle+pad' || pair === 'float+nozzle')) allowed = lipMm3 * 1.01 + CONTACT_MM3;
+          if (v > allowed) p.push(`${state}: ${pair} overlap ${v.toFixed(4)} mm3 (allowed ${allowed.toFixed(4)})`);
+        }
+      }
+    } finally {
+      for (const m of Object.values(ms)) m.delete();
+    }
+  }
+  return p;
+}
