@@ -38,7 +38,7 @@ const WARNING_WORDS: Record<string, string> = {
 };
 
 /** The report as data (tables of formatted cells), rendered by planMarkdown and planHtml. */
-export function planReport(result: PlanResult, files: Readonly<Record<string, readonly string[]>> = {}): PlanReport {
+export function planReport(result: PlanResult, files: Readonly<Record<string, readonly string[]>> = {}, plates: readonly string[] = []): PlanReport {
   const p = result.plan;
   const rows = result.containers.map((c) => {
     const s = c.sizing;
@@ -84,6 +84,7 @@ export function planReport(result: PlanResult, files: Readonly<Record<string, re
     ['filament', `${f(t.filamentG / 1000, 2)} kg, ${f(t.filamentM, 0)} m of 1.75 mm`],
     ['steel ballast (or anchor pins instead)', `${f(t.ballastSteelG / 1000, 2)} kg`],
     ['seal pads to cut', String(t.valves)],
+    ...(plates.length ? [['build plates (every part, 256 mm bed)', `${plates.length}: ${plates.join(' ')}`]] : []),
     ['tank outflow, every valve open', `${f(t.mainFlowLph, 0)} L/h full, ${f(t.mainFlowLowLph, 0)} L/h low`],
   ];
 

@@ -7,6 +7,7 @@ import { existsSync, mkdtempSync, readdirSync, readFileSync, writeFileSync } fro
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { unzipSync, strFromU8 } from 'fflate';
 import { STLLoader } from 'three/examples/jsm/loaders/STLLoader.js';
 import { describe, expect, it } from 'vitest';
 import { CAUTIONS } from '../../generator/doc/cautions.ts';
@@ -56,7 +57,15 @@ describe('floatwright plan', () => {
     expect(run.stderr).toBe(''); // no progress bar when not at a terminal or with --json
 
     const top = readdirSync(out).sort();
-    expect(top).toEqual(['d1-top-tier', 'd2-middle-tier', 'd3-bottom-tier', 'd4-deck-buckets', 'plan-report.html', 'plan-report.md', 'plan.json']);
+    expect(top).toEqual(['d1-top-tier', 'd2-middle-tier', 'd3-bottom-tier', 'd4-deck-buckets', 'plan-report.html', 'plan-report.md', 'plan.json', 'plates']);
+    // The plate set holds every part to print once: 4 parts x 11 valves. 3MF is a zip with 3D/3dmodel.model
+    // (3MF Core Specification), read here with fflate's unzip and a count of <object> elements.
+    let objects = 0;
+    for (const plate of j.plates as string[]) {
+      const model = strFromU8(unzipSync(new Uint8Array(readFileSync(join(out, plate))))['3D/3dmodel.model']!);
+      objects += (model.match(/<object /g) ?? []).length;
+    }
+    expect(objects).toBe(4 * j.totals.valves);
     for (const d of j.designs) {
       for (const f of d.files) expect(existsSync(join(out, f))).toBe(true);
       const stl = d.files.find((f: string) => f.endsWith('-float.stl'));

@@ -39,7 +39,8 @@ solves the flows with every valve open and each alone, names the containers
 that would starve, and totals the plastic and ballast.
 
   FILE                     plan document (JSON); see presets/plan-rooftop-shelf.json
-  -o, --out DIR            write a folder per design (STL parts, 3MF plate, build sheet)
+  -o, --out DIR            write a folder per design (STL parts, 3MF plate, build sheet),
+                           plates/ (every part to print, packed on 256 mm plates, 3MF)
                            and the plan report (plan-report.md / .html, plan.json) into DIR;
                            without it only the report is printed
   --quality Q              export (default; 0.05 mm chord error) or preview (coarser, faster)
@@ -108,7 +109,7 @@ export interface WritePlanOptions {
  * `force`, an existing `out` is replaced only after the new one is complete).
  * Returns the files per design.
  */
-export async function writePlanFolder(opts: WritePlanOptions): Promise<{ files: Record<string, string[]>; triangles: number; threads: number }> {
+export async function writePlanFolder(opts: WritePlanOptions): Promise<{ files: Record<string, string[]>; plates: string[]; triangles: number; threads: number }> {
   const { buildDesigns } = await import('../plan/build-designs.ts');
   const { result } = opts;
   const out = resolve(opts.out);
@@ -132,10 +133,19 @@ export async function writePlanFolder(opts: WritePlanOptions): Promise<{ files: 
       };
     });
     const built = await buildDesigns({ jobs, root: temp, quality: opts.quality, onProgress: opts.onProgress, threads: opts.threads, pool: opts.pool });
-    const report = planReport(result, built.files);
+    const { writePlateSet } = await import('../plan/plate-set.ts');
+    const plates = await writePlateSet(
+      temp,
+      jobs.map((j) => ({
+        id: j.id,
+        quantity: j.quantity,
+        stl: Object.fromEntries(built.files[j.id]!.filter((f) => f.endsWith('.stl')).map((f) => [f.slice(f.lastIndexOf(`${j.id}-`) + j.id.length + 1, -4), f])),
+      })),
+    );
+    const report = planReport(result, built.files, plates);
     await writeFile(join(temp, 'plan-report.md'), planMarkdown(report));
     await writeFile(join(temp, 'plan-report.html'), planHtml(report));
-    await writeFile(join(temp, 'plan.json'), `${JSON.stringify(planJson(result, built.files, opts.extra), null, 2)}\n`);
+    await writeFile(join(temp, 'plan.json'), `${JSON.stringify(planJson(result, built.files, { ...opts.extra, plates }), null, 2)}\n`);
 
     if (await isEmptyOrMissing(out)) {
       await rm(out, { recursive: true, force: true });
@@ -147,7 +157,7 @@ export async function writePlanFolder(opts: WritePlanOptions): Promise<{ files: 
       await rename(temp, out);
       await rm(old, { recursive: true, force: true });
     }
-    return built;
+    return { ...built, plates };
   } catch (error) {
     await rm(temp, { recursive: true, force: true });
     throw error;
@@ -213,6 +223,7 @@ async function planAndWrite(file: string, out: string | null, quality: 'export' 
   }
 
   let files: Record<string, string[]> = {};
+  let plates: string[] = [];
   if (out !== null) {
     const bar = progressBar(io, !json && process.stdout.isTTY === true);
     const started = performance.now();
@@ -220,13 +231,14 @@ async function planAndWrite(file: string, out: string | null, quality: 'export' 
     const built = await writePlanFolder({ result, out, quality, force, onProgress: bar.update, ...(pool && result.designs.length > 1 ? { pool } : { threads: 1 }) });
     bar.done();
     files = built.files;
+    plates = built.plates;
     if (!json) {
-      const count = Object.values(files).reduce((n, f) => n + f.length, 0) + 3;
+      const count = Object.values(files).reduce((n, f) => n + f.length, 0) + plates.length + 3;
       io.err(`Wrote ${count} files for ${result.designs.length} designs to ${out} in ${((performance.now() - started) / 1000).toFixed(1)} s on ${built.threads} thread(s).\n`);
     }
   }
-  if (json) io.out(`${JSON.stringify(planJson(result, files, out !== null ? { out } : {}), null, 2)}\n`);
-  else io.out(planMarkdown(planReport(result, files)));
+  if (json) io.out(`${JSON.stringify(planJson(result, files, out !== null ? { out, plates } : {}), null, 2)}\n`);
+  else io.out(planMarkdown(planReport(result, files, plates)));
   return EXIT_OK;
 }
 

@@ -1,0 +1,83 @@
+/**
+ * The plan's combined plate set: every part of every valve to print (each
+ * design's housing, float, nozzle and pin, times its quantity) packed onto as
+ * few build plates as the shelf packing allows, one 3MF per plate
+ * (`plates/plate-01.3mf`, ...). The meshes are read back from the design
+ * folders' binary STL files and welded by exact position, so the plates hold
+ * exactly the parts the folders hold.
+ */
+import { mkdir, readFile, writeFile } from 'node:fs/promises';
+import { join } from 'node:path';
+import { layoutOnPlate, meshBounds, write3mf, type IndexedMesh } from '../../solids/mesh/index.ts';
+
+/** A 256 mm square bed (common practice for a mid-size printer), 10 mm between parts. */
+export const PLATE = { plateWidthMm: 256, plateDepthMm: 256, spacingMm: 10 } as const;
+
+/** A binary STL (80-byte header, uint32 count, 50 bytes a triangle) welded into an indexed mesh. */
+export function readStlBinary(bytes: Uint8Array): IndexedMesh {
+  const view = new DataView(bytes.buffer, bytes.byteOffset, bytes.byteLength);
+  const triangles = view.getUint32(80, true);
+  if (84 + 50 * triangles !== bytes.byteLength) throw new RangeError(`STL: ${bytes.byteLength} bytes do not hold ${triangles} triangles`);
+  const index = new Map<string, number>();
+  const positions: number[] = [];
+  const indices = new Uint32Array(3 * triangles);
+  for (let t = 0; t < triangles; t++) {
+    for (let c = 0; c < 3; c++) {
+      const at = 84 + 50 * t + 12 + 12 * c;
+      const x = view.getFloat32(at, true);
+      const y = view.getFloat32(at + 4, true);
+      const z = view.getFloat32(at + 8, true);
+      const key = `${x},${y},${z}`;
+      let i = index.get(key);
+      if (i === undefined) {
+        i = positions.length / 3;
+        index.set(key, i);
+        positions.push(x, y, z);
+      }
+      indices[3 * t + c] = i;
+    }
+  }
+  return { positions: new Float32Array(positions), indices };
+}
+
+export interface PlateSetDesign {
+  id: string;
+  quantity: number;
+  /** part name -> STL path relative to root */
+  stl: Record<string, string>;
+}
+
+/** Writes root/plates/plate-NN.3mf and returns their paths relative to root. */
+export async function writePlateSet(root: string, designs: readonly PlateSetDesign[]): Promise<string[]> {
+  const items: { name: string; mesh: IndexedMesh; widthMm: number; depthMm: number }[] = [];
+  for (const d of designs) {
+    for (const [part, file] of Object.entries(d.stl)) {
+      const mesh = readStlBinary(await readFile(join(root, file)));
+      const b = meshBounds(mesh);
+      for (let k = 1; k <= d.quantity; k++) {
+        items.push({ name: `${d.id} ${part} ${k}/${d.quantity}`, mesh, widthMm: b.max[0] - b.min[0], depthMm: b.max[1] - b.min[1] });
+      }
+    }
+  }
+  // Greedy: add parts to the current plate while the shelf packing still fits.
+  const plates: (typeof items)[] = [];
+  let current: typeof items = [];
+  for (const item of items) {
+    const trial = [...current, item];
+    if (current.length > 0 && !layoutOnPlate(trial, PLATE).fits) {
+      plates.push(current);
+      current = [item];
+    } else current = trial;
+  }
+  if (current.length) plates.push(current);
+
+  await mkdir(join(root, 'plates'), { recursive: true });
+  const written: string[] = [];
+  for (const [n, plate] of plates.entries()) {
+    const file = `plates/plate-${String(n + 1).padStart(2, '0')}.3mf`;
+    const bytes = write3mf(plate.map(({ name, mesh }) => ({ name, mesh })), { ...PLATE, title: `floatwright plan, plate ${n + 1} of ${plates.length}` });
+    await writeFile(join(root, file), bytes);
+    written.push(file);
+  }
+  return written;
+}
