@@ -5,7 +5,7 @@
  * design plus the plan report. Files are written into a temporary folder next
  * to DIR and renamed into place only when everything is written.
  */
-import { mkdtemp, readdir, rename, rm, writeFile } from 'node:fs/promises';
+import { mkdir, mkdtemp, readdir, rename, rm, writeFile } from 'node:fs/promises';
 import { availableParallelism } from 'node:os';
 import { basename, dirname, join, resolve } from 'node:path';
 import { parseArgs } from 'node:util';
@@ -113,6 +113,7 @@ export async function writePlanFolder(opts: WritePlanOptions): Promise<{ files: 
   const { buildDesigns } = await import('../plan/build-designs.ts');
   const { result } = opts;
   const out = resolve(opts.out);
+  await mkdir(dirname(out), { recursive: true });
   const temp = await mkdtemp(join(dirname(out), `.${basename(out)}.partial-`));
   try {
     const used = new Set<string>();
@@ -207,7 +208,7 @@ async function run(argv: string[], io: Io): Promise<number> {
 async function planAndWrite(file: string, out: string | null, quality: 'export' | 'preview', force: boolean, json: boolean, io: Io, pool: BuildPool | null): Promise<number> {
   const read = await readDesignFile(file);
   if (!read.ok) {
-    return inputErrors(read.errors.map((e) => ({ ...e, field: e.field === ROOT_FIELD ? PLAN_ROOT_FIELD : e.field, message: e.message.replace('a design document', 'a plan document') })), json, io);
+    return inputErrors(read.errors.map((e) => ({ ...e, field: e.field === ROOT_FIELD ? PLAN_ROOT_FIELD : e.field, message: e.message.replace('a design document', 'a plan document').replace('the design file', 'the plan file') })), json, io);
   }
   const parsed = parsePlan(read.doc);
   if (!parsed.ok) return inputErrors(parsed.errors, json, io);
