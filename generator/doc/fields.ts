@@ -6,7 +6,7 @@
  * document path, the value and the allowed range.
  */
 import { z } from 'zod';
-import { formatNumber, parseQuantity, showInput, expectedHint, fromSi, type Quantity, type QuantityKind } from './units.ts';
+import { formatNumber, parseQuantity, showInput, expectedHint, fromSi, toSi, type Quantity, type QuantityKind } from './units.ts';
 
 /** One problem with a document: dotted path ("supply.headMax", "seal.calibration.1.mass") and a sentence. */
 export interface FieldError {
@@ -68,14 +68,23 @@ export function rangeText(spec: QuantitySpec): string {
 export function checkRange(si: number, shown: string, spec: QuantitySpec): string | null {
   const value = spec.unit ? fromSi(si, spec.unit) : si;
   // Compare in the field's unit with a little tolerance, so "250 mm" written as "25 cm" is not refused for rounding.
-  const eps = 1e-9 * Math.max(1, Math.abs(value));
+  // The tolerance scales with the bound, not the value: an overflowed value (Infinity) must not widen it to Infinity.
   const { min, max } = spec;
-  let side: 'low' | 'high' | null = null;
+  const eps = 1e-9 * Math.max(1, Math.abs(min ?? 0), Math.abs(max ?? 0));
+  let side: 'low' | 'high' | null = Number.isNaN(value) ? 'high' : null;
   if (min !== undefined && (spec.minExclusive ? value <= min : value < min - eps)) side = 'low';
   if (max !== undefined && (spec.maxExclusive ? value >= max : value > max + eps)) side = 'high';
   if (!side) return null;
   const note = spec.note && side === 'high' ? ` ${spec.note}` : '';
   return `${shown} is too ${side}; ${spec.label} must be ${rangeText(spec)}.${note}`;
+}
+
+/** An SI value moved onto the nearest bound of `spec` when it lies (within tolerance) outside it. */
+export function clampToRange(si: number, spec: QuantitySpec): number {
+  const toSiValue = (v: number) => (spec.unit ? toSi(v, spec.unit) : v);
+  if (spec.min !== undefined && !spec.minExclusive && si < toSiValue(spec.min)) return toSiValue(spec.min);
+  if (spec.max !== undefined && !spec.maxExclusive && si > toSiValue(spec.max)) return toSiValue(spec.max);
+  return si;
 }
 
 /** Options of a quantity field: its range and wording, and a default in the field's unit (absent: required). */
@@ -103,8 +112,11 @@ export function measure(raw: unknown, kind: QuantityKind, spec: QuantitySpec, ch
   if (checkLimits && kind !== 'head') {
     const problem = checkRange(measured.si, shown, spec);
     if (problem) return { ok: false, message: problem };
+    // within the rounding tolerance but past a bound ("-1e-12 m" of tube): take the bound itself, so the
+    // sizing core never sees a value outside the range it was promised
+    measured.si = clampToRange(measured.si, spec);
   }
-  return { ok: true, measured, quantity: parsed.quantity };
+  return { ok: true, measured, quantity: { ...parsed.quantity, si: measured.si } };
 }
 
 /** A required quantity field (or one with a default): output is Measured, in SI. */

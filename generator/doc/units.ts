@@ -122,7 +122,13 @@ export function parseQuantity(input: unknown, kind: QuantityKind, unit: string =
   const bare = (value: number): QuantityResult => {
     if (kind === 'number') return { ok: true, quantity: { si: value, dimension: 'number', unit: '' } };
     const fieldUnit = unitBySymbol(unit);
-    return { ok: true, quantity: { si: scaleToSi(value, fieldUnit), dimension: fieldUnit.dimension, unit } };
+    return sized({ si: scaleToSi(value, fieldUnit), dimension: fieldUnit.dimension, unit });
+  };
+  // A finite value can still overflow once converted ("1e308 m" is Infinity mm): refuse it, or the range check
+  // would compare Infinity and messages would show it.
+  const sized = (quantity: Quantity): QuantityResult => {
+    const inField = kind === 'number' || kind === 'head' || quantity.dimension === 'force' ? quantity.si : scaleFromSi(quantity.si, unitBySymbol(unit));
+    return Number.isFinite(quantity.si) && Number.isFinite(inField) ? { ok: true, quantity } : fail('far too large');
   };
 
   if (typeof input === 'number') return Number.isFinite(input) ? bare(input) : fail('not a finite number');
@@ -150,9 +156,9 @@ export function parseQuantity(input: unknown, kind: QuantityKind, unit: string =
   if (!found) return fail(`unknown unit ${JSON.stringify(unitText)}`);
   if (!ACCEPTS[kind].includes(found.dimension)) return fail(`${found.symbol} measures ${found.dimension}`);
   if (kind === 'force' && found.dimension === 'mass') {
-    return { ok: true, quantity: { si: scaleToSi(value, found) * STANDARD_GRAVITY, dimension: 'force', unit: found.symbol } };
+    return sized({ si: scaleToSi(value, found) * STANDARD_GRAVITY, dimension: 'force', unit: found.symbol });
   }
-  return { ok: true, quantity: { si: scaleToSi(value, found), dimension: found.dimension, unit: found.symbol } };
+  return sized({ si: scaleToSi(value, found), dimension: found.dimension, unit: found.symbol });
 }
 
 function valueOf(result: QuantityResult): ValueResult {
@@ -207,7 +213,9 @@ export function toSi(value: number, symbol: string): number {
 /** Round to `significant` digits and drop float noise: 2.4000000000000004 -> "2.4". */
 export function formatNumber(value: number, significant = 6): string {
   if (!Number.isFinite(value)) return String(value);
-  return String(Number(value.toPrecision(significant)));
+  // rounding can overflow next to the largest double (1.7976931348623157e308 -> Infinity): keep the digits then
+  const rounded = Number(value.toPrecision(significant));
+  return Number.isFinite(rounded) ? String(rounded) : value.toPrecision(significant);
 }
 
 /** SI value written in the unit with this symbol: formatQuantity(0.0024, 'mm') = "2.4 mm". */

@@ -45,3 +45,34 @@ describe('regressions found by the fuzzing', () => {
     expect(result.reasons[0].message).toMatch(/250 mm/);
   });
 });
+
+describe('regressions found by the rejection properties (one field junk or out of range)', () => {
+  it('"1e308 m" for a millimetre field is refused (was: accepted, as Infinity mm slipped past the range check)', () => {
+    const parsed = parseDesign({ supply: { headMax: '2 m', tubeInnerDiameter: '1e308 m' }, level: { target: '40 mm' } });
+    expect(parsed.ok).toBe(false);
+    if (parsed.ok) return;
+    expect(parsed.errors[0].field).toBe('supply.tubeInnerDiameter');
+    expect(parsed.errors[0].message).toContain('"1e308 m"');
+    expect(parsed.errors[0].message).not.toContain('Infinity');
+  });
+
+  it('the largest double is shown with its digits (was: "Infinity N is too high")', () => {
+    const parsed = parseDesign({ supply: { headMax: '2 m' }, level: { target: '40 mm' }, seal: { preload: Number.MAX_VALUE } });
+    expect(parsed.ok).toBe(false);
+    if (parsed.ok) return;
+    expect(parsed.errors[0].message).toMatch(/^1\.797693135e\+308 N is too high; the pad preload must be from 0 N to 5 N\./);
+  });
+
+  it('a value a hair past a bound is taken as the bound (was: -5e-324 m of tube accepted, then a RangeError in the hydraulics)', () => {
+    // the schema forgives a billionth of the bound for unit rounding; the sizing core must then see the bound
+    for (const tubeLength of [-5e-324, -1e-12, '-0.000000000001 m', -0]) {
+      const parsed = parseDesign({ supply: { headMax: '2 m', tubeLength }, level: { target: '40 mm' } });
+      expect(parsed.ok).toBe(true);
+      if (!parsed.ok) return;
+      expect(Object.is(parsed.inputs.tubeLengthM, 0) || parsed.inputs.tubeLengthM === 0).toBe(true);
+      expect(() => sizeDesign(parsed.inputs)).not.toThrow();
+    }
+    const high = parseDesign({ supply: { headMax: '2 m' }, level: { target: '25.0000000001 cm' } });
+    expect(high.ok && high.inputs.targetLevelM).toBe(0.25);
+  });
+});
