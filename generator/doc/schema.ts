@@ -428,6 +428,21 @@ export function checkQuantity(kind: Parameters<typeof measure>[1], value: unknow
   return result.ok ? null : result.message;
 }
 
+/** Deeper than any document the schema takes (it refuses past 16 levels). */
+const MAX_OVERRIDE_DEPTH = 64;
+
+/** Whether a value nests deeper than `limit` levels (walked without recursion, so any depth is safe). */
+function nestedDeeperThan(value: unknown, limit: number): boolean {
+  const stack: [unknown, number][] = [[value, 0]];
+  while (stack.length) {
+    const [node, depth] = stack.pop()!;
+    if (node === null || typeof node !== 'object') continue;
+    if (depth >= limit) return true;
+    for (const child of Object.values(node)) stack.push([child, depth + 1]);
+  }
+  return false;
+}
+
 function isPlainObject(value: unknown): value is Record<string, unknown> {
   return value !== null && typeof value === 'object' && !Array.isArray(value);
 }
@@ -439,6 +454,9 @@ function isPlainObject(value: unknown): value is Record<string, unknown> {
  * the schema reports the real problem. Prototype keys are never written.
  */
 export function mergeOverrides(doc: unknown, overrides: Readonly<Record<string, unknown>>): unknown {
+  // Nothing to set, or a document nested too deep to copy safely (structuredClone recurses and overflows the
+  // stack near 5000 levels): hand it on as it is; parseDesign refuses runaway nesting with a message.
+  if (!Object.values(overrides).some((v) => v !== undefined) || nestedDeeperThan(doc, MAX_OVERRIDE_DEPTH)) return doc === undefined ? {} : doc;
   const base: unknown = doc === undefined ? {} : structuredClone(doc);
   if (!isPlainObject(base)) return base;
   for (const [path, value] of Object.entries(overrides)) {

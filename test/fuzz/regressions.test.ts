@@ -76,3 +76,18 @@ describe('regressions found by the rejection properties (one field junk or out o
     expect(high.ok && high.inputs.targetLevelM).toBe(0.25);
   });
 });
+
+describe('regressions found by the hostile documents (cli-hostile.test.ts)', () => {
+  it('a design nested 5000 levels deep is refused with a message (was: "Maximum call stack size exceeded", exit 1)', async () => {
+    const { mergeOverrides } = await import('../../generator/doc/schema.ts');
+    let deep: unknown = 2;
+    for (let i = 0; i < 5000; i++) deep = [deep];
+    const doc = { supply: { headMax: deep }, level: { target: '40 mm' } };
+    // the command line merges its flags into the file's document; that copy used to overflow the stack
+    const merged = mergeOverrides(doc, { 'level.target': '45 mm' });
+    const parsed = parseDesign(merged);
+    expect(parsed.ok).toBe(false);
+    if (!parsed.ok) expect(parsed.errors[0].message).toMatch(/nested more than 16 levels/);
+    expect(parseDesign(mergeOverrides(doc, {})).ok).toBe(false);
+  });
+});
