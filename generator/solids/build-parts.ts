@@ -17,6 +17,7 @@ import { buildHousingMesh } from './parts/housing-solid.ts';
 import { buildNozzleMesh } from './parts/nozzle-solid.ts';
 import { buildPadMesh } from './parts/pad-solid.ts';
 import { buildPinMesh } from './parts/pin-solid.ts';
+import { partCapProblems } from './part-caps.ts';
 
 export interface BuildOptions {
   quality: Quality;
@@ -37,13 +38,16 @@ export class PartBuildError extends Error {
   }
 }
 
-function checkInput(sizing: SizingSuccess, opts: BuildOptions): void {
+function checkInput(sizing: SizingSuccess, opts: BuildOptions, names: readonly (PartName | 'pad')[]): void {
   if (!sizing || sizing.ok !== true || !sizing.parts) {
     throw new TypeError('buildParts.sizing is not a successful sizing result (sizeDesign(...).ok must be true)');
   }
   if (!opts || !Object.hasOwn(QUALITY, opts.quality)) {
     throw new RangeError(`buildParts.opts.quality = ${JSON.stringify(opts?.quality)}; allowed: "preview" or "export"`);
   }
+  // Caps (DESIGN "Caps": 250 mm, 200,000 triangles) before any geometry is made, with a message naming the part.
+  const over = partCapProblems(sizing, opts.quality, names.filter((n) => (PART_NAMES as readonly string[]).includes(n) || n === 'pad'));
+  if (over.length) throw new PartBuildError(over[0].part, over.map((p, i) => (i === 0 ? p.message : `${p.part}: ${p.message}`)).join('; '));
 }
 
 async function buildUnchecked(name: PartName | 'pad', sizing: SizingSuccess, quality: Quality): Promise<IndexedMesh> {
@@ -66,7 +70,7 @@ async function buildUnchecked(name: PartName | 'pad', sizing: SizingSuccess, qua
 
 /** One part's mesh in print pose. */
 export async function buildPart(name: PartName | 'pad', sizing: SizingSuccess, opts: BuildOptions): Promise<IndexedMesh> {
-  checkInput(sizing, opts);
+  checkInput(sizing, opts, [name]);
   try {
     const mesh = await buildUnchecked(name, sizing, opts.quality);
     if (mesh.indices.length === 0) throw new Error('the builder made an empty mesh');
@@ -78,8 +82,8 @@ export async function buildPart(name: PartName | 'pad', sizing: SizingSuccess, o
 
 /** Every part's mesh in print pose (the pad only with withPad). */
 export async function buildParts(sizing: SizingSuccess, opts: BuildOptions): Promise<BuiltParts> {
-  checkInput(sizing, opts);
-  const names: (PartName | 'pad')[] = opts.withPad ? [...PART_NAMES, 'pad'] : [...PART_NAMES];
+  const names: (PartName | 'pad')[] = opts?.withPad ? [...PART_NAMES, 'pad'] : [...PART_NAMES];
+  checkInput(sizing, opts, names);
   const meshes = await Promise.all(names.map((name) => buildPart(name, sizing, opts)));
   const out = {} as BuiltParts;
   names.forEach((name, i) => {

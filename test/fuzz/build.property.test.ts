@@ -16,6 +16,7 @@ import { parseDesign } from '../../generator/doc/schema.ts';
 import { sizeDesign } from '../../generator/sizing/size-design.ts';
 import type { SizingSuccess } from '../../generator/sizing/result.ts';
 import { assemblyTransforms, buildParts } from '../../generator/solids/index.ts';
+import { triangleBounds } from '../../generator/solids/part-caps.ts';
 import { loadManifold, type IndexedMesh, type ManifoldToplevel } from '../../generator/solids/mesh/index.ts';
 import { designSpec, setPath, toDocument } from './arbitraries.ts';
 import { BUILD_RUNS, fuzzSeed } from './budget.ts';
@@ -60,7 +61,11 @@ describe('solids over the accepted input space (fast-check, manifold-3d)', () =>
         tally.built++;
         tally.maxBuildMs = Math.max(tally.maxBuildMs, ms);
         for (const m of Object.values(parts)) tally.maxTriangles = Math.max(tally.maxTriangles, m.indices.length / 3);
+        // the caps are checked before building from a bound on each part's triangles: the bound must hold
+        const bounds = triangleBounds(sizing, 'preview') as Record<string, number>;
+        const overBound = Object.entries(parts).filter(([name, m]) => m.indices.length / 3 > bounds[name]).map(([name, m]) => `${name}: ${m.indices.length / 3} triangles over the bound ${bounds[name]}`);
         const problems = [
+          ...overBound,
           ...checkPartMeshes(wasm, parts),
           ...checkAssembly(wasm, sizing, parts, { rest: assemblyTransforms(sizing, 'rest'), seal: assemblyTransforms(sizing, 'seal') }),
         ];
