@@ -8,15 +8,16 @@
  *
  * All or nothing: every file is first written under a temporary name in the
  * same folder, then renamed once all are complete; on any failure the
- * temporary files (and any already renamed) are removed, and the error names
- * the part or file at fault. Used by `floatwright build` and the bench planner.
+ * temporary files (and any already renamed) are removed, files of an earlier
+ * run that were being replaced are put back, and the error names the part or
+ * file at fault. Used by `floatwright build` and the bench planner.
  *
  * Options: quality ('preview' | 'export', required); baseName (default: the
  * design's name made file-safe, else "float-valve"); withPad (default false:
  * also write the printed seal pad).
  */
 import { randomBytes } from 'node:crypto';
-import { mkdir, rename, rm, writeFile } from 'node:fs/promises';
+import { lstat, mkdir, rename, rm, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import { buildSheetHtml, buildSheetMarkdown } from '../doc/build-sheet.ts';
 import type { NormalizedDoc } from '../doc/schema.ts';
@@ -148,6 +149,9 @@ export async function writeDesignFiles(
   const tag = `${process.pid}-${randomBytes(4).toString('hex')}`;
   const temps: string[] = [];
   const finals: string[] = [];
+  // files of an earlier run that this one replaces: moved aside first, put back if anything fails, so a
+  // failed run never loses what a grower already had
+  const backups: { target: string; backup: string }[] = [];
   try {
     for (const c of contents) {
       const temp = join(dir, `.${c.file}.${tag}.tmp`);
@@ -158,14 +162,28 @@ export async function writeDesignFiles(
         throw new Error(`${c.what} (${c.file}): ${error instanceof Error ? error.message : String(error)}`, { cause: error });
       }
     }
+    // something other than a file at a target name (a folder): refuse before anything is replaced
+    for (const c of contents) {
+      const info = await lstat(join(dir, c.file)).catch(() => null);
+      if (info && !info.isFile()) throw new Error(`${c.what} (${c.file}): something that is not a file already has this name in ${dir}; move it away`);
+    }
     for (let i = 0; i < contents.length; i++) {
       const target = join(dir, contents[i].file);
+      const backup = join(dir, `.${contents[i].file}.${tag}.bak`);
+      try {
+        await rename(target, backup);
+        backups.push({ target, backup });
+      } catch (error) {
+        if ((error as NodeJS.ErrnoException).code !== 'ENOENT') throw error;
+      }
       await rename(temps[i], target);
       finals.push(target);
     }
   } catch (error) {
     await Promise.all([...temps, ...finals].map((path) => rm(path, { force: true })));
+    for (const { target, backup } of backups) await rename(backup, target).catch(() => undefined);
     throw error;
   }
+  await Promise.all(backups.map(({ backup }) => rm(backup, { force: true })));
   return { files: finals, parts };
 }
