@@ -265,15 +265,17 @@ export function toDocument(s: DesignSpec): Record<string, unknown> {
   if (s.padDensityGcm3 !== null) seal.padDensity = write(s.padDensityGcm3 * 1000, s.densitySpelling, DENSITY_UNITS, 1000);
   if (s.calibration !== null) {
     const { line, points } = s.calibration;
-    seal.calibration = points.map((c) => {
+    const bench = points.map((c) => {
       const head = Number(c.headM.toPrecision(12));
       // a bench point on the line m g = F_pre + A rho g H (hydrostatics), scattered a little
-      const onLine = line
+      const massG = line
         ? ((line.preloadN + (Math.PI / 4) * (line.sealDiameterMm / 1000) ** 2 * rho * G * head) / G) * 1000 * (1 + line.scatter * c.noise)
         : c.massG;
-      const massG = Math.min(5000, Math.max(0.1, onLine));
-      return { head, mass: write(massG, c.massSpelling, MASS_UNITS, 1) };
+      return { head, massG, spelling: c.massSpelling };
     });
+    // points off the scale's 0.1 g to 5000 g are not weighed (clamping them would bend the line)
+    const weighed = bench.filter((b) => b.massG >= 0.1 && b.massG <= 5000);
+    if (weighed.length) seal.calibration = weighed.map((b) => ({ head: b.head, mass: write(b.massG, b.spelling, MASS_UNITS, 1) }));
   }
   if (Object.keys(seal).length) doc.seal = seal;
   const print: Record<string, unknown> = {};
