@@ -91,3 +91,23 @@ describe('regressions found by the hostile documents (cli-hostile.test.ts)', () 
     expect(parseDesign(mergeOverrides(doc, {})).ok).toBe(false);
   });
 });
+
+describe('regressions found by applying the ways out (sizing.property.test.ts)', () => {
+  it('a higher target offered as a way out sizes when applied (was: "at least 154 mm", which then broke the 250 mm part cap)', () => {
+    // 21.87 kPa of a 1200 kg/m3 liquid on a 26.9 mm lip: a big float whose housing, lifted by a higher target, outgrew 250 mm
+    const doc = {
+      supply: { headMax: '21.87 kPa' }, level: { target: '5 mm' }, liquid: { density: '1200 kg/m3' },
+      nozzle: { orifice: '2 mm', sealDiameter: '26.9 mm' }, seal: { indentation: 0.05, padDensity: '0.25 g/cm3' },
+      print: { wall: '0.9 mm' }, reserve: 1.85,
+    };
+    const parsed = parseDesign(doc);
+    if (!parsed.ok) throw new Error(JSON.stringify(parsed.errors));
+    const result = sizeDesign(parsed.inputs);
+    expect(result.ok).toBe(false);
+    if (result.ok) return;
+    const level = result.waysOut.find((w) => w.field === 'level.target')!;
+    const foot = result.waysOut.find((w) => w.field === 'limits.maxOuterDiameter');
+    const fixed = parseDesign({ ...doc, level: { target: level.value }, ...(/together/.test(level.message) && foot ? { limits: { maxOuterDiameter: foot.value } } : {}) });
+    expect(fixed.ok && sizeDesign(fixed.inputs).ok).toBe(true);
+  });
+});

@@ -64,6 +64,12 @@ describe('sizing over the accepted input space (fast-check properties)', () => {
         const lowest = Number.parseFloat(level.value);
         expect(Number.isFinite(lowest)).toBe(true);
         if (lowest > 250) return;
+        // a way out must work as given: the level alone, or the level together with the diameter limit it names
+        const foot = /together/.test(level.message) ? result.waysOut.find((w) => w.field === 'limits.maxOuterDiameter') : undefined;
+        let atWayOut = setPath(doc, 'level.target', level.value);
+        if (foot) atWayOut = setPath(atWayOut, 'limits.maxOuterDiameter', foot.value);
+        const applied = check(atWayOut, spec);
+        if (applied && !applied.ok) throw new Error(`the way out ${level.value}${foot ? ` with a ${foot.value} foot` : ''} does not size: ${applied.reasons.map((r) => r.code)}\n${JSON.stringify(doc)}`);
         tally.retargeted++;
         const target = lowest + rise * rise * (250 - lowest);
         const again = check(setPath(doc, 'level.target', `${target} mm`), spec);

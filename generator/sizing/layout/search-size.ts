@@ -86,9 +86,11 @@ export function searchSize(b: DesignBasis, drainAreaMm2: number): SearchOutcome 
     if (Array.isArray(c)) continue;
     for (const code of c.violations) rejections.set(code, (rejections.get(code) ?? 0) + 1);
     const others = c.violations.filter((v) => v !== 'travel');
-    if (others.length === 0) lowestReachable = Math.min(lowestReachable, c.minimumReachableMm);
+    // a higher target lifts the nozzle and the deck by as much: the housing must still be within the size cap there
+    const fitsRaised = c.housing.heightMm + Math.max(0, c.minimumReachableMm - targetMm) <= PART_SIZE_CAP_MM;
+    if (others.length === 0 && fitsRaised) lowestReachable = Math.min(lowestReachable, c.minimumReachableMm);
     const rest = c.violations.filter((v) => v !== 'travel' && v !== 'outer-diameter-limit');
-    if (rest.length === 0) {
+    if (rest.length === 0 && fitsRaised) {
       const foot = c.housing.foot.outerDiameterMm;
       const cost = Math.max(0, c.minimumReachableMm - targetMm) / targetMm + Math.max(0, foot - limitMm) / limitMm;
       if (cost < nearest.cost) Object.assign(nearest, { levelMm: c.minimumReachableMm, footMm: foot, cost });
