@@ -10,9 +10,9 @@ function count(name: string, fallback: number): number {
 }
 
 /** Designs sized per run (with the retargeted ones on top). */
-export const SIZING_RUNS = count('FUZZ_SIZING_RUNS', 250);
+export const SIZING_RUNS = count('FUZZ_SIZING_RUNS', 300);
 /** Designs sized, built at preview quality and checked with manifold-3d per run. */
-export const BUILD_RUNS = count('FUZZ_BUILD_RUNS', 80);
+export const BUILD_RUNS = count('FUZZ_BUILD_RUNS', 120);
 /** Hostile documents (one field out of range or junk) per run. */
 export const REJECT_RUNS = count('FUZZ_REJECT_RUNS', 400);
 
