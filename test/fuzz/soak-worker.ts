@@ -71,10 +71,11 @@ export async function runChunk(seed: number, count: number): Promise<ChunkResult
     const doc = toDocument(spec);
     const problems: string[] = [];
     try {
-      const m = mutationProblems(doc, mutation);
-      if (m.length) problems.push(...m);
-      else r.mutationsRefused++;
       const parsed = parseDesign(doc);
+      // the mutation is judged on a document that was good before it (random bench points may already be refused)
+      const m = parsed.ok ? mutationProblems(doc, mutation) : [];
+      if (m.length) problems.push(...m);
+      else if (parsed.ok) r.mutationsRefused++;
       if (!parsed.ok) {
         const calibrationOnly = parsed.errors.every((e) => e.field === 'seal.calibration');
         const mayFall = spec.calibration && (spec.calibration.line === null || spec.calibration.line.scatter > 0);
