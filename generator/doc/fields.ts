@@ -136,10 +136,14 @@ export function quantityField(kind: Exclude<QuantityKind, 'head'>, options: Quan
   }) as unknown as z.ZodType<Measured>;
 }
 
-/** An optional quantity field with no default: output is Measured or null. */
-export function optionalQuantityField(kind: Exclude<QuantityKind, 'head'>, spec: QuantitySpec): z.ZodType<Measured | null> {
+/**
+ * An optional quantity field with no default: output is Measured or null.
+ * `acceptNull` (default true): an explicit null means "not given"; false refuses it
+ * like any other junk (for fields whose default is worked out elsewhere).
+ */
+export function optionalQuantityField(kind: Exclude<QuantityKind, 'head'>, spec: QuantitySpec, acceptNull = true): z.ZodType<Measured | null> {
   return z.unknown().optional().transform((raw, ctx): Measured | null => {
-    if (raw === undefined || raw === null) return null;
+    if (raw === undefined || (raw === null && acceptNull)) return null;
     const result = measure(raw, kind, spec);
     if (!result.ok) {
       pushIssue(ctx, raw, result.message);

@@ -36,7 +36,7 @@ import {
   ROOT_FIELD,
   measure,
 } from './fields.ts';
-import { formatNumber, fromSi, showInput } from './units.ts';
+import { formatNumber, fromSi, showInput, toSi } from './units.ts';
 
 /** The unit a bare number means in each field (document path -> unit symbol; '' for plain numbers). */
 export const FIELD_UNITS = {
@@ -213,7 +213,8 @@ const documentShape = {
   seal: section({
     preload: forceField({ ...S.preload, fallback: D.seal.preload }),
     padThickness: lengthField({ ...S.padThickness, fallback: D.seal.padThickness }),
-    indentation: lengthField({ ...S.indentation, fallback: D.seal.indentation }),
+    // no fallback here: the default depends on the pad (see the cross-field checks)
+    indentation: optionalQuantityField('length', S.indentation, false),
     padDensity: densityField({ ...S.padDensity, fallback: D.seal.padDensity }),
     calibration: calibrationField,
   }).prefault(EMPTY),
@@ -285,8 +286,11 @@ export const designSchema = section(documentShape).transform((doc, ctx): ParsedD
   }
 
   const halfPadMm = fromSi(seal.padThickness.si, 'mm') / 2;
+  // Not given: the default 0.5 mm, or half a pad thinner than 1 mm (a default the grower never typed must not be refused).
+  const defaultIndentationM = Math.min(toSi(parseFloat(D.seal.indentation), 'mm'), seal.padThickness.si / 2);
+  const indentation = seal.indentation ?? { si: defaultIndentationM, shown: normalizedText(defaultIndentationM, 'mm') };
   const indentationSpec = { ...S.indentation, max: halfPadMm, label: `the pad indentation (at most half the ${normalizedText(seal.padThickness.si, 'mm')} pad)` };
-  const indentationProblem = checkRange(seal.indentation.si, seal.indentation.shown, indentationSpec);
+  const indentationProblem = checkRange(indentation.si, indentation.shown, indentationSpec);
   if (indentationProblem) fail(ctx, ['seal', 'indentation'], undefined, indentationProblem);
 
   const calibration: CalibrationPoint[] = [];
@@ -330,7 +334,7 @@ export const designSchema = section(documentShape).transform((doc, ctx): ParsedD
     sealDiameterM: nozzle.sealDiameter.si,
     preloadN: seal.preload.si,
     padThicknessM: seal.padThickness.si,
-    indentationM: seal.indentation.si,
+    indentationM: indentation.si,
     padDensityKgM3: seal.padDensity.si,
     calibration,
     materialName: print.material.name,

@@ -303,3 +303,14 @@ describe('reusable field machinery (for later documents)', () => {
     expect(scanForbiddenKeys({ a: [{ b: 1 }] })).toEqual([]);
   });
 });
+
+describe('the indentation default follows a thin pad', () => {
+  // common practice: a pad is indented at most half its thickness; the default 0.5 mm halves for a pad under 1 mm
+  it('takes half of a 0.8 mm pad when the indentation is not given, and refuses a given one that is too deep', () => {
+    const thin = parseDesign({ supply: { headMax: '1 m' }, level: { target: '40 mm' }, seal: { padThickness: '0.8 mm' } });
+    expect(thin.ok && thin.inputs.indentationM).toBeCloseTo(0.0004, 12);
+    const deep = parseDesign({ supply: { headMax: '1 m' }, level: { target: '40 mm' }, seal: { padThickness: '0.8 mm', indentation: '0.5 mm' } });
+    expect(deep.ok).toBe(false);
+    if (!deep.ok) expect(deep.errors[0].field).toBe('seal.indentation');
+  });
+});
