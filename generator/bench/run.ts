@@ -110,7 +110,15 @@ function text(r: BenchResult): string {
     `STL serialisation, all export parts   ${r.stlMs.toFixed(3)} ms`,
     `peak resident size (single design)    ${r.peakRssMb.toFixed(1)} MB   (target < 300 MB)`,
   );
-  if (r.plan) lines.push('', `plan: ${JSON.stringify(r.plan)}`);
+  if (r.plan) {
+    const p = r.plan as { ms?: number; solveMs?: number; peakRssMb?: number; containers?: number; designs?: number; files?: number; threads?: number };
+    lines.push(
+      '',
+      `plan, ${p.containers} containers / ${p.designs} designs at export quality on ${p.threads} threads`,
+      `  whole run ${((p.ms ?? NaN) / 1000).toFixed(2)} s (solve ${((p.solveMs ?? NaN) / 1000).toFixed(2)} s), ${p.files} files   (target < 20 s)`,
+      `  peak resident size ${(p.peakRssMb ?? NaN).toFixed(1)} MB   (target < 1 GB)`,
+    );
+  }
   return `${lines.join('\n')}\n`;
 }
 
