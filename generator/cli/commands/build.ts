@@ -2,14 +2,14 @@
  * `floatwright build`: size one valve and write its printable files (one STL
  * per part, a 3MF plate, the design document, the build sheet) into a folder.
  */
-import { parseArgs } from 'node:util';
 import type { FieldError } from '../../doc/fields.ts';
 import { sizeDesign } from '../../sizing/size-design.ts';
 import { PartBuildError } from '../../solids/build-parts.ts';
 import { writeDesignFiles } from '../../solids/write-design-files.ts';
 import { EXIT_INPUT, EXIT_OK, type Command, type Io } from '../command.ts';
-import { argumentError, DESIGN_OPTIONS, designFlagsHelp, flagForField, loadDesign } from '../design-input.ts';
-import { fixed, formatCautions, formatFailureText, formatFieldErrors } from '../format-sizing.ts';
+import { readCommandLine, reportInputErrors } from '../command-line.ts';
+import { DESIGN_OPTIONS, designFlagsHelp, flagForField, loadDesign } from '../design-input.ts';
+import { fixed, formatCautions, formatFailureText } from '../format-sizing.ts';
 
 const OPTIONS = {
   ...DESIGN_OPTIONS,
@@ -45,26 +45,13 @@ Exit status: 0 written; 2 bad input, no size fits, or a part could not be built 
 1 a fault in floatwright.
 `;
 
-function inputErrors(errors: FieldError[], json: boolean, io: Io, subject = 'the design'): number {
-  if (json) io.out(`${JSON.stringify({ ok: false, errors }, null, 2)}\n`);
-  else io.err(`floatwright build: ${formatFieldErrors(errors, flagForField, subject)}`);
-  return EXIT_INPUT;
-}
+const STYLE = { command: 'build', subject: 'the design', flagFor: flagForField, help: HELP };
 
 async function run(argv: string[], io: Io): Promise<number> {
   const json = argv.includes('--json');
-  let values: Record<string, unknown>;
-  try {
-    ({ values } = parseArgs({ args: argv, options: OPTIONS, strict: true, allowPositionals: false }));
-  } catch (error) {
-    const problem = argumentError(error, Object.keys(OPTIONS));
-    if (!problem) throw error;
-    return inputErrors([problem], json, io, 'the command line');
-  }
-  if (values.help) {
-    io.out(HELP);
-    return EXIT_OK;
-  }
+  const args = readCommandLine(argv, OPTIONS, STYLE, io);
+  if (typeof args === 'number') return args;
+  const { values } = args;
   const problems: FieldError[] = [];
   const out = values.out;
   if (typeof out !== 'string' || out.trim() === '') {
@@ -74,10 +61,10 @@ async function run(argv: string[], io: Io): Promise<number> {
   if (quality !== 'export' && quality !== 'preview') {
     problems.push({ field: '--quality', message: `${JSON.stringify(quality)} is not a quality; allowed: export or preview.` });
   }
-  if (problems.length) return inputErrors(problems, json, io, 'the command line');
+  if (problems.length) return reportInputErrors(STYLE, problems, json, io, 'the command line');
 
   const parsed = await loadDesign(values);
-  if (!parsed.ok) return inputErrors(parsed.errors, json, io);
+  if (!parsed.ok) return reportInputErrors(STYLE, parsed.errors, json, io);
   const result = sizeDesign(parsed.inputs);
   if (!result.ok) {
     if (json) io.out(`${JSON.stringify(result, null, 2)}\n`);

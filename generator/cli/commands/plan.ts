@@ -8,7 +8,6 @@
 import { mkdir, mkdtemp, readdir, rename, rm, writeFile } from 'node:fs/promises';
 import { availableParallelism } from 'node:os';
 import { basename, dirname, join, resolve } from 'node:path';
-import { parseArgs } from 'node:util';
 import type { FieldError } from '../../doc/fields.ts';
 import { ROOT_FIELD } from '../../doc/fields.ts';
 import { parsePlan, PLAN_ROOT_FIELD } from '../../plan/schema.ts';
@@ -17,8 +16,8 @@ import { documentWithHeads, planJson } from '../../plan/plan-json.ts';
 import { planHtml, planMarkdown, planReport } from '../../plan/report.ts';
 import type { PlanResult } from '../../plan/types.ts';
 import { EXIT_INPUT, EXIT_OK, type Command, type Io } from '../command.ts';
-import { argumentError, readDesignFile } from '../design-input.ts';
-import { formatFieldErrors } from '../format-sizing.ts';
+import { readCommandLine, reportInputErrors } from '../command-line.ts';
+import { readDesignFile } from '../design-input.ts';
 import type { BuildPool, DesignJob } from '../plan/build-designs.ts';
 
 const OPTIONS = {
@@ -55,11 +54,8 @@ written); 1 a fault in floatwright.
 
 const QUALITIES = ['export', 'preview'] as const;
 
-function inputErrors(errors: FieldError[], json: boolean, io: Io, subject = 'the plan'): number {
-  if (json) io.out(`${JSON.stringify({ ok: false, errors }, null, 2)}\n`);
-  else io.err(`floatwright plan: ${formatFieldErrors(errors, () => undefined, subject)}`);
-  return EXIT_INPUT;
-}
+const STYLE = { command: 'plan', subject: 'the plan', help: HELP, allowPositionals: true };
+const inputErrors = (errors: FieldError[], json: boolean, io: Io, subject?: string) => reportInputErrors(STYLE, errors, json, io, subject);
 
 /** A folder name from a container name: "top tier" -> "top-tier". */
 function slug(text: string): string {
@@ -167,19 +163,9 @@ export async function writePlanFolder(opts: WritePlanOptions): Promise<{ files: 
 
 async function run(argv: string[], io: Io): Promise<number> {
   const json = argv.includes('--json');
-  let values: Record<string, unknown>;
-  let positionals: string[];
-  try {
-    ({ values, positionals } = parseArgs({ args: argv, options: OPTIONS, strict: true, allowPositionals: true }));
-  } catch (error) {
-    const problem = argumentError(error, Object.keys(OPTIONS));
-    if (!problem) throw error;
-    return inputErrors([problem], json, io, 'the command line');
-  }
-  if (values.help) {
-    io.out(HELP);
-    return EXIT_OK;
-  }
+  const args = readCommandLine(argv, OPTIONS, STYLE, io);
+  if (typeof args === 'number') return args;
+  const { values, positionals } = args;
   if (positionals.length !== 1) {
     const message =
       positionals.length === 0

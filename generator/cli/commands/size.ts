@@ -2,12 +2,11 @@
  * `floatwright size`: size one valve from a design file and/or flags, and
  * print the result as a table (with the cautions) or as JSON.
  */
-import { parseArgs } from 'node:util';
-import type { FieldError } from '../../doc/fields.ts';
 import { sizeDesign } from '../../sizing/size-design.ts';
 import { EXIT_INPUT, EXIT_OK, type Command, type Io } from '../command.ts';
-import { argumentError, DESIGN_OPTIONS, designFlagsHelp, flagForField, loadDesign } from '../design-input.ts';
-import { formatFailureText, formatFieldErrors, formatSizingText } from '../format-sizing.ts';
+import { readCommandLine, reportInputErrors } from '../command-line.ts';
+import { DESIGN_OPTIONS, designFlagsHelp, flagForField, loadDesign } from '../design-input.ts';
+import { formatFailureText, formatSizingText } from '../format-sizing.ts';
 
 const OPTIONS = {
   ...DESIGN_OPTIONS,
@@ -39,29 +38,16 @@ Examples:
 Exit status: 0 sized; 2 bad input or no size fits (the reasons are printed); 1 a fault in floatwright.
 `;
 
-function inputErrors(errors: FieldError[], json: boolean, io: Io, subject = 'the design'): number {
-  if (json) io.out(`${JSON.stringify({ ok: false, errors }, null, 2)}\n`);
-  else io.err(`floatwright size: ${formatFieldErrors(errors, flagForField, subject)}`);
-  return EXIT_INPUT;
-}
+const STYLE = { command: 'size', subject: 'the design', flagFor: flagForField, help: HELP };
 
 async function run(argv: string[], io: Io): Promise<number> {
   const json = argv.includes('--json');
-  let values: Record<string, unknown>;
-  try {
-    ({ values } = parseArgs({ args: argv, options: OPTIONS, strict: true, allowPositionals: false }));
-  } catch (error) {
-    const problem = argumentError(error, Object.keys(OPTIONS));
-    if (!problem) throw error;
-    return inputErrors([problem], json, io, 'the command line');
-  }
-  if (values.help) {
-    io.out(HELP);
-    return EXIT_OK;
-  }
+  const args = readCommandLine(argv, OPTIONS, STYLE, io);
+  if (typeof args === 'number') return args;
+  const { values } = args;
 
   const parsed = await loadDesign(values);
-  if (!parsed.ok) return inputErrors(parsed.errors, json, io);
+  if (!parsed.ok) return reportInputErrors(STYLE, parsed.errors, json, io);
 
   const result = sizeDesign(parsed.inputs);
   if (!result.ok) {
