@@ -13,7 +13,6 @@ import type { CalibrationPoint, DesignInputs } from '../sizing/inputs.ts';
 import { fitSealCalibration } from '../sizing/hydrostatics/fit-seal-calibration.ts';
 import { DEFAULT_MATERIAL_NAME, findMaterial, materialNames } from '../sizing/materials.ts';
 import {
-  areaField,
   checkRange,
   densityField,
   forceField,
