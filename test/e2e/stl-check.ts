@@ -3,7 +3,8 @@
  * 50 bytes per triangle, per the STL format as slicers read it), weld corners
  * by exact position (STL carries no indices), and count edge uses. A closed
  * 2-manifold uses every edge exactly twice, once in each direction (3MF Core
- * Specification 4.1, the same rule slicers apply to STL).
+ * Specification 4.1, the same rule slicers apply to STL). Source of the rule:
+ * the 3MF Core Specification; the STL layout is the open format's.
  */
 export interface StlCheck {
   triangles: number;

@@ -1,6 +1,6 @@
 /**
- * Our binary STL writer against JSCAD's own @jscad/stl-serializer (an
- * independent general-purpose npm writer of the same open format), on a real
+ * Source of the check: JSCAD's own @jscad/stl-serializer (an independent
+ * general-purpose npm writer of the same open format), against our binary STL writer, on a real
  * part: both files, read back with three's STLLoader, hold as many triangles
  * and the same enclosed volume (within JSCAD's vertex snapping).
  * Volume by the divergence theorem (any vector calculus text).
