@@ -3,6 +3,7 @@ import { customElement, property } from 'lit/decorators.js';
 import { materialNames } from '../../generator/sizing/materials.ts';
 import { getAt, type Doc } from '../lib/doc-path.ts';
 import { FIELD_GROUPS } from '../lib/form-fields.ts';
+import { MATERIAL_DENSITY_FIELD, OTHER_FILAMENT, materialChoice, otherFilamentValue } from '../lib/material-choice.ts';
 import { displayText, documentValue, unitFor, type FieldDef, type UnitSystem } from '../lib/units-system.ts';
 import { shared } from './shared-styles.ts';
 import './fw-bench-points.ts';
@@ -44,7 +45,8 @@ export class FwDesignForm extends LitElement {
     return `f-${def.path.replace(/\./g, '-')}`;
   }
 
-  private renderField(def: FieldDef) {
+  /** `emptyValue`: what an emptied box sends (undefined removes the key; '' keeps it, for the density inside a custom material) */
+  private renderField(def: FieldDef, emptyValue?: '') {
     const id = this.fieldId(def);
     const unit = unitFor(def, this.units);
     const error = this.errors[def.path];
@@ -60,7 +62,7 @@ export class FwDesignForm extends LitElement {
           .value=${displayText(raw, def, this.units)}
           aria-invalid=${error ? 'true' : 'false'}
           aria-describedby="${id}-unit ${id}-msg"
-          @input=${(e: InputEvent) => this.emit(def.path, documentValue((e.target as HTMLInputElement).value, def, this.units))}
+          @input=${(e: InputEvent) => this.emit(def.path, documentValue((e.target as HTMLInputElement).value, def, this.units) ?? emptyValue)}
         />
         <span class="unit" id="${id}-unit">${unit}</span>
         ${def.hint ? html`<span class="hint">${def.hint}</span>` : nothing}
@@ -69,21 +71,57 @@ export class FwDesignForm extends LitElement {
     </div>`;
   }
 
-  private renderMaterial() {
+  /** the grower's own filament, kept while a table one is picked, so picking "other" again brings it back */
+  private rememberedOther: { name: string; density: unknown } | null = null;
+
+  override willUpdate(): void {
+    const choice = materialChoice(getAt(this.doc, 'print.material'));
+    if (choice.kind === 'other') this.rememberedOther = { name: choice.name, density: choice.density };
+  }
+
+  /** The menu shows the document's choice (set after the options exist; an attribute would not move a menu the grower has used). */
+  override updated(): void {
+    const select = this.renderRoot.querySelector<HTMLSelectElement>('#f-print-material');
+    const choice = materialChoice(getAt(this.doc, 'print.material'));
+    const value = choice.kind === 'table' ? choice.name : choice.kind === 'other' ? OTHER_FILAMENT : '';
+    if (select && select.value !== value) select.value = value;
+  }
+
+  private pickMaterial(value: string): void {
     const raw = getAt(this.doc, 'print.material');
-    const custom = raw && typeof raw === 'object' ? (raw as { name?: string }).name ?? 'your own' : null;
-    const current = typeof raw === 'string' ? raw : custom ? '__custom' : 'PETG';
-    const error = this.errors['print.material'] ?? this.errors['print.material.density'];
+    this.emit('print.material', value === OTHER_FILAMENT ? otherFilamentValue(raw, this.rememberedOther) : value);
+  }
+
+  private renderMaterial() {
+    const choice = materialChoice(getAt(this.doc, 'print.material'));
+    const error = this.errors['print.material'];
     return html`<div class="field ${error ? 'bad' : ''}">
-      <label for="f-print-material">Filament</label>
-      <div class="box">
-        <select id="f-print-material" aria-describedby="f-print-material-msg" @change=${(e: Event) => this.emit('print.material', (e.target as HTMLSelectElement).value)}>
-          ${materialNames().map((n) => html`<option value=${n} ?selected=${n.toLowerCase() === String(current).toLowerCase()}>${n}</option>`)}
-          ${custom ? html`<option value="__custom" selected disabled>${custom} (from your file)</option>` : nothing}
-        </select>
+        <label for="f-print-material">Filament</label>
+        <div class="box">
+          <select id="f-print-material" name="print.material" aria-invalid=${error ? 'true' : 'false'} aria-describedby="f-print-material-msg"
+            @change=${(e: Event) => this.pickMaterial((e.target as HTMLSelectElement).value)}>
+            ${materialNames().map((n) => html`<option value=${n}>${n}</option>`)}
+            <option value=${OTHER_FILAMENT}>other filament…</option>
+            ${choice.kind === 'unknown' ? html`<option value="" disabled>${choice.text} (not in the list)</option>` : nothing}
+          </select>
+        </div>
+        <div class="msg" id="f-print-material-msg" role=${error ? 'alert' : nothing}>${error ?? ''}</div>
       </div>
-      <div class="msg" id="f-print-material-msg">${error ?? ''}</div>
-    </div>`;
+      ${choice.kind === 'other' ? this.renderOtherFilament() : nothing}`;
+  }
+
+  /** Name and density of the grower's own filament (shown only for "other filament"). */
+  private renderOtherFilament() {
+    const nameError = this.errors['print.material.name'];
+    const name = getAt(this.doc, 'print.material.name');
+    return html`<div class="field ${nameError ? 'bad' : ''}">
+        <label for="f-print-material-name">Filament name</label>
+        <input id="f-print-material-name" name="print.material.name" autocomplete="off" maxlength="40" .value=${typeof name === 'string' ? name : ''}
+          aria-invalid=${nameError ? 'true' : 'false'} aria-describedby="f-print-material-name-msg"
+          @input=${(e: InputEvent) => this.emit('print.material.name', (e.target as HTMLInputElement).value)} />
+        <div class="msg" id="f-print-material-name-msg" role=${nameError ? 'alert' : nothing}>${nameError ?? ''}</div>
+      </div>
+      ${this.renderField(MATERIAL_DENSITY_FIELD, '')}`;
   }
 
   override render() {
