@@ -153,10 +153,14 @@ describe.skipIf(!haveChromium)('workbench in Chromium', () => {
   });
 
   it('turns the view: section off, parts apart, float at rest', async () => {
+    // the cut alone, close up: cut faces flat and darker (housing wall, float shell around its hollow, nozzle bore)
+    await page.locator('fw-valve-view').screenshot({ path: join(SHOTS, '11-cut-shut.png') });
     await page.getByLabel('parts apart').check();
     await page.getByLabel('resting on its pin').check();
     await shot('04-exploded');
+    await page.locator('fw-valve-view').screenshot({ path: join(SHOTS, '12-cut-apart.png') });
     await page.getByLabel('parts apart').uncheck();
+    await page.locator('fw-valve-view').screenshot({ path: join(SHOTS, '13-cut-rest.png') });
     await page.getByLabel('cut open').uncheck();
     await shot('05-whole');
     await page.getByLabel('cut open').check();
@@ -262,5 +266,56 @@ describe.skipIf(!haveChromium)('workbench in Chromium', () => {
     await page.locator('[data-way-out="level.target"]').click();
     await waitBuildAfter(after);
     await expect.poll(() => app().getAttribute('data-result')).toBe('sized');
+  });
+
+  it('takes a filament of the grower\'s own, keeps it over a unit switch and a share link, and goes back to a table one', async () => {
+    // densities: the table's PETG, 1.27 g/cm3 (typical datasheet figure, from memory); 1150 kg/m3 = 1.15 g/cm3 (NIST SP 811)
+    const filament = page.getByLabel('Filament', { exact: true });
+    await filament.selectOption({ label: 'other filament…' });
+    const name = page.getByLabel('Filament name');
+    const density = page.getByLabel('Filament density');
+    expect(await name.inputValue()).toBe('PETG');
+    expect(await density.inputValue()).toBe('1.27');
+    let before = await buildId();
+    await name.fill('PETG-CF');
+    await density.fill('1150 kg/m3');
+    await waitBuildAfter(before);
+    await expect.poll(() => page.getByRole('heading', { name: 'Plastic (PETG-CF)' }).count()).toBe(1);
+    const massGood = await page.locator('[data-result="mass-total"]').textContent();
+    // out of range: the message on the field (range from the schema), the last good design stays
+    await density.fill('9');
+    await expect.poll(() => density.getAttribute('aria-invalid')).toBe('true');
+    expect(await page.locator('#f-print-material-density-msg').textContent()).toMatch(/0\.5 g\/cm3 to 3 g\/cm3/);
+    expect(await page.locator('[data-result="mass-total"]').textContent()).toBe(massGood);
+    before = await buildId();
+    await density.fill('1.15');
+    await waitBuildAfter(before);
+    expect(await density.getAttribute('aria-invalid')).toBe('false');
+    await shot('14-own-filament');
+    // a unit switch leaves it as written (filament density stays in g/cm3 in both systems)
+    before = await buildId();
+    await page.getByLabel('imperial').check();
+    await waitBuildAfter(before);
+    expect(await density.inputValue()).toBe('1.15');
+    expect(await name.inputValue()).toBe('PETG-CF');
+    before = await buildId();
+    await page.getByLabel('metric').check();
+    await waitBuildAfter(before);
+    // the share link carries it: opened fresh, the form shows it
+    await page.getByRole('button', { name: 'Copy share link' }).click();
+    const link = await page.getByLabel('Share link').inputValue();
+    await page.goto('about:blank');
+    await page.goto(link);
+    await waitPreviewAfter(0);
+    expect(await filament.inputValue()).toBe('__other');
+    expect(await name.inputValue()).toBe('PETG-CF');
+    expect(await density.inputValue()).toBe('1.15');
+    await expect.poll(() => page.getByRole('heading', { name: 'Plastic (PETG-CF)' }).count()).toBe(1);
+    // back to a table material
+    before = await buildId();
+    await filament.selectOption('PLA');
+    await waitBuildAfter(before);
+    expect(await page.getByLabel('Filament density').count()).toBe(0);
+    await expect.poll(() => page.getByRole('heading', { name: 'Plastic (PLA)' }).count()).toBe(1);
   });
 });

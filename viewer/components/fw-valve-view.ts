@@ -14,6 +14,42 @@ export interface ViewOptions {
 }
 
 const COLOURS: Record<ShownPart, number> = { housing: 0xcdbb98, float: 0xe07b39, nozzle: 0x4f7b9a, pin: 0x6d8f4e, pad: 0x2e2e2e };
+/**
+ * Cut faces: a pale, unlit tint of each part's colour with diagonal hatching
+ * (the drafting convention for a cut through solid material, ISO 128-50), so
+ * a cut wall reads as solid plastic, stands out from the shaded inside
+ * surfaces, and stays told apart from its neighbour.
+ */
+const CUT_COLOURS: Record<ShownPart, number> = { housing: 0xf1e6cf, float: 0xf9c7a4, nozzle: 0xb3cde0, pin: 0xc6dcb2, pad: 0x9a9a9a };
+/** hatch period and line width, in device pixels */
+const HATCH_PERIOD_PX = 7;
+const HATCH_LINE_PX = 2;
+
+/**
+ * A part's material. Where the cut opens a closed part, the eye looks through
+ * the opening at the inside of the part's own surfaces, which are back faces:
+ * drawn flat and hatched, they read as the cut face (a cap) with no cap
+ * geometry and no second pass. Hollows (the float's air space, the nozzle
+ * bore) are seen through front faces and stay shaded. One shader program
+ * serves every part; the cut colour is a uniform.
+ */
+function partMaterial(part: ShownPart): THREE.MeshStandardMaterial {
+  const material = new THREE.MeshStandardMaterial({ color: COLOURS[part], roughness: 0.75, metalness: 0.02, flatShading: true, side: THREE.DoubleSide });
+  const cutColour = new THREE.Color(CUT_COLOURS[part]);
+  material.onBeforeCompile = (shader) => {
+    shader.uniforms.cutColour = { value: cutColour };
+    shader.fragmentShader = `uniform vec3 cutColour;\n${shader.fragmentShader.replace(
+      '#include <opaque_fragment>',
+      `#include <opaque_fragment>
+      if (!gl_FrontFacing) {
+        float hatch = mod(gl_FragCoord.x + gl_FragCoord.y, ${HATCH_PERIOD_PX.toFixed(1)}) < ${HATCH_LINE_PX.toFixed(1)} ? 0.55 : 1.0;
+        gl_FragColor = vec4(cutColour * hatch, 1.0);
+      }`,
+    )}`;
+  };
+  material.customProgramCacheKey = () => 'fw-part-cut-hatch';
+  return material;
+}
 
 /**
  * The valve in 3D, as mounted: orbit (drag), zoom (wheel), a cut through the
@@ -127,8 +163,7 @@ export class FwValveView extends LitElement {
         geometry.setAttribute('position', new THREE.BufferAttribute(m.positions, 3));
         geometry.setIndex(new THREE.BufferAttribute(m.indices, 1));
         geometry.computeVertexNormals();
-        const material = new THREE.MeshStandardMaterial({ color: COLOURS[name], roughness: 0.75, metalness: 0.02, flatShading: true, side: THREE.DoubleSide });
-        const mesh = new THREE.Mesh(geometry, material);
+        const mesh = new THREE.Mesh(geometry, partMaterial(name));
         mesh.matrixAutoUpdate = false;
         mesh.name = name;
         this.parts.set(name, mesh);
@@ -167,9 +202,10 @@ export class FwValveView extends LitElement {
       const off = this.explodeOffset(name);
       mesh.matrix.copy(new THREE.Matrix4().makeTranslation(off.x, off.y, off.z).multiply(m));
       mesh.matrixWorldNeedsUpdate = true;
-      const material = mesh.material as THREE.MeshStandardMaterial;
+      const material = mesh.material as THREE.Material;
+      // a program change only when the cut is switched, not on every redraw
+      if ((material.clippingPlanes?.length ?? 0) !== planes.length) material.needsUpdate = true;
       material.clippingPlanes = planes;
-      material.needsUpdate = true;
     }
   }
 
@@ -220,7 +256,7 @@ export class FwValveView extends LitElement {
 
   override render() {
     return html`<div class="stage">${this.webglError ? html`<p class="fallback">This browser could not start 3D drawing (${this.webglError}). The sizes, plot and downloads still work.</p>` : ''}</div>
-      <div class="legend" aria-hidden="true"><span style="background:#cdbb98"></span>housing<span style="background:#e07b39"></span>float<span style="background:#4f7b9a"></span>nozzle<span style="background:#6d8f4e"></span>pin<span style="background:#2e2e2e"></span>pad<span style="background:#3d8fd1;opacity:.6"></span>water held (tank full)</div>`;
+      <div class="legend" aria-hidden="true"><span style="background:#cdbb98"></span>housing<span style="background:#e07b39"></span>float<span style="background:#4f7b9a"></span>nozzle<span style="background:#6d8f4e"></span>pin<span style="background:#2e2e2e"></span>pad<span style="background:#3d8fd1;opacity:.6"></span>water held (tank full)${this.options.section ? html`<i>; cut faces hatched</i>` : ''}</div>`;
   }
 }
 
