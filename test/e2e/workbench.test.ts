@@ -249,6 +249,25 @@ describe.skipIf(!haveChromium)('workbench in Chromium', () => {
     await expect.poll(() => page.locator('[data-result="calibrated-lip"]').count()).toBe(0);
   });
 
+  it('reaches "Open design file" by Tab, and shows the cautions without scrolling at 1400x900 and 1024x768', async () => {
+    // WCAG 2.2 SC 2.1.1 Keyboard (source: W3C): every control works from the keyboard
+    await page.getByRole('button', { name: 'Save design file' }).focus();
+    await page.keyboard.press('Tab');
+    const focused = await page.evaluate(() => {
+      let el = document.activeElement;
+      while (el?.shadowRoot?.activeElement) el = el.shadowRoot.activeElement;
+      return { type: (el as HTMLInputElement | null)?.type, label: el?.closest('label')?.textContent?.trim() };
+    });
+    expect(focused).toEqual({ type: 'file', label: 'Open design file…' });
+    for (const [width, height] of [[1400, 900], [1024, 768]]) {
+      await page.setViewportSize({ width, height });
+      const box = await page.locator('fw-cautions').boundingBox();
+      expect(box!.y, `cautions start on screen at ${width}x${height}`).toBeGreaterThan(0);
+      expect(box!.y + box!.height, `cautions end on screen at ${width}x${height}`).toBeLessThanOrEqual(height + 0.5);
+    }
+    await page.setViewportSize({ width: 1400, height: 900 });
+  });
+
   it('refuses a bad design file and keeps the current design', async () => {
     await page.locator('input[type="file"]').setInputFiles({ name: 'broken.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify({ supply: { headMax: '2 m' }, level: { target: '900 mm' } })) });
     await expect.poll(() => page.locator('[data-notice="bad"]').textContent()).toMatch(/level\.target/);

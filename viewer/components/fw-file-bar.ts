@@ -22,8 +22,9 @@ export class FwFileBar extends LitElement {
       .row > span { color: var(--muted); font-size: 0.85rem; min-width: 5.5rem; }
       .primary { background: var(--leaf); color: #fff; }
       .primary:hover { background: #335a2b; }
-      input[type='file'] { display: none; }
-      label.file { border: 1px solid var(--leaf); color: var(--leaf); border-radius: 6px; padding: 0.3rem 0.7rem; cursor: pointer; }
+      /* hidden from sight but not from Tab: the label is the button, the input takes the focus (Enter or Space opens the chooser) */
+      input[type='file'] { position: absolute; inset: 0; width: 1px; height: 1px; opacity: 0; overflow: hidden; }
+      label.file { position: relative; border: 1px solid var(--leaf); color: var(--leaf); border-radius: 6px; padding: 0.3rem 0.7rem; cursor: pointer; }
       label.file:focus-within { outline: 3px solid #e0a030; }
       .busy { color: var(--muted); font-size: 0.85rem; }
     `,

@@ -14,6 +14,11 @@ export interface ViewOptions {
 }
 
 const COLOURS: Record<ShownPart, number> = { housing: 0xcdbb98, float: 0xe07b39, nozzle: 0x4f7b9a, pin: 0x6d8f4e, pad: 0x2e2e2e };
+/** Legend entries: swatch colour (the water as drawn, translucent) and words. */
+const LEGEND: readonly [string, string][] = [
+  ['#cdbb98', 'housing'], ['#e07b39', 'float'], ['#4f7b9a', 'nozzle'], ['#6d8f4e', 'pin'], ['#2e2e2e', 'pad'], ['#9cc5e6', 'water held (tank full)'],
+];
+
 /**
  * Cut faces: a pale, unlit tint of each part's colour with diagonal hatching
  * (the drafting convention for a cut through solid material, ISO 128-50), so
@@ -66,7 +71,9 @@ export class FwValveView extends LitElement {
       .stage { width: 100%; height: 100%; min-height: 300px; border-radius: 8px; overflow: hidden; background: linear-gradient(#eef3f1, #dfe7e2); border: 1px solid var(--line); }
       canvas { display: block; width: 100%; height: 100%; }
       .legend { position: absolute; left: 0.6rem; bottom: 0.5rem; font-size: 0.78rem; color: #333; background: #ffffffcc; padding: 0.15rem 0.45rem; border-radius: 4px; }
-      .legend span { display: inline-block; width: 0.7rem; height: 0.7rem; border-radius: 2px; margin: 0 0.2rem 0 0.5rem; vertical-align: -1px; }
+      .legend i { font-style: normal; white-space: nowrap; margin-right: 0.55rem; }
+      .legend span.cut { background: repeating-linear-gradient(45deg, #8a7a5a 0 1.5px, #f1e6cf 1.5px 4px); border: 1px solid #b9ab8c; box-sizing: border-box; }
+      .legend span { display: inline-block; width: 0.7rem; height: 0.7rem; border-radius: 2px; margin-right: 0.2rem; vertical-align: -1px; }
       .fallback { padding: 1rem; }
     `,
   ];
@@ -256,7 +263,7 @@ export class FwValveView extends LitElement {
 
   override render() {
     return html`<div class="stage">${this.webglError ? html`<p class="fallback">This browser could not start 3D drawing (${this.webglError}). The sizes, plot and downloads still work.</p>` : ''}</div>
-      <div class="legend" aria-hidden="true"><span style="background:#cdbb98"></span>housing<span style="background:#e07b39"></span>float<span style="background:#4f7b9a"></span>nozzle<span style="background:#6d8f4e"></span>pin<span style="background:#2e2e2e"></span>pad<span style="background:#3d8fd1;opacity:.6"></span>water held (tank full)${this.options.section ? html`<i>; cut faces hatched</i>` : ''}</div>`;
+      <div class="legend" aria-hidden="true">${LEGEND.map(([colour, words]) => html`<i><span style="background:${colour}"></span>${words}</i>`)}${this.options.section ? html`<i><span class="cut"></span>cut faces</i>` : ''}</div>`;
   }
 }
 
