@@ -26,7 +26,7 @@ export class FwDesignForm extends LitElement {
       label { display: block; font-size: 0.9rem; }
       .box { display: flex; align-items: center; gap: 0.35rem; }
       input, select { font: inherit; padding: 0.25rem 0.4rem; border: 1px solid #b9b3a0; border-radius: 5px; width: 8.5rem; background: #fff; }
-      .unit { color: var(--muted); min-width: 2.2rem; }
+      .unit { color: var(--muted); min-width: 2.2rem; flex: none; white-space: nowrap; }
       .hint { color: var(--muted); font-size: 0.8rem; }
       .field.bad input { border-color: var(--bad); background: var(--bad-soft); }
       .msg { color: var(--bad); font-size: 0.82rem; margin-top: 0.15rem; }

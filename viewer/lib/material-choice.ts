@@ -49,5 +49,5 @@ export const MATERIAL_DENSITY_FIELD: FieldDef = {
   kind: 'density',
   metric: 'g/cm3',
   imperial: 'g/cm3',
-  hint: 'from the spool or datasheet; also takes kg/m3',
+  hint: 'from the spool; also takes kg/m3',
 };
