@@ -18,6 +18,7 @@
  * travel s >= max(d_o / 2, 1.5 mm), at least two vents of 3 mm, parts at most 250 mm,
  * at most 200,000 triangles a part.
  */
+import { transformMesh } from '../../generator/solids/shapes/transform-mesh.ts';
 import type { DesignInputs } from '../../generator/sizing/inputs.ts';
 import type { SizingResult, SizingSuccess } from '../../generator/sizing/result.ts';
 import {
@@ -181,19 +182,6 @@ export function checkPartMeshes(wasm: ManifoldToplevel, parts: Record<string, In
   return p;
 }
 
-/** Column-major 4x4 applied to each vertex (rotations plus shifts: winding kept). */
-export function place(mesh: IndexedMesh, m: readonly number[]): IndexedMesh {
-  const src = mesh.positions;
-  const out = new Float32Array(src.length);
-  for (let i = 0; i < src.length; i += 3) {
-    const x = src[i], y = src[i + 1], z = src[i + 2];
-    out[i] = m[0] * x + m[4] * y + m[8] * z + m[12];
-    out[i + 1] = m[1] * x + m[5] * y + m[9] * z + m[13];
-    out[i + 2] = m[2] * x + m[6] * y + m[10] * z + m[14];
-  }
-  return { positions: out, indices: mesh.indices };
-}
-
 /** Overlap taken as contact: float32 rounding where faces touch, mm3 (as in test/solids/assembly.test.ts). */
 const CONTACT_MM3 = 5e-3;
 
@@ -220,7 +208,7 @@ export function checkAssembly(
   for (const state of ['rest', 'seal'] as const) {
     const ms: Record<string, Manifold> = {};
     try {
-      for (const name of names) ms[name] = meshToManifold(wasm, place(parts[name]!, transforms[state][name]), name);
+      for (const name of names) ms[name] = meshToManifold(wasm, transformMesh(parts[name]!, transforms[state][name]), name);
       for (let i = 0; i < names.length; i++) {
         for (let j = i + 1; j < names.length; j++) {
           const pair = `${names[i]}+${names[j]}`;

@@ -3,8 +3,9 @@ import { CAUTIONS } from '../../generator/doc/cautions.ts';
 import { planHtml, planMarkdown, planReport } from '../../generator/plan/report.ts';
 import { planOf, row } from './helpers.ts';
 
-// The report's figures are the plan's own; checked here: every caution (the shared project text, common
-// practice for low-pressure gravity feed), the starving mark, and HTML escaping (WHATWG HTML, character references).
+// The report's figures are the plan's own; checked here: every caution (the shared project text,
+// common practice for low-pressure gravity feed), the starving mark, and HTML escaping (source:
+// WHATWG HTML, character references).
 
 describe('plan report', () => {
   const plan = planOf({

@@ -18,7 +18,8 @@ import {
   type Manifold,
   type ManifoldToplevel,
 } from '../../generator/solids/mesh/index.ts';
-import { apply, cornersOn, SCALE_EXAMPLE, sizeDoc } from './helpers.ts';
+import { cornersOn, SCALE_EXAMPLE, sizeDoc } from './helpers.ts';
+import { transformMesh } from '../../generator/solids/shapes/transform-mesh.ts';
 
 const FLOAT_GAP_MM = 0.75; // DESIGN c_gap, common practice
 const PRINT_CLEARANCE_MM = 0.25; // DESIGN c_print, common practice
@@ -35,16 +36,10 @@ beforeAll(async () => {
   parts = await buildParts(sizing, { quality: 'preview', withPad: true });
 });
 
-function place(mesh: IndexedMesh, m: readonly number[]): IndexedMesh {
-  const out = new Float32Array(mesh.positions.length);
-  for (let i = 0; i < out.length; i += 3) out.set(apply(m, mesh.positions[i], mesh.positions[i + 1], mesh.positions[i + 2]), i);
-  return { positions: out, indices: mesh.indices }; // every transform here is a proper rotation plus a shift: winding kept
-}
-
 function mounted(state: 'rest' | 'seal'): Record<string, IndexedMesh> {
   const t = assemblyTransforms(sizing, state);
   const out: Record<string, IndexedMesh> = {};
-  for (const name of ['housing', 'float', 'nozzle', 'pin', 'pad'] as const) out[name] = place(parts[name] as IndexedMesh, t[name]);
+  for (const name of ['housing', 'float', 'nozzle', 'pin', 'pad'] as const) out[name] = transformMesh(parts[name] as IndexedMesh, t[name]);
   return out;
 }
 

@@ -81,11 +81,6 @@ export function clippedPolygon(r: number, n: number, yMin: number): [number, num
   return out;
 }
 
-/** Transform an xyz point by a column-major 4x4. */
-export function apply(m: readonly number[], x: number, y: number, z: number): [number, number, number] {
-  return [m[0] * x + m[4] * y + m[8] * z + m[12], m[1] * x + m[5] * y + m[9] * z + m[13], m[2] * x + m[6] * y + m[10] * z + m[14]];
-}
-
 /** Analytic volumes for the faceted parts (helpers.ts explains the equal-area radii). */
 export function facetedHousingMm3(s: SizingSuccess, q: Quality): number {
   const h = structuredClone(s.parts.housing);
