@@ -8,7 +8,7 @@ import { parseArgs, type ParseArgsConfig } from 'node:util';
 import type { FieldError } from '../doc/fields.ts';
 import { EXIT_INPUT, EXIT_OK, type Io } from './command.ts';
 import { argumentError } from './design-input.ts';
-import { formatFieldErrors } from './format-sizing.ts';
+import { formatFieldErrors } from '../doc/format-sizing.ts';
 
 export type CommandOptions = NonNullable<ParseArgsConfig['options']>;
 

@@ -11,7 +11,7 @@
  */
 import { CAUTIONS } from './cautions.ts';
 import type { NormalizedDoc } from './schema.ts';
-import { sizingSections, type Section } from '../cli/format-sizing.ts';
+import { sizingSections, type Section } from './format-sizing.ts';
 import { CONSTRAINT_TEXT } from '../sizing/layout/constraint-text.ts';
 import type { SizingSuccess } from '../sizing/result.ts';
 

@@ -1,6 +1,6 @@
 /** The files the grower downloads, made from one sizing at export quality. */
 import { strToU8, zipSync } from 'fflate';
-import { writeStlBinary } from '../../generator/solids/mesh/writeStlBinary.ts';
+import { writeStlBinary } from '../../generator/solids/mesh/write-stl-binary.ts';
 import { write3mf } from '../../generator/solids/mesh/write3mf.ts';
 import type { SizingSuccess } from '../../generator/sizing/result.ts';
 import { buildSheet } from './sheet-source.ts';

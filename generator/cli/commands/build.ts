@@ -9,7 +9,7 @@ import { writeDesignFiles } from '../../solids/write-design-files.ts';
 import { EXIT_INPUT, EXIT_OK, type Command, type Io } from '../command.ts';
 import { readCommandLine, reportInputErrors } from '../command-line.ts';
 import { DESIGN_OPTIONS, designFlagsHelp, flagForField, loadDesign } from '../design-input.ts';
-import { fixed, formatCautions, formatFailureText } from '../format-sizing.ts';
+import { fixed, formatCautions, formatFailureText } from '../../doc/format-sizing.ts';
 
 const OPTIONS = {
   ...DESIGN_OPTIONS,

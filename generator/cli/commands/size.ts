@@ -6,7 +6,7 @@ import { sizeDesign } from '../../sizing/size-design.ts';
 import { EXIT_INPUT, EXIT_OK, type Command, type Io } from '../command.ts';
 import { readCommandLine, reportInputErrors } from '../command-line.ts';
 import { DESIGN_OPTIONS, designFlagsHelp, flagForField, loadDesign } from '../design-input.ts';
-import { formatFailureText, formatSizingText } from '../format-sizing.ts';
+import { formatFailureText, formatSizingText } from '../../doc/format-sizing.ts';
 
 const OPTIONS = {
   ...DESIGN_OPTIONS,

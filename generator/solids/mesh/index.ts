@@ -21,33 +21,33 @@ export type { Manifold, ManifoldToplevel } from 'manifold-3d';
 export { jscad, type Geom2, type Geom3 } from './jscad.ts';
 export type { BoundsMm, EdgeUseCounts, IndexedMesh } from './types.ts';
 
-export { isNodeRuntime, loadManifold, useManifold } from './loadManifold.ts';
+export { isNodeRuntime, loadManifold, useManifold } from './load-manifold.ts';
 
-export { geom3ToMesh } from './geom3ToMesh.ts';
-export { meshToManifold } from './meshToManifold.ts';
-export { toManifold } from './toManifold.ts';
-export { manifoldToMesh, type ManifoldToMeshOptions } from './manifoldToMesh.ts';
-export { manifoldToGeom3 } from './manifoldToGeom3.ts';
-export { meshToGeom3 } from './meshToGeom3.ts';
-export { isIndexedMesh } from './isIndexedMesh.ts';
+export { geom3ToMesh } from './geom3-to-mesh.ts';
+export { meshToManifold } from './mesh-to-manifold.ts';
+export { toManifold } from './to-manifold.ts';
+export { manifoldToMesh, type ManifoldToMeshOptions } from './manifold-to-mesh.ts';
+export { manifoldToGeom3 } from './manifold-to-geom3.ts';
+export { meshToGeom3 } from './mesh-to-geom3.ts';
+export { isIndexedMesh } from './is-indexed-mesh.ts';
 
-export type { Solid } from './solidInputs.ts';
-export { unionAll } from './unionAll.ts';
-export { subtractAll } from './subtractAll.ts';
+export type { Solid } from './solid-inputs.ts';
+export { unionAll } from './union-all.ts';
+export { subtractAll } from './subtract-all.ts';
 export { intersect } from './intersect.ts';
 
-export { meshVolumeMm3 } from './meshVolumeMm3.ts';
-export { meshBounds } from './meshBounds.ts';
-export { countEdgeUses } from './countEdgeUses.ts';
-export { triangleCount } from './triangleCount.ts';
+export { meshVolumeMm3 } from './mesh-volume-mm3.ts';
+export { meshBounds } from './mesh-bounds.ts';
+export { countEdgeUses } from './count-edge-uses.ts';
+export { triangleCount } from './triangle-count.ts';
 
-export { writeStlBinary, type StlOptions } from './writeStlBinary.ts';
+export { writeStlBinary, type StlOptions } from './write-stl-binary.ts';
 export { write3mf, type ThreeMfObject, type ThreeMfOptions } from './write3mf.ts';
-export { layoutOnPlate, type Footprint, type PlateLayout, type PlateOptions } from './layoutOnPlate.ts';
-export { formatFloat32 } from './formatFloat32.ts';
+export { layoutOnPlate, type Footprint, type PlateLayout, type PlateOptions } from './layout-on-plate.ts';
+export { formatFloat32 } from './format-float32.ts';
 
-export { MAX_SEGMENTS, segmentsForChordError } from './segmentsForChordError.ts';
+export { MAX_SEGMENTS, segmentsForChordError } from './segments-for-chord-error.ts';
 export { QUALITY, segmentsFor, type Quality } from './quality.ts';
-export { holePolygonRadiusMm } from './holePolygonRadiusMm.ts';
+export { holePolygonRadiusMm } from './hole-polygon-radius-mm.ts';
 export { teardrop2d, type TeardropOptions } from './teardrop2d.ts';
-export { teardropArea } from './teardropArea.ts';
+export { teardropArea } from './teardrop-area.ts';

@@ -3,7 +3,7 @@
  * status NoError, when they do not overlap).
  */
 import type { Manifold, ManifoldToplevel } from 'manifold-3d';
-import { convertSolids, type Solid } from './solidInputs.ts';
+import { convertSolids, type Solid } from './solid-inputs.ts';
 
 export function intersect(wasm: ManifoldToplevel, a: Solid, b: Solid): Manifold {
   const { manifolds, release } = convertSolids(wasm, [a, b], 'intersect');

@@ -10,7 +10,7 @@
  * segmentsFor(r, quality) applies segmentsForChordError with that error.
  * Example: r = 10 mm → export 32 segments, preview 16.
  */
-import { segmentsForChordError } from './segmentsForChordError.ts';
+import { segmentsForChordError } from './segments-for-chord-error.ts';
 
 export type Quality = 'export' | 'preview';
 

@@ -17,11 +17,11 @@
  * arrangement that does not fit the plate.
  */
 import { strToU8, zipSync } from 'fflate';
-import { countEdgeUses } from './countEdgeUses.ts';
-import { formatFloat32 } from './formatFloat32.ts';
-import { isIndexedMesh } from './isIndexedMesh.ts';
-import { layoutOnPlate, type PlateOptions } from './layoutOnPlate.ts';
-import { meshBounds } from './meshBounds.ts';
+import { countEdgeUses } from './count-edge-uses.ts';
+import { formatFloat32 } from './format-float32.ts';
+import { isIndexedMesh } from './is-indexed-mesh.ts';
+import { layoutOnPlate, type PlateOptions } from './layout-on-plate.ts';
+import { meshBounds } from './mesh-bounds.ts';
 import type { IndexedMesh } from './types.ts';
 
 export interface ThreeMfObject {

@@ -29,7 +29,7 @@ describe('browser build of the mesh helpers', () => {
     expect(wasm).toHaveLength(1);
     expect(wasm[0]).toMatch(/^manifold-/);
     // the browser-only loader chunk returns the emitted file's URL
-    const locator = assets.find((name) => name.startsWith('browserModuleOptions'));
+    const locator = assets.find((name) => name.startsWith('browser-module-options'));
     expect(locator).toBeDefined();
     expect(readFileSync(join(outDir, 'assets', locator as string), 'utf8')).toContain(wasm[0]);
     // the worker is an ES module chunk of its own

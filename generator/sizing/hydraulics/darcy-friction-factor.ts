@@ -1,7 +1,7 @@
-import { checkRange } from './checkRange.ts';
-import { colebrookFrictionFactor, MAX_RELATIVE_ROUGHNESS } from './colebrookFrictionFactor.ts';
-import { LAMINAR_LIMIT_REYNOLDS, TURBULENT_LIMIT_REYNOLDS } from './flowRegime.ts';
-import { laminarFrictionFactor } from './laminarFrictionFactor.ts';
+import { checkRange } from './check-range.ts';
+import { colebrookFrictionFactor, MAX_RELATIVE_ROUGHNESS } from './colebrook-friction-factor.ts';
+import { LAMINAR_LIMIT_REYNOLDS, TURBULENT_LIMIT_REYNOLDS } from './flow-regime.ts';
+import { laminarFrictionFactor } from './laminar-friction-factor.ts';
 
 /**
  * Darcy friction factor over the whole Reynolds range, as the sizing model uses it.

@@ -1,8 +1,8 @@
 import { STANDARD_GRAVITY, TUBE_ROUGHNESS_M } from '../constants.ts';
-import { checkRange } from './checkRange.ts';
-import { MAX_RELATIVE_ROUGHNESS } from './colebrookFrictionFactor.ts';
-import { darcyFrictionFactor } from './darcyFrictionFactor.ts';
-import { reynoldsNumber } from './reynoldsNumber.ts';
+import { checkRange } from './check-range.ts';
+import { MAX_RELATIVE_ROUGHNESS } from './colebrook-friction-factor.ts';
+import { darcyFrictionFactor } from './darcy-friction-factor.ts';
+import { reynoldsNumber } from './reynolds-number.ts';
 
 export interface TubeHeadLossOptions {
   /** volume flow, m3/s (>= 0) */

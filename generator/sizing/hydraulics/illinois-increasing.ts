@@ -1,4 +1,4 @@
-import type { BisectionResult } from './bisectIncreasing.ts';
+import type { BisectionResult } from './bisect-increasing.ts';
 
 /**
  * Root of an increasing function on [lo, hi], where residual(lo) <= 0 <= residual(hi), by the

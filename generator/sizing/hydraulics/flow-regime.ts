@@ -1,4 +1,4 @@
-import { checkRange } from './checkRange.ts';
+import { checkRange } from './check-range.ts';
 
 /** Reynolds number up to which pipe flow is taken as laminar (common practice; White, Fluid Mechanics, ch. 6). */
 export const LAMINAR_LIMIT_REYNOLDS = 2300;

@@ -5,7 +5,7 @@
  */
 import type { Manifold, ManifoldToplevel } from 'manifold-3d';
 import { jscad, type Geom3 } from './jscad.ts';
-import { toManifold } from './toManifold.ts';
+import { toManifold } from './to-manifold.ts';
 
 /** What the boolean helpers accept: a JSCAD solid, or a Manifold the caller keeps owning. */
 export type Solid = Geom3 | Manifold;

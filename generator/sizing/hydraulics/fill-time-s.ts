@@ -1,4 +1,4 @@
-import { checkRange } from './checkRange.ts';
+import { checkRange } from './check-range.ts';
 
 export interface FillTimeOptions {
   /** reservoir surface area, m2 (> 0) */

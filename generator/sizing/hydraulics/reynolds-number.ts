@@ -1,4 +1,4 @@
-import { checkRange } from './checkRange.ts';
+import { checkRange } from './check-range.ts';
 
 export interface ReynoldsOptions {
   /** volume flow through the tube, m3/s (>= 0) */

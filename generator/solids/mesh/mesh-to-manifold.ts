@@ -8,7 +8,7 @@
  * memory is not garbage-collected).
  */
 import type { Manifold, ManifoldToplevel } from 'manifold-3d';
-import { countEdgeUses } from './countEdgeUses.ts';
+import { countEdgeUses } from './count-edge-uses.ts';
 import type { IndexedMesh } from './types.ts';
 
 export function meshToManifold(wasm: ManifoldToplevel, mesh: IndexedMesh, name = 'mesh'): Manifold {

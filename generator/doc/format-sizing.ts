@@ -2,8 +2,8 @@
  * A sizing result as plain text: sections of label / value / unit rows,
  * aligned for a terminal. The build sheet and the plan report reuse the rows.
  */
-import { cautionLines } from '../doc/cautions.ts';
-import type { FieldError } from '../doc/fields.ts';
+import { cautionLines } from './cautions.ts';
+import type { FieldError } from './fields.ts';
 import { CONSTRAINT_TEXT } from '../sizing/layout/constraint-text.ts';
 import type { SizingFailure, SizingSuccess, Warning } from '../sizing/result.ts';
 

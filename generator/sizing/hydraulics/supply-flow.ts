@@ -1,10 +1,10 @@
 import { ORIFICE_DISCHARGE_COEFFICIENT, SHARP_ENTRANCE_LOSS, TUBE_ROUGHNESS_M } from '../constants.ts';
-import { checkRange } from './checkRange.ts';
-import { MAX_RELATIVE_ROUGHNESS } from './colebrookFrictionFactor.ts';
-import { darcyFrictionFactor } from './darcyFrictionFactor.ts';
-import { flowRegime, type FlowRegime } from './flowRegime.ts';
-import { reynoldsNumber } from './reynoldsNumber.ts';
-import { valveFlowM3s } from './valveFlowM3s.ts';
+import { checkRange } from './check-range.ts';
+import { MAX_RELATIVE_ROUGHNESS } from './colebrook-friction-factor.ts';
+import { darcyFrictionFactor } from './darcy-friction-factor.ts';
+import { flowRegime, type FlowRegime } from './flow-regime.ts';
+import { reynoldsNumber } from './reynolds-number.ts';
+import { valveFlowM3s } from './valve-flow-m3s.ts';
 
 export interface SupplyFlowOptions {
   /** tank water surface above the nozzle tip, m (>= 0) */

@@ -1,4 +1,4 @@
-import { checkRange } from './checkRange.ts';
+import { checkRange } from './check-range.ts';
 
 /**
  * Darcy friction factor of turbulent flow in a smooth pipe (for cross-checks).

@@ -1,4 +1,4 @@
-import { checkRange } from './checkRange.ts';
+import { checkRange } from './check-range.ts';
 
 /**
  * Darcy friction factor of fully developed laminar pipe flow.

@@ -1,4 +1,4 @@
-import { checkRange } from './checkRange.ts';
+import { checkRange } from './check-range.ts';
 
 /** Largest relative roughness e/d the friction-factor functions accept (the Moody chart stops at 0.05). */
 export const MAX_RELATIVE_ROUGHNESS = 0.1;

@@ -5,7 +5,7 @@
  * empty Manifold.
  */
 import type { Manifold, ManifoldToplevel } from 'manifold-3d';
-import { convertSolids, type Solid } from './solidInputs.ts';
+import { convertSolids, type Solid } from './solid-inputs.ts';
 
 export function unionAll(wasm: ManifoldToplevel, parts: readonly Solid[]): Manifold {
   const { manifolds, release } = convertSolids(wasm, parts, 'unionAll.parts');

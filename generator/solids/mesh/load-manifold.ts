@@ -39,7 +39,7 @@ export function useManifold(instance: ManifoldToplevel): void {
 }
 
 async function instantiate(): Promise<ManifoldToplevel> {
-  const options = isNodeRuntime() ? undefined : (await import('./browserModuleOptions.ts')).browserModuleOptions();
+  const options = isNodeRuntime() ? undefined : (await import('./browser-module-options.ts')).browserModuleOptions();
   const instance = await Module(options);
   instance.setup(); // installs the JS-friendly wrappers; safe to call twice
   return instance;

@@ -1,5 +1,5 @@
-import { checkRange } from './checkRange.ts';
-import { MAX_RELATIVE_ROUGHNESS } from './colebrookFrictionFactor.ts';
+import { checkRange } from './check-range.ts';
+import { MAX_RELATIVE_ROUGHNESS } from './colebrook-friction-factor.ts';
 
 /**
  * Explicit approximation of the Colebrook-White friction factor (for cross-checks).

@@ -4,7 +4,7 @@
  * one per cutter). Returns a new Manifold the caller owns.
  */
 import type { Manifold, ManifoldToplevel } from 'manifold-3d';
-import { convertSolids, type Solid } from './solidInputs.ts';
+import { convertSolids, type Solid } from './solid-inputs.ts';
 
 export function subtractAll(wasm: ManifoldToplevel, base: Solid, cutters: readonly Solid[]): Manifold {
   const baseInput = convertSolids(wasm, [base], 'subtractAll.base');

@@ -1,8 +1,8 @@
 import { STANDARD_GRAVITY } from '../constants.ts';
-import { bisectIncreasing } from './bisectIncreasing.ts';
-import { illinoisIncreasing } from './illinoisIncreasing.ts';
-import { jetHeadM } from './jetHeadM.ts';
-import { tubeHeadLossM } from './tubeHeadLossM.ts';
+import { bisectIncreasing } from './bisect-increasing.ts';
+import { illinoisIncreasing } from './illinois-increasing.ts';
+import { jetHeadM } from './jet-head-m.ts';
+import { tubeHeadLossM } from './tube-head-loss-m.ts';
 
 /** Everything the steady energy balance of one tube-and-orifice line needs; SI, already checked. */
 export interface ValveLine {

@@ -1,11 +1,11 @@
 import { ORIFICE_DISCHARGE_COEFFICIENT, SHARP_ENTRANCE_LOSS, STANDARD_GRAVITY, TUBE_ROUGHNESS_M } from '../constants.ts';
-import { checkRange } from './checkRange.ts';
-import { MAX_RELATIVE_ROUGHNESS } from './colebrookFrictionFactor.ts';
-import { flowRegime, type FlowRegime } from './flowRegime.ts';
-import { illinoisIncreasing } from './illinoisIncreasing.ts';
-import { reynoldsNumber } from './reynoldsNumber.ts';
-import { tubeHeadLossM } from './tubeHeadLossM.ts';
-import { valveFlowM3s } from './valveFlowM3s.ts';
+import { checkRange } from './check-range.ts';
+import { MAX_RELATIVE_ROUGHNESS } from './colebrook-friction-factor.ts';
+import { flowRegime, type FlowRegime } from './flow-regime.ts';
+import { illinoisIncreasing } from './illinois-increasing.ts';
+import { reynoldsNumber } from './reynolds-number.ts';
+import { tubeHeadLossM } from './tube-head-loss-m.ts';
+import { valveFlowM3s } from './valve-flow-m3s.ts';
 
 /** One tee on the main and the identical valves it feeds. */
 export interface NetworkBranch {

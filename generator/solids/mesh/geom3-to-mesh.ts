@@ -12,7 +12,7 @@
  */
 import { jscad, type Geom3 } from './jscad.ts';
 import type { IndexedMesh } from './types.ts';
-import { weldKey } from './weldKey.ts';
+import { weldKey } from './weld-key.ts';
 
 export function geom3ToMesh(geom: Geom3): IndexedMesh {
   const polygons = jscad.geometries.geom3.toPolygons(geom);

@@ -1,5 +1,5 @@
 import { ORIFICE_DISCHARGE_COEFFICIENT, STANDARD_GRAVITY } from '../constants.ts';
-import { checkRange } from './checkRange.ts';
+import { checkRange } from './check-range.ts';
 
 export interface JetHeadOptions {
   /** volume flow through the orifice, m3/s (>= 0) */

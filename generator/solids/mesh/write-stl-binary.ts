@@ -10,8 +10,8 @@
  * Options: `header` (default "floatwright binary STL, millimetres"), cut to
  * 80 bytes of ASCII.
  */
-import { geom3ToMesh } from './geom3ToMesh.ts';
-import { isIndexedMesh } from './isIndexedMesh.ts';
+import { geom3ToMesh } from './geom3-to-mesh.ts';
+import { isIndexedMesh } from './is-indexed-mesh.ts';
 import type { Geom3 } from './jscad.ts';
 import type { IndexedMesh } from './types.ts';
 

@@ -1,5 +1,5 @@
 import { DRAIN_HEAD_LOSS_M, ORIFICE_DISCHARGE_COEFFICIENT, STANDARD_GRAVITY } from '../constants.ts';
-import { checkRange } from './checkRange.ts';
+import { checkRange } from './check-range.ts';
 
 export interface DrainAreaOptions {
   /** largest flow the drain openings must pass, m3/s (>= 0) */
