@@ -18,7 +18,8 @@ import { shared } from './shared-styles.ts';
 import './fw-design-form.ts';
 import './fw-results.ts';
 import './fw-push-plot.ts';
-import './fw-valve-view.ts';
+// three.js (most of the page's code) loads beside the first build instead of before it
+void import('./fw-valve-view.ts');
 import './fw-file-bar.ts';
 import './fw-cautions.ts';
 
@@ -82,6 +83,7 @@ export class FwApp extends LitElement {
       @media (max-width: 900px) {
         :host { height: auto; }
         main { grid-template-columns: 1fr; overflow: visible; }
+        fw-valve-view { flex: none; height: min(60vh, 420px); }
         fw-cautions { position: sticky; bottom: 0; }
       }
     `,

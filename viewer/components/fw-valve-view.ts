@@ -62,14 +62,21 @@ function partMaterial(part: ShownPart): THREE.MeshStandardMaterial {
  * rest on its pin or shut against the nozzle, and the parts pulled apart.
  * Fires `preview-rendered` after drawing a new set of parts.
  */
+/** The water block's material: translucent, cut with the parts. */
+function waterMaterial(): THREE.MeshStandardMaterial {
+  return new THREE.MeshStandardMaterial({ color: 0x3d8fd1, transparent: true, opacity: 0.28, side: THREE.DoubleSide, depthWrite: false });
+}
+
 @customElement('fw-valve-view')
 export class FwValveView extends LitElement {
   static override styles = [
     shared,
     css`
       :host { display: block; position: relative; }
-      .stage { width: 100%; height: 100%; min-height: 300px; border-radius: 8px; overflow: hidden; background: linear-gradient(#eef3f1, #dfe7e2); border: 1px solid var(--line); }
-      canvas { display: block; width: 100%; height: 100%; }
+      /* The canvas sits absolutely in the stage, so it never sizes the stage: sized by its content, the
+         stage grew by its border on every resize (and the redraw slowed with it) on a one-column page. */
+      .stage { position: relative; box-sizing: border-box; width: 100%; height: 100%; min-height: 300px; border-radius: 8px; overflow: hidden; background: linear-gradient(#eef3f1, #dfe7e2); border: 1px solid var(--line); }
+      canvas { position: absolute; inset: 0; display: block; width: 100%; height: 100%; }
       .legend { position: absolute; left: 0.6rem; bottom: 0.5rem; font-size: 0.78rem; color: #333; background: #ffffffcc; padding: 0.15rem 0.45rem; border-radius: 4px; }
       .legend i { font-style: normal; white-space: nowrap; margin-right: 0.55rem; }
       .legend span.cut { background: repeating-linear-gradient(45deg, #8a7a5a 0 1.5px, #f1e6cf 1.5px 4px); border: 1px solid #b9ab8c; box-sizing: border-box; }
@@ -124,7 +131,30 @@ export class FwValveView extends LitElement {
     this.resizeObserver = new ResizeObserver(() => this.resize());
     this.resizeObserver.observe(this.stage);
     this.resize();
+    if (!this.meshes) this.compileShaders();
     this.syncScene(true);
+  }
+
+  /**
+   * Compile the two shader programs (parts, water) while the first build is still in the
+   * worker: in software rendering the first draw otherwise spends a large share of the
+   * first view's time compiling them. A throwaway box with the parts' material, cut or not
+   * as the view starts, shares their program (one cache key for every part).
+   */
+  private compileShaders(): void {
+    if (!this.renderer) return;
+    const planes = this.options.section ? [this.cut] : [];
+    const part = partMaterial('housing');
+    part.clippingPlanes = planes;
+    const water = waterMaterial();
+    water.clippingPlanes = planes;
+    const box = new THREE.BoxGeometry(1, 1, 1);
+    const probes = [new THREE.Mesh(box, part), new THREE.Mesh(box, water)];
+    this.scene.add(...probes);
+    this.renderer.compile(this.scene, this.camera);
+    this.scene.remove(...probes);
+    // the materials are not disposed: that would release the compiled programs with them
+    box.dispose();
   }
 
   override disconnectedCallback(): void {
@@ -220,8 +250,7 @@ export class FwValveView extends LitElement {
     const s = this.sizing;
     if (!s) return;
     if (!this.water) {
-      const material = new THREE.MeshStandardMaterial({ color: 0x3d8fd1, transparent: true, opacity: 0.28, side: THREE.DoubleSide, depthWrite: false });
-      this.water = new THREE.Mesh(new THREE.BoxGeometry(1, 1, 1), material);
+      this.water = new THREE.Mesh(new THREE.BoxGeometry(1, 1, 1), waterMaterial());
       this.water.renderOrder = 2;
       this.water.name = 'water';
       this.scene.add(this.water);

@@ -7,10 +7,11 @@
 import type { DesignInputs } from '../../generator/sizing/inputs.ts';
 import type { BuiltReply, ExportFile, ExportKind, WorkerReply, WorkerRequest } from '../worker/protocol.ts';
 import type { PartName } from '../worker/parts-contract.ts';
+import { newBuildWorker, takeEarlyWorker } from './early-worker.ts';
 
 export type WorkerFactory = () => Worker;
 
-export const defaultWorkerFactory: WorkerFactory = () => new Worker(new URL('../worker/build-worker.ts', import.meta.url), { type: 'module' });
+export const defaultWorkerFactory: WorkerFactory = () => takeEarlyWorker() ?? newBuildWorker();
 
 export class BuildClient {
   private worker: Worker | null = null;

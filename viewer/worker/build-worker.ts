@@ -5,11 +5,15 @@
  */
 import { sizeDesign } from '../../generator/sizing/size-design.ts';
 import { assemblyTransforms, buildParts } from './solids-source.ts';
-import { exportFiles } from './export-files.ts';
+import { loadManifold } from '../../generator/solids/mesh/index.ts';
 import type { BuiltReply, WorkerReply, WorkerRequest } from './protocol.ts';
 import type { PartMeshes } from './parts-contract.ts';
 
 const scope = self as unknown as DedicatedWorkerGlobalScope;
+
+// Fetch and compile the geometry kernel now, not at the first build: the page starts this
+// worker before its own components have loaded, so the kernel is ready when the first design comes.
+void loadManifold().catch(() => undefined);
 
 function transferables(meshes: PartMeshes | null): Transferable[] {
   if (!meshes) return [];
@@ -36,6 +40,8 @@ async function handle(req: WorkerRequest): Promise<void> {
   }
   if (!sizing.ok) throw new Error('this design does not size, so there is nothing to export');
   const meshes = req.kind === 'sheet' ? null : await buildParts(sizing, { quality: 'export' });
+  // the writers, the build sheet and the zip load on the first export: the preview never needs them
+  const { exportFiles } = await import('./export-files.ts');
   const files = exportFiles(req.kind, sizing, req.document, meshes, req.part);
   scope.postMessage({ type: 'exported', id: req.id, files } satisfies WorkerReply, files.map((f) => f.bytes.buffer as ArrayBuffer));
 }
