@@ -1,0 +1,227 @@
+import { PART_SIZE_CAP_MM, STANDARD_GRAVITY } from '../constants.ts';
+import { depthForForceMm } from '../float/depth-for-force.ts';
+import { nozzleVolumeMm3, pinVolumeMm3 } from '../parts/part-volumes.ts';
+import { PIN_DIAMETER_MM, pinSpec } from '../parts/pin-spec.ts';
+import { rimMountSpec, type RimMountSpec } from '../rim/rim-mount-spec.ts';
+import { rimMountVolumesMm3 } from '../rim/rim-mount-volumes.ts';
+import { RIM_ADJUST_MM } from '../rim/rim-constants.ts';
+import { floatLowestZMm } from './float-lowest-z-mm.ts';
+import { frictionLevelBandMm } from './friction-level-band-mm.ts';
+import { leverArmVolume } from './lever-arm-volume.ts';
+import { FLOAT_TO_FRAME_GAP_MM, PIVOT_FRICTION_COEFFICIENT } from './lever-constants.ts';
+import { leverFloatPushN } from './lever-float-push-n.ts';
+import type { LeverFloat } from './lever-float.ts';
+import { leverFrameSpec } from './lever-frame-spec.ts';
+import { leverFrameVolumeMm3 } from './lever-frame-volume-mm3.ts';
+import { leverPadForceN } from './lever-pad-force-n.ts';
+import { leverPad } from './lever-pad.ts';
+import type { LeverArmSpec, LeverBasis, LeverCandidate, LeverConstraint } from './lever-types.ts';
+import { padArcContact } from './pad-arc-contact.ts';
+import { widestExtentMm, type PlanShape } from './widest-extent-mm.ts';
+
+/** The arm with its pad: printed volume, dry weight and centroid (the arm is above the water at the seal). */
+export interface ArmLoad {
+  arm: LeverArmSpec;
+  armMm3: number;
+  padMassKg: number;
+  weightN: number;
+  centroidMm: number;
+}
+
+export function armLoad(lb: LeverBasis, arm: LeverArmSpec): ArmLoad {
+  const v = leverArmVolume(arm);
+  const pad = leverPad(lb.basis);
+  const armKg = v.volumeMm3 * 1e-9 * lb.basis.inputs.materialDensityKgM3;
+  const kg = armKg + pad.massKg;
+  return { arm, armMm3: v.volumeMm3, padMassKg: pad.massKg, weightN: kg * STANDARD_GRAVITY, centroidMm: (armKg * v.centroidXMm + pad.massKg * arm.padArmMm) / kg };
+}
+
+const PIN_RADIUS_MM = PIN_DIAMETER_MM / 2;
+
+/** Float push (closing, friction against it) that holds the seal force of a head. */
+export function floatPushForHead(lb: LeverBasis, load: ArmLoad, headM: number, direction: 'closing' | 'opening' = 'closing') {
+  return leverFloatPushN({
+    padForceN: lb.sealForceN(headM),
+    padArmMm: load.arm.padArmMm,
+    floatArmMm: load.arm.floatArmMm,
+    armWeightN: load.weightN,
+    armCentroidMm: load.centroidMm,
+    pinRadiusMm: PIN_RADIUS_MM,
+    frictionCoefficient: PIVOT_FRICTION_COEFFICIENT,
+    direction,
+  });
+}
+
+/**
+ * Pad force a float push gives with friction against it (the moment balance with
+ * every arm moved out by the friction circle, valid while the pin carries the arm
+ * down, which holds for a ratio above 1).
+ */
+export function padForceFromPush(load: ArmLoad, floatPushN: number): number {
+  const k = PIN_RADIUS_MM * Math.sin(Math.atan(PIVOT_FRICTION_COEFFICIENT));
+  return leverPadForceN(floatPushN, load.arm.floatArmMm + k, load.weightN, load.centroidMm + k, load.arm.padArmMm + k);
+}
+
+/** Reserve and seal depth of a float on this arm at H_max (what its cylinder height settles). */
+export function leverFloatChecks(lb: LeverBasis, load: ArmLoad, f: LeverFloat): { reserve: number; sealDepthMm: number; pushN: number } {
+  const push = floatPushForHead(lb, load, lb.basis.inputs.headMaxM).floatPushN;
+  return {
+    reserve: padForceFromPush(load, f.availableN) / lb.sealForceN(lb.basis.inputs.headMaxM),
+    sealDepthMm: depthForForceMm(f.float, push, f.massKg, lb.basis.inputs.liquidDensityKgM3),
+    pushN: push,
+  };
+}
+
+export interface LeverLayoutOptions {
+  mount: 'floor' | 'rim';
+  /** rim and wall, mm, for the rim mount */
+  rim?: { rimHeightMm: number; wallThicknessMm: number };
+  load: ArmLoad;
+  float: LeverFloat;
+}
+
+/**
+ * Lays out a lever valve (heights in mm above the floor):
+ * - the float seals at H_max with its bottom at z_b = L - z(F_float), F_float the
+ *   closing push with friction (so the level never rises past the target);
+ * - the arm lies on the float's plateau; its top face is the plateau + bar depth;
+ *   the pad stands proud of it, and the nozzle tip is the pad face less the
+ *   indentation; the pivot axis is the hole's centre depth under the top face:
+ *   the arm is level at the seal by construction;
+ * - at rest the arm turns down until the pad has dropped the preferred travel, or
+ *   until the float's far bottom corner meets the floor (on the rim: the floor
+ *   less the adjustment), whichever first; the minimum travel must fit;
+ * - the frame, the pin across it, and on the rim the hanger and stem follow.
+ */
+export function layoutLever(lb: LeverBasis, o: LeverLayoutOptions): LeverCandidate {
+  const b = lb.basis;
+  const inp = b.inputs;
+  const rho = inp.liquidDensityKgM3;
+  const { load, float: lf } = o;
+  const arm = load.arm;
+  const f = lf.float;
+  const R = f.outerDiameterMm / 2;
+  const delta = lb.indentationMm;
+  const pad = leverPad(b);
+  const targetMm = inp.targetLevelM * 1e3;
+
+  const closeMax = floatPushForHead(lb, load, inp.headMaxM);
+  const openMax = floatPushForHead(lb, load, inp.headMaxM, 'opening');
+  const closeMin = floatPushForHead(lb, load, inp.headMinM);
+  const depth = (n: number) => depthForForceMm(f, n, lf.massKg, rho);
+  const sealDepth = depth(closeMax.floatPushN);
+  const floatBottom = targetMm - sealDepth;
+  const armTop = floatBottom + f.heightMm + arm.barDepthMm;
+  const tip = armTop + pad.proudMm - delta;
+  const pivot = armTop - arm.holeCentreDepthMm;
+  const contact = padArcContact(arm.padArmMm, inp.sealDiameterM * 1e3, delta, tip - pivot);
+
+  // rest: pad centre (a_p) down by travel + delta, arm turned by asin((s + delta) / a_p)
+  const floorZ = o.mount === 'rim' ? RIM_ADJUST_MM : 0;
+  const lowestAt = (travel: number) => floatLowestZMm(arm.floatArmMm, R, floatBottom, pivot, Math.asin(Math.min(1, (travel + delta) / arm.padArmMm)));
+  let restTravel = b.preferredTravelMm;
+  if (lowestAt(restTravel) < floorZ) {
+    let lo = 0;
+    let hi = restTravel;
+    for (let i = 0; i < 40; i++) {
+      const mid = (lo + hi) / 2;
+      if (lowestAt(mid) >= floorZ) lo = mid;
+      else hi = mid;
+    }
+    restTravel = lo;
+  }
+
+  const frame = leverFrameSpec({
+    mount: o.mount,
+    arm,
+    nozzle: b.nozzle,
+    pivotZMm: pivot,
+    tipZMm: tip,
+    wallMm: inp.wallM * 1e3,
+    deckThicknessMm: b.deckThicknessMm,
+    bossHeightMm: b.bossHeightMm,
+  });
+  const pin = pinSpec(frame.widthMm, arm.holeDiameterMm);
+  let rim: RimMountSpec | null = null;
+  let rimMm3 = 0;
+  if (o.mount === 'rim') {
+    if (!o.rim) throw new RangeError('layoutLever: the rim mount needs rim.rimHeightMm and rim.wallThicknessMm');
+    rim = rimMountSpec({
+      rimHeightMm: o.rim.rimHeightMm,
+      wallThicknessMm: o.rim.wallThicknessMm,
+      valveTopZMm: frame.cheekBottomZMm + frame.heightMm,
+      printWallMm: inp.wallM * 1e3,
+    });
+    const v = rimMountVolumesMm3(rim);
+    rimMm3 = v.hangerMm3 + v.stemMm3;
+  }
+
+  const shapes: PlanShape[] = [
+    { kind: 'rect', x0: -frame.postHalfLengthMm, x1: frame.deckFrontXMm, y0: -frame.deckWidthMm / 2, y1: frame.deckWidthMm / 2 },
+    { kind: 'rect', x0: frame.footBackXMm, x1: frame.postHalfLengthMm, y0: -frame.footWidthMm / 2, y1: frame.footWidthMm / 2 },
+    { kind: 'rect', x0: arm.tailXMm, x1: arm.tipXMm, y0: -arm.barWidthMm / 2, y1: arm.barWidthMm / 2 },
+    { kind: 'circle', x: arm.floatArmMm, y: 0, r: R },
+  ];
+  if (rim) shapes.push({ kind: 'rect', x0: frame.footBackXMm - rim.behindDepthMm, x1: frame.footBackXMm, y0: -rim.widthMm / 2, y1: rim.widthMm / 2 });
+  const footprint = widestExtentMm(shapes);
+
+  const volumes = {
+    armMm3: load.armMm3,
+    frameMm3: leverFrameVolumeMm3(frame) + rimMm3,
+    floatMm3: lf.shellMm3,
+    nozzleMm3: nozzleVolumeMm3(b.nozzle),
+    pinMm3: pinVolumeMm3(pin),
+  };
+  const printedMm3 = volumes.armMm3 + volumes.frameMm3 + volumes.floatMm3 + volumes.nozzleMm3 + volumes.pinMm3;
+
+  const violations: LeverConstraint[] = [];
+  const seal = leverFloatChecks(lb, load, lf);
+  if (seal.reserve < inp.reserve) violations.push('reserve');
+  if (!(sealDepth <= f.cylinderHeightMm)) violations.push('seal-in-cylinder');
+  if (lowestAt(b.minimumTravelMm) < floorZ - 1e-9 || floatBottom < floorZ) violations.push('travel');
+  if (arm.floatArmMm - R < frame.postHalfLengthMm + FLOAT_TO_FRAME_GAP_MM - 1e-9) violations.push('float-clearance');
+  if (contact.lipGapMm > delta / 2 + 1e-9) violations.push('pad-arc');
+  if (footprint > inp.maxOuterDiameterM * 1e3 + 1e-9) violations.push('outer-diameter-limit');
+  if (frame.heightMm > PART_SIZE_CAP_MM || arm.tipXMm - arm.tailXMm > PART_SIZE_CAP_MM || f.outerDiameterMm > PART_SIZE_CAP_MM || (rim && rim.stem.lengthMm > PART_SIZE_CAP_MM)) {
+    violations.push('part-size');
+  }
+  if (rim && (rim.tooLow || frame.cheekBottomZMm < RIM_ADJUST_MM)) violations.push('rim-height');
+
+  return {
+    mount: o.mount,
+    arm,
+    frame,
+    float: f,
+    pin,
+    nozzle: b.nozzle,
+    rim,
+    ratio: arm.floatArmMm / arm.padArmMm,
+    floatMassKg: lf.massKg,
+    floatAvailableN: lf.availableN,
+    reserve: seal.reserve,
+    floatPushAtHeadMaxN: closeMax.floatPushN,
+    padForceAtHeadMaxN: lb.sealForceN(inp.headMaxM),
+    padForceAtHeadMinN: lb.sealForceN(inp.headMinM),
+    sealDepthMm: sealDepth,
+    floatBottomZMm: floatBottom,
+    tipZMm: tip,
+    pivotZMm: pivot,
+    shutOffAtHeadMaxMm: floatBottom + sealDepth,
+    shutOffAtHeadMinMm: floatBottom + depth(closeMin.floatPushN),
+    hysteresisMm: frictionLevelBandMm(closeMax.floatPushN, openMax.floatPushN, Math.PI * R * R, rho),
+    pivotReactionN: closeMax.pivotReactionN,
+    frictionTorqueNmm: closeMax.frictionTorqueNmm,
+    armWeightN: load.weightN,
+    armCentroidMm: load.centroidMm,
+    padTiltDeg: contact.tiltDeg,
+    lipGapMm: contact.lipGapMm,
+    padSlideMm: contact.slideMm,
+    restTravelMm: restTravel,
+    restLowestZMm: lowestAt(restTravel),
+    footprintMm: footprint,
+    volumes,
+    padMassKg: load.padMassKg,
+    totalMassKg: printedMm3 * 1e-9 * inp.materialDensityKgM3 + load.padMassKg,
+    violations,
+  };
+}

@@ -1,0 +1,37 @@
+/** A shape seen from above: an axis-aligned rectangle or a circle, mm. */
+export type PlanShape =
+  | { kind: 'rect'; x0: number; x1: number; y0: number; y1: number }
+  | { kind: 'circle'; x: number; y: number; r: number };
+
+/**
+ * Widest extent of a group of shapes seen from above: the largest distance
+ * between two of their points (the diameter of their convex hull). It is reached
+ * between two hull vertices, here rectangle corners or circle rims, so it is the
+ * largest of: corner to corner |p - q|; corner to circle |p - c| + r; circle to
+ * circle |c1 - c2| + r1 + r2 (a circle with itself: 2r).
+ *
+ * Example: a 10 x 10 square at the origin and a circle of radius 5 centred at
+ * (20, 5): farthest are (0, 0) or (0, 10) to the circle, sqrt(400 + 25) + 5 = 25.616.
+ * Source: elementary geometry.
+ */
+export function widestExtentMm(shapes: readonly PlanShape[]): number {
+  const corners: [number, number][] = [];
+  const circles: { x: number; y: number; r: number }[] = [];
+  for (const s of shapes) {
+    if (s.kind === 'rect') corners.push([s.x0, s.y0], [s.x0, s.y1], [s.x1, s.y0], [s.x1, s.y1]);
+    else circles.push(s);
+  }
+  let best = 0;
+  for (let i = 0; i < corners.length; i++) {
+    for (let j = i + 1; j < corners.length; j++) best = Math.max(best, Math.hypot(corners[i][0] - corners[j][0], corners[i][1] - corners[j][1]));
+    for (const c of circles) best = Math.max(best, Math.hypot(corners[i][0] - c.x, corners[i][1] - c.y) + c.r);
+  }
+  for (let i = 0; i < circles.length; i++) {
+    for (let j = i; j < circles.length; j++) {
+      const a = circles[i];
+      const b = circles[j];
+      best = Math.max(best, Math.hypot(a.x - b.x, a.y - b.y) + a.r + b.r);
+    }
+  }
+  return best;
+}

@@ -1,0 +1,22 @@
+import type { RimMountSpec } from './rim-mount-spec.ts';
+
+/**
+ * Printed volumes of the rim hanger and the slotted stem, mm3.
+ * Hanger: its U section (inner leg + outer leg, both hanging from the bridge's
+ * underside, + the bridge across the gap and both legs, a leg thick) times its width, less two screw holes through the
+ * inner leg. Stem: width x thickness x length, less the slot (a stadium: rectangle
+ * of the slot's length by the hole's width plus one hole) and two holes.
+ * Elementary geometry.
+ *
+ * Example: see test/sizing/rim.test.ts.
+ */
+export function rimMountVolumesMm3(r: RimMountSpec): { hangerMm3: number; stemMm3: number } {
+  const h = r.hanger;
+  const hole = Math.PI * (r.screwHoleDiameterMm / 2) ** 2;
+  const section = h.legMm * h.innerLegLengthMm + h.legMm * h.outerLegLengthMm + (h.gapMm + 2 * h.legMm) * h.legMm;
+  const hanger = section * h.widthMm - 2 * hole * h.legMm;
+  const s = r.stem;
+  const slot = s.slotLengthMm * r.screwHoleDiameterMm + hole;
+  const stem = s.widthMm * s.thicknessMm * s.lengthMm - (slot + 2 * hole) * s.thicknessMm;
+  return { hangerMm3: hanger, stemMm3: stem };
+}
