@@ -33,8 +33,8 @@ const upHalf = (mm: number) => Math.ceil(mm * 2 - 1e-9) / 2;
  * - bar: at least MIN_BAR_WIDTH_MM and four walls wide; deep enough for the pad
  *   pocket (pad thickness less what stands proud) over a floor of three lines;
  * - pad table: the pocket (pad + 2 clearances) and one wall round it;
- * - tongue: as wide as the bar, one clearance short of the float's socket, so the
- *   bar bears on the float's plateau.
+ * - tongue: 1 mm narrower than the bar, one clearance short of the float's socket,
+ *   so the bar bears on the float's plateau; the bar ends half its width past it.
  */
 export function leverArmSpec(o: LeverArmOptions): LeverArmSpec {
   const c = PRINT_CLEARANCE_MM;
@@ -46,14 +46,15 @@ export function leverArmSpec(o: LeverArmOptions): LeverArmSpec {
   const eyeDepth = Math.max(barDepth, upHalf(holeCentreDepth + pointedHoleApexMm(holeR, SELF_SUPPORT_ANGLE_DEG) + t));
   const barWidth = upHalf(Math.max(MIN_BAR_WIDTH_MM, 4 * t));
   const pocketDiameter = o.padDiameterMm + 2 * c;
-  const tongue = barWidth;
+  // half a millimetre inside the bar each side, so the tongue's round never grazes the bar's flat sides
+  const tongue = barWidth - 1;
   return {
     padArmMm: o.padArmMm,
     floatArmMm: o.floatArmMm,
     barWidthMm: barWidth,
     barDepthMm: barDepth,
     tailXMm: -(holeR + t),
-    tipXMm: o.floatArmMm + tongue / 2,
+    tipXMm: o.floatArmMm + barWidth / 2,
     eyeHalfLengthMm: holeR + t,
     eyeDepthMm: eyeDepth,
     holeDiameterMm: 2 * holeR,

@@ -8,3 +8,5 @@ export const RIM_SCREW_PITCH_MM = 12;
 export const RIM_OUTER_LEG_MM = 15;
 /** Thinnest hanger leg and stem, mm (common practice: stiff enough to carry a valve and its float when flooded). */
 export const RIM_MIN_LEG_MM = 3;
+/** Pilot hole for an M3 screw cut into printed plastic (common practice: 2.5 mm; the screw taps its own thread). */
+export const RIM_PILOT_HOLE_MM = 2.5;

@@ -1,6 +1,6 @@
 import { PRINT_CLEARANCE_MM } from '../constants.ts';
 import { ANCHOR_DIAMETER_MM } from '../parts/housing-spec.ts';
-import { RIM_ADJUST_MM, RIM_MIN_LEG_MM, RIM_OUTER_LEG_MM, RIM_SCREW_PITCH_MM } from './rim-constants.ts';
+import { RIM_ADJUST_MM, RIM_MIN_LEG_MM, RIM_OUTER_LEG_MM, RIM_PILOT_HOLE_MM, RIM_SCREW_PITCH_MM } from './rim-constants.ts';
 
 export interface RimMountOptions {
   /** rim (top of the container wall) above the floor, mm */
@@ -17,13 +17,16 @@ export interface RimMountOptions {
  * Rim mount, mm. Mounted frame: x = 0 the wall's inner face, x > 0 inside the
  * container, z up from the floor. The hanger is an upside-down U over the wall
  * (a gap of the wall plus one print clearance each side); its inner leg carries
- * two screw holes one pitch apart. The stem, a flat bar against the inner leg,
+ * two pilot holes one pitch apart (M3 screws cut their own thread in them). The stem, a flat bar against the inner leg,
  * has a slot over those screws (slide it up or down by adjustMm either way, then
  * tighten) and two holes at its foot one pitch apart for the valve's back plate.
  */
 export interface RimMountSpec {
   adjustMm: number;
+  /** clearance for the screws (slot width, the stem's valve holes), mm */
   screwHoleDiameterMm: number;
+  /** the hanger's holes, into which the screws cut their own thread (horizontal when printed: pointed roof), mm */
+  pilotHoleDiameterMm: number;
   screwPitchMm: number;
   hanger: {
     gapMm: number;
@@ -86,6 +89,7 @@ export function rimMountSpec(o: RimMountOptions): RimMountSpec {
   return {
     adjustMm: RIM_ADJUST_MM,
     screwHoleDiameterMm: d,
+    pilotHoleDiameterMm: RIM_PILOT_HOLE_MM,
     screwPitchMm: p,
     hanger: {
       gapMm: gap,
