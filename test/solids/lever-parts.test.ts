@@ -1,0 +1,125 @@
+/**
+ * The lever's arm and pivot pin, the rim hanger and the slotted stem: each a
+ * closed 2-manifold (checked by manifold-3d, a library independent of the JSCAD
+ * code that extruded it, and by counting edge uses: every edge used exactly
+ * twice, once each way; 3MF Core Specification, "Manifold Edges"), resting on
+ * z = 0, of the genus its holes give it (manifold-3d), with the volume the sizing's
+ * analytic formulas give within 1 % (prisms, cylinders, and pointed holes:
+ * elementary geometry; faceting at export quality moves the round pieces by
+ * well under that), and with no downward face flatter than 50 degrees from the
+ * bed but the faces on the bed and the stated bridge (DESIGN second part, print
+ * margins; common practice: slicers add support under faces flatter than 45).
+ * Designs: our own demo scenarios (a 25 mm tray at 2 m, a 250 mm bucket at 1.5 m).
+ */
+import { beforeAll, describe, expect, it } from 'vitest';
+import { designBasis } from '../../generator/sizing/layout/design-basis.ts';
+import { leverArmVolume, leverBasisFromDesign, searchLever, type LeverCandidate } from '../../generator/sizing/lever/index.ts';
+import { pinVolumeMm3 } from '../../generator/sizing/parts/part-volumes.ts';
+import { rimMountVolumesMm3 } from '../../generator/sizing/rim/index.ts';
+import { countEdgeUses, holePolygonRadiusMm, loadManifold, meshBounds, meshToManifold, meshVolumeMm3, segmentsFor, type IndexedMesh, type ManifoldToplevel } from '../../generator/solids/mesh/index.ts';
+import { buildLeverArmMesh } from '../../generator/solids/parts/lever-arm-solid.ts';
+import { buildPinMesh } from '../../generator/solids/parts/pin-solid.ts';
+import { buildRimHangerMesh } from '../../generator/solids/parts/rim-hanger-solid.ts';
+import { buildSlottedStemMesh } from '../../generator/solids/parts/slotted-stem-solid.ts';
+import { defaultInputs } from '../sizing/fixtures.ts';
+
+let wasm: ManifoldToplevel;
+beforeAll(async () => {
+  wasm = await loadManifold();
+});
+
+function lever(headM: number, levelM: number, mount: 'floor' | 'rim'): LeverCandidate {
+  const inp = defaultInputs({ headMaxM: headM, headMinM: 0.75 * headM, targetLevelM: levelM, maxOuterDiameterM: 0.09 });
+  const out = searchLever(leverBasisFromDesign(designBasis(inp)), mount === 'rim' ? { mount, rim: { rimHeightMm: levelM * 1e3 + 100, wallThicknessMm: 3 } } : { mount });
+  if (!out.best) throw new Error('the demo lever did not size');
+  return out.best;
+}
+const tray = lever(2, 0.025, 'floor');
+const bucket = lever(1.5, 0.25, 'rim');
+
+function checkClosed(mesh: IndexedMesh, name: string, genus: number): void {
+  expect(countEdgeUses(mesh), name).toMatchObject({ boundaryEdges: 0, overusedEdges: 0, inconsistentlyOriented: 0, degenerateTriangles: 0, closed: true });
+  const m = meshToManifold(wasm, mesh, name);
+  try {
+    expect(m.status(), name).toBe('NoError');
+    expect(m.volume(), name).toBeGreaterThan(0);
+    expect(m.genus(), name).toBe(genus);
+  } finally {
+    m.delete();
+  }
+  expect(meshBounds(mesh).min[2], name).toBe(0);
+}
+
+/** Every downward-facing triangle off the bed is at least 50 degrees from it, unless it lies inside an allowed bridge (a disc in the print's xy plane). */
+function checkOverhangs(mesh: IndexedMesh, name: string, bridge?: { x: number; y: number; r: number }): void {
+  const p = mesh.positions;
+  const idx = mesh.indices;
+  const limit = Math.cos((50 * Math.PI) / 180);
+  for (let t = 0; t < idx.length; t += 3) {
+    const [a, b, c] = [3 * idx[t], 3 * idx[t + 1], 3 * idx[t + 2]];
+    const ux = p[b] - p[a], uy = p[b + 1] - p[a + 1], uz = p[b + 2] - p[a + 2];
+    const vx = p[c] - p[a], vy = p[c + 1] - p[a + 1], vz = p[c + 2] - p[a + 2];
+    const nx = uy * vz - uz * vy, ny = uz * vx - ux * vz, nz = ux * vy - uy * vx;
+    const len = Math.hypot(nx, ny, nz);
+    if (len === 0) continue;
+    const down = -nz / len;
+    const zMin = Math.min(p[a + 2], p[b + 2], p[c + 2]);
+    if (down <= limit + 1e-4 || zMin === 0) continue;
+    const inBridge = bridge !== undefined && [a, b, c].every((v) => Math.hypot(p[v] - bridge.x, p[v + 1] - bridge.y) <= bridge.r + 1e-3);
+    expect(inBridge, `${name}: face flatter than 50 degrees at z ${zMin.toFixed(2)}`).toBe(true);
+  }
+}
+
+describe('lever arm', () => {
+  for (const quality of ['preview', 'export'] as const) {
+    it(`${quality}: closed, one through hole (the pin's), on the bed; prints with the pocket floor as its one bridge`, async () => {
+      const mesh = await buildLeverArmMesh(tray.arm, quality);
+      checkClosed(mesh, 'arm', 1);
+      checkOverhangs(mesh, 'arm', { x: tray.arm.padArmMm, y: 0, r: holePolygonRadiusMm(tray.arm.pocketDiameterMm / 2, segmentsFor(tray.arm.pocketDiameterMm / 2, quality)) });
+      const b = meshBounds(mesh);
+      expect(b.max[2]).toBeCloseTo(Math.max(tray.arm.eyeDepthMm, tray.arm.barDepthMm + tray.arm.tongueLengthMm), 4);
+      expect(b.max[0] - b.min[0]).toBeCloseTo(tray.arm.tipXMm - tray.arm.tailXMm, 4);
+    });
+  }
+
+  it('volume within 1 % of the analytic arm (export quality)', async () => {
+    const mesh = await buildLeverArmMesh(tray.arm, 'export');
+    expect(Math.abs(meshVolumeMm3(mesh) / leverArmVolume(tray.arm).volumeMm3 - 1)).toBeLessThan(0.01);
+  });
+});
+
+describe('pivot pin (the retainer pin builder, spanning the frame)', () => {
+  it('closed, on the bed, spanning the frame, volume within 2.5 % of the true-circle pin (a 16-gon at export)', async () => {
+    const mesh = await buildPinMesh(tray.pin, 'export');
+    checkClosed(mesh, 'pivot pin', 0);
+    expect(tray.pin.lengthMm).toBeGreaterThan(tray.frame.widthMm);
+    expect(tray.pin.diameterMm + 2 * 0.25).toBeCloseTo(tray.arm.holeDiameterMm, 12); // one print clearance each side (common practice, 0.25 mm)
+    expect(Math.abs(meshVolumeMm3(mesh) / pinVolumeMm3(tray.pin) - 1)).toBeLessThan(0.025);
+  });
+});
+
+describe('rim hanger and slotted stem', () => {
+  const rim = bucket.rim!;
+  for (const quality of ['preview', 'export'] as const) {
+    it(`${quality}: hanger closed with two pilot holes, stem closed with a slot and two holes; no overhang past 50 degrees`, async () => {
+      const hanger = await buildRimHangerMesh(rim, quality);
+      checkClosed(hanger, 'hanger', 2);
+      checkOverhangs(hanger, 'hanger');
+      const stem = await buildSlottedStemMesh(rim, quality);
+      checkClosed(stem, 'stem', 3);
+      checkOverhangs(stem, 'stem');
+      expect(meshBounds(stem).max[0]).toBeCloseTo(rim.stem.lengthMm, 4);
+      expect(meshBounds(hanger).max[2]).toBeCloseTo(rim.hanger.widthMm, 4);
+    });
+  }
+
+  it('volumes within 1 % of the analytic ones (export quality)', async () => {
+    const v = rimMountVolumesMm3(rim);
+    expect(Math.abs(meshVolumeMm3(await buildRimHangerMesh(rim, 'export')) / v.hangerMm3 - 1)).toBeLessThan(0.01);
+    expect(Math.abs(meshVolumeMm3(await buildSlottedStemMesh(rim, 'export')) / v.stemMm3 - 1)).toBeLessThan(0.01);
+  });
+
+  it('the slot gives the stated adjustment: 2 x 10 mm of travel beyond the screw pitch', () => {
+    expect(rim.stem.slotLengthMm - rim.screwPitchMm).toBe(2 * rim.adjustMm);
+  });
+});
