@@ -9,6 +9,11 @@
  * then the workbench in headless Chromium (browser-bench.ts; skip it with
  * `-- --no-browser`).
  *
+ * Then issue 13's coverage grid (coverage-grid.ts): the heads and depths that
+ * get a valve at 90 and 120 mm footprints, measured for today's direct valve and
+ * estimated with the lever and rim groundwork, with the time per cell (about
+ * half a minute; skip it with `-- --no-coverage`).
+ *
  * Targets (2-core machine): sizing at most 10 ms; assembly under 50 ms at preview and
  * under 1 s at export; peak memory of a single-design export run under 300 MB.
  * A benchmark, not a test: nothing here fails on time.
@@ -21,6 +26,7 @@ import type { SizingSuccess } from '../sizing/result.ts';
 import { buildPart, buildParts, PART_NAMES, type PartName } from '../solids/index.ts';
 import { loadManifold, triangleCount, writeStlBinary, type Quality } from '../solids/mesh/index.ts';
 import { runBrowserBench, type BrowserBench } from './browser-bench.ts';
+import { coverageText, runCoverageGrid, type CoverageGrid } from './coverage-grid.ts';
 
 const WARMUP = 3;
 const RUNS = 15;
@@ -52,6 +58,7 @@ export interface BenchResult {
   peakRssMb: number;
   plan?: unknown;
   browser?: BrowserBench | null;
+  coverage?: CoverageGrid;
 }
 
 export async function runBench(): Promise<BenchResult> {
@@ -92,6 +99,7 @@ export async function runBench(): Promise<BenchResult> {
     if (typeof runPlanBench === 'function') result.plan = await runPlanBench();
   }
   if (!process.argv.includes('--no-browser')) result.browser = await runBrowserBench(() => undefined);
+  if (!process.argv.includes('--no-coverage')) result.coverage = runCoverageGrid();
   return result;
 }
 
@@ -135,7 +143,7 @@ function text(r: BenchResult): string {
   } else if (r.browser === null) {
     lines.push('', 'browser: skipped (no /usr/bin/chromium)');
   }
-  return `${lines.join('\n')}\n`;
+  return `${lines.join('\n')}\n${r.coverage ? `\n${coverageText(r.coverage)}` : ''}`;
 }
 
 if (import.meta.url === `file://${process.argv[1]}`) {
