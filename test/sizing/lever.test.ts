@@ -180,3 +180,13 @@ describe('the lightest lever valve (search)', () => {
     expect(c.rim!.stem.lengthMm).toBeLessThanOrEqual(250);
   });
 });
+
+describe('shortest working height (bisection; Burden and Faires, Numerical Analysis, sec. 2.1, from memory)', () => {
+  it('a rule holding from 12.34 mm on a 0.1 mm grid: 12.4; never holding: null; holding at once: the low end', async () => {
+    const { shortestWorkingHeightMm } = await import('../../generator/sizing/layout/shortest-working-height.ts');
+    expect(shortestWorkingHeightMm((h) => h >= 12.34, 0.1, 0.5, 250)).toBe(12.4);
+    expect(shortestWorkingHeightMm((h) => h >= 12.4, 0.1, 0.5, 250)).toBe(12.4);
+    expect(shortestWorkingHeightMm(() => false, 0.1, 0.5, 250)).toBeNull();
+    expect(shortestWorkingHeightMm(() => true, 0.1, 0.5, 250)).toBe(0.5);
+  });
+});

@@ -22,6 +22,7 @@ import { buildPinMesh } from '../../generator/solids/parts/pin-solid.ts';
 import { buildRimHangerMesh } from '../../generator/solids/parts/rim-hanger-solid.ts';
 import { buildSlottedStemMesh } from '../../generator/solids/parts/slotted-stem-solid.ts';
 import { defaultInputs } from '../sizing/fixtures.ts';
+import { overhangFaces } from './overhang-faces.ts';
 
 let wasm: ManifoldToplevel;
 beforeAll(async () => {
@@ -50,23 +51,11 @@ function checkClosed(mesh: IndexedMesh, name: string, genus: number): void {
   expect(meshBounds(mesh).min[2], name).toBe(0);
 }
 
-/** Every downward-facing triangle off the bed is at least 50 degrees from it, unless it lies inside an allowed bridge (a disc in the print's xy plane). */
+/** No face flatter than 50 degrees off the bed, unless it lies inside an allowed bridge (a disc in the print's xy plane). */
 function checkOverhangs(mesh: IndexedMesh, name: string, bridge?: { x: number; y: number; r: number }): void {
-  const p = mesh.positions;
-  const idx = mesh.indices;
-  const limit = Math.cos((50 * Math.PI) / 180);
-  for (let t = 0; t < idx.length; t += 3) {
-    const [a, b, c] = [3 * idx[t], 3 * idx[t + 1], 3 * idx[t + 2]];
-    const ux = p[b] - p[a], uy = p[b + 1] - p[a + 1], uz = p[b + 2] - p[a + 2];
-    const vx = p[c] - p[a], vy = p[c + 1] - p[a + 1], vz = p[c + 2] - p[a + 2];
-    const nx = uy * vz - uz * vy, ny = uz * vx - ux * vz, nz = ux * vy - uy * vx;
-    const len = Math.hypot(nx, ny, nz);
-    if (len === 0) continue;
-    const down = -nz / len;
-    const zMin = Math.min(p[a + 2], p[b + 2], p[c + 2]);
-    if (down <= limit + 1e-4 || zMin === 0) continue;
-    const inBridge = bridge !== undefined && [a, b, c].every((v) => Math.hypot(p[v] - bridge.x, p[v + 1] - bridge.y) <= bridge.r + 1e-3);
-    expect(inBridge, `${name}: face flatter than 50 degrees at z ${zMin.toFixed(2)}`).toBe(true);
+  for (const face of overhangFaces(mesh, 50)) {
+    const inBridge = bridge !== undefined && face.corners.every(([x, y]) => Math.hypot(x - bridge.x, y - bridge.y) <= bridge.r + 1e-3);
+    expect(inBridge, `${name}: face flatter than 50 degrees at z ${face.zMinMm.toFixed(2)}`).toBe(true);
   }
 }
 

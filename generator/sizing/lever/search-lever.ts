@@ -1,5 +1,6 @@
-import { PART_SIZE_CAP_MM } from '../constants.ts';
+import { PART_SIZE_CAP_MM, PRINT_CLEARANCE_MM } from '../constants.ts';
 import { HEIGHT_STEP_MM } from '../layout/search-size.ts';
+import { shortestWorkingHeightMm } from '../layout/shortest-working-height.ts';
 import { armLoad, layoutLever, leverFloatChecks, type ArmLoad } from './layout-lever.ts';
 import { leverArmSpec } from './lever-arm-spec.ts';
 import {
@@ -13,7 +14,6 @@ import {
 import { leverFloat } from './lever-float.ts';
 import { leverPad } from './lever-pad.ts';
 import type { LeverBasis, LeverCandidate, LeverConstraint } from './lever-types.ts';
-import { PRINT_CLEARANCE_MM } from '../constants.ts';
 
 const SMALLEST_FLOAT_MM = 16;
 
@@ -45,18 +45,7 @@ function shortestCylinderMm(lb: LeverBasis, load: ArmLoad, diameterMm: number): 
     const c = leverFloatChecks(lb, load, f);
     return c.reserve >= inp.reserve && c.sealDepthMm <= h;
   };
-  let hi = PART_SIZE_CAP_MM;
-  if (!ok(hi)) return null;
-  let lo = 0.5;
-  if (ok(lo)) return lo;
-  while (hi - lo > HEIGHT_STEP_MM / 4) {
-    const mid = (lo + hi) / 2;
-    if (ok(mid)) hi = mid;
-    else lo = mid;
-  }
-  let k = Math.ceil(lo / HEIGHT_STEP_MM - 1e-6);
-  while (!ok(Number((k * HEIGHT_STEP_MM).toFixed(6)))) k++;
-  return Number((k * HEIGHT_STEP_MM).toFixed(6));
+  return shortestWorkingHeightMm(ok, HEIGHT_STEP_MM, 0.5, PART_SIZE_CAP_MM);
 }
 
 /** Round a mass to 0.01 g so that ties go to the smaller footprint. */
