@@ -13,11 +13,12 @@
  */
 import { beforeAll, describe, expect, it } from 'vitest';
 import { designBasis } from '../../generator/sizing/layout/design-basis.ts';
-import { leverArmVolume, leverBasisFromDesign, searchLever, type LeverCandidate } from '../../generator/sizing/lever/index.ts';
+import { leverArmVolume, leverBasisFromDesign, leverFrameVolumeMm3, searchLever, type LeverCandidate } from '../../generator/sizing/lever/index.ts';
 import { pinVolumeMm3 } from '../../generator/sizing/parts/part-volumes.ts';
 import { rimMountVolumesMm3 } from '../../generator/sizing/rim/index.ts';
 import { countEdgeUses, holePolygonRadiusMm, loadManifold, meshBounds, meshToManifold, meshVolumeMm3, segmentsFor, type IndexedMesh, type ManifoldToplevel } from '../../generator/solids/mesh/index.ts';
 import { buildLeverArmMesh } from '../../generator/solids/parts/lever-arm-solid.ts';
+import { buildLeverFrameMesh } from '../../generator/solids/parts/lever-frame-solid.ts';
 import { buildPinMesh } from '../../generator/solids/parts/pin-solid.ts';
 import { buildRimHangerMesh } from '../../generator/solids/parts/rim-hanger-solid.ts';
 import { buildSlottedStemMesh } from '../../generator/solids/parts/slotted-stem-solid.ts';
@@ -111,4 +112,26 @@ describe('rim hanger and slotted stem', () => {
   it('the slot gives the stated adjustment: 2 x 10 mm of travel beyond the screw pitch', () => {
     expect(rim.stem.slotLengthMm - rim.screwPitchMm).toBe(2 * rim.adjustMm);
   });
+});
+
+describe('lever frame', () => {
+  for (const [name, c, genus] of [
+    // floor: pin hole through both cheeks (2) and three anchor holes; the seat bore (1)
+    ['floor', tray, 6],
+    // rim: pin hole through both cheeks (2), two pilot holes, the seat bore
+    ['rim', bucket, 5],
+  ] as const) {
+    for (const quality of ['preview', 'export'] as const) {
+      it(`${name}, ${quality}: closed, deck on the bed, no face flatter than 50 degrees`, async () => {
+        const mesh = await buildLeverFrameMesh(c.frame, quality);
+        checkClosed(mesh, `${name} frame`, genus);
+        checkOverhangs(mesh, `${name} frame`);
+        expect(meshBounds(mesh).max[2]).toBeCloseTo(c.frame.heightMm, 3);
+      });
+    }
+    it(`${name}: volume within 1 % of the analytic frame (export quality)`, async () => {
+      const mesh = await buildLeverFrameMesh(c.frame, 'export');
+      expect(Math.abs(meshVolumeMm3(mesh) / leverFrameVolumeMm3(c.frame) - 1)).toBeLessThan(0.01);
+    });
+  }
 });

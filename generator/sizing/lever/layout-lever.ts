@@ -157,8 +157,10 @@ export function layoutLever(lb: LeverBasis, o: LeverLayoutOptions): LeverCandida
   }
 
   const shapes: PlanShape[] = [
-    { kind: 'rect', x0: -frame.postHalfLengthMm, x1: frame.deckFrontXMm, y0: -frame.deckWidthMm / 2, y1: frame.deckWidthMm / 2 },
-    { kind: 'rect', x0: frame.footBackXMm, x1: frame.postHalfLengthMm, y0: -frame.footWidthMm / 2, y1: frame.footWidthMm / 2 },
+    { kind: 'rect', x0: -frame.postHalfLengthMm - frame.wallMm, x1: frame.deckFrontXMm, y0: -frame.deckWidthMm / 2, y1: frame.deckWidthMm / 2 },
+    // cheeks and side wings, then the back wall and back wing
+    { kind: 'rect', x0: -frame.postHalfLengthMm - frame.wallMm, x1: frame.postHalfLengthMm, y0: -frame.footWidthMm / 2, y1: frame.footWidthMm / 2 },
+    { kind: 'rect', x0: frame.footBackXMm, x1: -frame.postHalfLengthMm, y0: -frame.widthMm / 2, y1: frame.widthMm / 2 },
     { kind: 'rect', x0: arm.tailXMm, x1: arm.tipXMm, y0: -arm.barWidthMm / 2, y1: arm.barWidthMm / 2 },
     { kind: 'circle', x: arm.floatArmMm, y: 0, r: R },
   ];

@@ -1,6 +1,7 @@
 import { PRINT_CLEARANCE_MM } from '../constants.ts';
 import { ANCHOR_DIAMETER_MM } from '../parts/housing-spec.ts';
 import type { NozzleSpec } from '../result.ts';
+import { RIM_PILOT_HOLE_MM, RIM_SCREW_PITCH_MM } from '../rim/rim-constants.ts';
 import { SELF_SUPPORT_ANGLE_DEG } from './lever-constants.ts';
 import { pointedHoleApexMm } from './pointed-hole-area-mm2.ts';
 import type { LeverArmSpec, LeverFrameSpec } from './lever-types.ts';
@@ -19,15 +20,17 @@ export interface LeverFrameOptions {
 
 /**
  * The frame around the arm (LeverFrameSpec). The cheeks stand a print clearance
- * off the arm each side and a wall thick, and reach a wall plus a clearance past
+ * off the arm each side and a wall thick, and reach a clearance and a wall past
  * the arm's eye fore and aft; the pin holes in them are the arm's (pin + 2
  * clearances, pointed roof down when mounted, up in the deck-down print). The
- * deck sits over the nozzle exactly as the direct valve's: its underside the
- * nozzle's protrusion plus the boss above the tip. On the floor the cheeks stand
- * on a foot plate with room for anchor screws at the sides and behind (print:
- * deck down, so the foot is the top of the print, carried by 50-degree gussets);
- * on the rim they stop a wall under the pin hole's point, and a back plate takes
- * the stem's screws.
+ * deck sits over the nozzle exactly as the direct valve's housing deck: its
+ * underside the nozzle's protrusion plus the boss above the tip; it reaches a
+ * wall past the boss, and is at least a wall wider than the boss each side. On
+ * the floor the cheeks stand on the floor, with anchor wings an anchor hole and
+ * two walls wide; on the rim they stop a wall under the pin hole's point (or under
+ * the lower stem hole's, if lower), and the back wall carries the stem's pilot
+ * holes, the upper one a clearance hole's radius and a wall under the deck's top,
+ * where the stem's valve holes are (rimMountSpec).
  */
 export function leverFrameSpec(o: LeverFrameOptions): LeverFrameSpec {
   const c = PRINT_CLEARANCE_MM;
@@ -41,8 +44,15 @@ export function leverFrameSpec(o: LeverFrameOptions): LeverFrameSpec {
   const deckBottom = o.tipZMm + o.nozzle.protrusionMm + o.bossHeightMm;
   const top = deckBottom + o.deckThicknessMm;
   const floor = o.mount === 'floor';
-  const cheekBottom = floor ? 0 : o.pivotZMm - pointedHoleApexMm(a.holeDiameterMm / 2, SELF_SUPPORT_ANGLE_DEG) - t;
-  const anchorRoom = ANCHOR_DIAMETER_MM + 2 * t;
+  const stemUpper = top - (ANCHOR_DIAMETER_MM / 2 + t);
+  // on the rim: a wall under the pin hole's point, and under the lower stem hole's
+  const cheekBottom = floor
+    ? 0
+    : Math.min(
+        o.pivotZMm - pointedHoleApexMm(a.holeDiameterMm / 2, SELF_SUPPORT_ANGLE_DEG) - t,
+        stemUpper - RIM_SCREW_PITCH_MM - pointedHoleApexMm(RIM_PILOT_HOLE_MM / 2, SELF_SUPPORT_ANGLE_DEG) - t,
+      );
+  const wing = floor ? ANCHOR_DIAMETER_MM + 2 * t : 0;
   return {
     mount: o.mount,
     wallMm: t,
@@ -52,16 +62,23 @@ export function leverFrameSpec(o: LeverFrameOptions): LeverFrameSpec {
     cheekBottomZMm: cheekBottom,
     pivotZMm: o.pivotZMm,
     pinHoleDiameterMm: a.holeDiameterMm,
-    deckFrontXMm: a.padArmMm + bossOuter / 2,
-    deckWidthMm: Math.max(width, bossOuter),
+    holeRoofAngleDeg: SELF_SUPPORT_ANGLE_DEG,
+    padArmMm: a.padArmMm,
+    deckFrontXMm: a.padArmMm + bossOuter / 2 + t,
+    deckWidthMm: Math.max(width, bossOuter + 2 * t),
     deckBottomZMm: deckBottom,
     deckThicknessMm: o.deckThicknessMm,
     seatBoreMm: seatBore,
     bossOuterDiameterMm: bossOuter,
     bossHeightMm: o.bossHeightMm,
-    footBackXMm: floor ? -post - anchorRoom : -post - t,
-    footWidthMm: floor ? width + 2 * anchorRoom : width,
-    footThicknessMm: floor ? Math.max(t, 2) : t,
+    wingMm: wing,
+    footThicknessMm: floor ? Math.max(t, 2) : 0,
+    anchorDiameterMm: ANCHOR_DIAMETER_MM,
+    stemPilotDiameterMm: RIM_PILOT_HOLE_MM,
+    stemPitchMm: RIM_SCREW_PITCH_MM,
+    stemUpperHoleZMm: stemUpper,
+    footBackXMm: -post - t - wing,
+    footWidthMm: width + 2 * wing,
     heightMm: top - cheekBottom,
   };
 }

@@ -1,33 +1,38 @@
-import { ANCHOR_DIAMETER_MM } from '../parts/housing-spec.ts';
 import { SELF_SUPPORT_ANGLE_DEG } from './lever-constants.ts';
 import { pointedHoleAreaMm2 } from './pointed-hole-area-mm2.ts';
 import type { LeverFrameSpec } from './lever-types.ts';
 
 /**
- * The frame's printed volume, mm3 (an estimate for the search until the frame
- * has its own solid): two cheeks (wall x post length x height, less the pin
- * holes), the deck (less the seat bore), the boss ring, and the foot plate with
- * three anchor holes and 50-degree gussets under its overhang (triangles of the
- * overhang a by a tan 50deg along the cheeks and the back), or on the rim the back
- * plate with two screw holes. Elementary geometry.
+ * The frame's printed volume, mm3 (LeverFrameSpec; mounted pieces, each a prism
+ * or a ring, elementary geometry):
+ * - cheeks: 2 x wall x post length x (deck underside - cheek bottom), less the two pointed pin holes;
+ * - back wall: wall x width x the same height;
+ * - deck: (front - back) x width x thickness, less the seat bore; boss: ring of its height;
+ * - floor: wings (two along the cheeks and back wall, one across the back) as
+ *   plates a x length x thickness plus 50-degree wedges a x a tan(50deg) / 2 x
+ *   length, less three anchor holes through plate and wedge (pi r^2 (plate + the
+ *   wedge's height at the hole's centre, (a / 2) tan(50deg)));
+ * - rim: less the stem's two pointed pilot holes through the back wall.
  */
 export function leverFrameVolumeMm3(f: LeverFrameSpec): number {
   const t = f.wallMm;
   const seat = Math.PI * (f.seatBoreMm / 2) ** 2;
   const postLength = 2 * f.postHalfLengthMm;
-  const cheeks = 2 * t * postLength * (f.deckBottomZMm - f.cheekBottomZMm) - 2 * t * pointedHoleAreaMm2(f.pinHoleDiameterMm / 2, SELF_SUPPORT_ANGLE_DEG);
-  const deck = (f.deckFrontXMm + f.postHalfLengthMm) * f.deckWidthMm * f.deckThicknessMm - seat * f.deckThicknessMm;
+  const height = f.deckBottomZMm - f.cheekBottomZMm;
+  const cheeks = 2 * t * postLength * height - 2 * t * pointedHoleAreaMm2(f.pinHoleDiameterMm / 2, f.holeRoofAngleDeg);
+  const back = t * f.widthMm * height;
+  const deckLength = f.deckFrontXMm + f.postHalfLengthMm + t;
+  const deck = deckLength * f.deckWidthMm * f.deckThicknessMm - seat * f.deckThicknessMm;
   const boss = (Math.PI * (f.bossOuterDiameterMm / 2) ** 2 - seat) * f.bossHeightMm;
-  const anchor = Math.PI * (ANCHOR_DIAMETER_MM / 2) ** 2;
-  let base: number;
+  let base = 0;
   if (f.mount === 'floor') {
-    const length = f.postHalfLengthMm - f.footBackXMm;
-    const overhang = (f.footWidthMm - f.widthMm) / 2;
-    const gusset = 0.5 * overhang * overhang * Math.tan((SELF_SUPPORT_ANGLE_DEG * Math.PI) / 180);
-    base = length * f.footWidthMm * f.footThicknessMm - 3 * anchor * f.footThicknessMm + gusset * (2 * postLength + f.widthMm);
+    const a = f.wingMm;
+    const tan = Math.tan((SELF_SUPPORT_ANGLE_DEG * Math.PI) / 180);
+    const wingLength = 2 * (postLength + t) + f.widthMm;
+    const anchor = Math.PI * (f.anchorDiameterMm / 2) ** 2;
+    base = wingLength * (a * f.footThicknessMm + 0.5 * a * a * tan) - 3 * anchor * (f.footThicknessMm + (a / 2) * tan);
   } else {
-    const top = f.deckBottomZMm + f.deckThicknessMm;
-    base = t * f.widthMm * (top - f.cheekBottomZMm) - 2 * anchor * t;
+    base = -2 * t * pointedHoleAreaMm2(f.stemPilotDiameterMm / 2, f.holeRoofAngleDeg);
   }
-  return cheeks + deck + boss + base;
+  return cheeks + back + deck + boss + base;
 }

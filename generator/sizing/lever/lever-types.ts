@@ -40,24 +40,28 @@ export interface LeverArmSpec {
 
 /**
  * The frame that carries the nozzle and the pivot: two cheeks either side of the
- * arm around the pivot (the pin crosses both), a deck over the arm from behind
- * the pivot to past the nozzle, with the nozzle seat and its boss as in the
- * direct valve's housing; on the floor a foot plate with anchor holes, on the rim
- * a back plate where the slotted stem is screwed.
+ * arm around the pivot (the pin crosses both), a back wall joining them behind
+ * the pivot, a deck over the arm from the back wall to past the nozzle, with the
+ * nozzle seat and its boss as in the direct valve's housing. On the floor the
+ * cheeks stand on anchor wings (a plate each side and one behind, each with an
+ * anchor hole, carried by 50-degree wedges so that they print deck down without
+ * support); on the rim the back wall takes the stem's two screws.
  */
 export interface LeverFrameSpec {
   mount: 'floor' | 'rim';
   wallMm: number;
-  /** gap between the cheeks (arm width + 2 clearances) and the frame's width */
+  /** gap between the cheeks (arm width + 2 clearances) and the frame's width over the cheeks */
   cheekGapMm: number;
   widthMm: number;
-  /** cheeks span x in [-postHalfLengthMm, postHalfLengthMm], z from cheekBottomZMm to the deck */
+  /** cheeks span x in [-postHalfLengthMm, postHalfLengthMm], z from cheekBottomZMm to the deck; the back wall is one wall behind them */
   postHalfLengthMm: number;
   cheekBottomZMm: number;
-  /** pivot axis height, mm above the floor; pin hole diameter and roof angle */
+  /** pivot axis height, mm above the floor; pin hole diameter (its pointed roof faces down mounted) */
   pivotZMm: number;
   pinHoleDiameterMm: number;
-  /** deck: x from -postHalfLengthMm to deckFrontXMm, width deckWidthMm */
+  holeRoofAngleDeg: number;
+  /** deck: x from the back wall's back face (-postHalfLengthMm - wallMm) to deckFrontXMm, width deckWidthMm */
+  padArmMm: number;
   deckFrontXMm: number;
   deckWidthMm: number;
   deckBottomZMm: number;
@@ -66,10 +70,17 @@ export interface LeverFrameSpec {
   seatBoreMm: number;
   bossOuterDiameterMm: number;
   bossHeightMm: number;
-  /** floor: foot plate (x from footBackXMm to postHalfLengthMm, width footWidthMm); rim: back plate behind the cheeks */
+  /** floor: anchor wings wingMm wide, plate footThicknessMm, wedge wingMm tan(50deg) tall, anchor holes anchorDiameterMm; 0 on the rim */
+  wingMm: number;
+  footThicknessMm: number;
+  anchorDiameterMm: number;
+  /** rim: the stem's two screws go into pilot holes through the back wall, pitch apart, the upper one stemUpperHoleZMm high */
+  stemPilotDiameterMm: number;
+  stemPitchMm: number;
+  stemUpperHoleZMm: number;
+  /** the plan's back edge (wings or back wall) and its width there */
   footBackXMm: number;
   footWidthMm: number;
-  footThicknessMm: number;
   heightMm: number;
 }
 
