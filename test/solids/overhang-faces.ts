@@ -5,9 +5,13 @@
  * subtracted from 90 degrees: it overhangs past `minAngleDeg` when the cosine of
  * its normal's angle to straight down exceeds cos(minAngleDeg) (elementary
  * geometry; slicers add support under faces flatter than their threshold,
- * common practice 45 degrees).
+ * common practice 45 degrees). Slivers (area under 1e-4 mm2) are skipped: their
+ * normal is rounding noise.
  */
 import type { IndexedMesh } from '../../generator/solids/mesh/index.ts';
+
+/** Triangles smaller than this are slivers, mm2. */
+const SLIVER_AREA_MM2 = 1e-4;
 
 export interface OverhangFace {
   zMinMm: number;
@@ -26,7 +30,8 @@ export function overhangFaces(mesh: IndexedMesh, minAngleDeg: number): OverhangF
     const vx = p[c] - p[a], vy = p[c + 1] - p[a + 1], vz = p[c + 2] - p[a + 2];
     const nx = uy * vz - uz * vy, ny = uz * vx - ux * vz, nz = ux * vy - uy * vx;
     const len = Math.hypot(nx, ny, nz);
-    if (len === 0) continue;
+    // slivers (three corners in a line, as booleans leave now and then) have no direction and print nothing
+    if (len / 2 < SLIVER_AREA_MM2) continue;
     const zMin = Math.min(p[a + 2], p[b + 2], p[c + 2]);
     if (-nz / len <= limit + 1e-4 || zMin === 0) continue;
     out.push({ zMinMm: zMin, corners: [a, b, c].map((v) => [p[v], p[v + 1], p[v + 2]] as [number, number, number]) });

@@ -30,10 +30,14 @@ export interface LeverSearchOutcome {
   evaluated: number;
 }
 
-/** Shortest pad arm, mm: the pad arc rule (a_pad >= 2 d_s, padArcContact) and room for the eye and the pad table side by side, 1 mm apart; to the half millimetre. */
-export function shortestPadArmMm(lb: LeverBasis, eyeHalfLengthMm: number, tableHalfSideMm: number): number {
+/**
+ * Shortest pad arm, mm: the pad arc rule (a_pad >= 2 d_s, padArcContact), and the
+ * pad table (wider than the cheek gap) a print clearance in front of the frame's
+ * cheeks (which end postHalfLengthMm from the pivot); to the half millimetre.
+ */
+export function shortestPadArmMm(lb: LeverBasis, postHalfLengthMm: number, tableHalfSideMm: number): number {
   const sealMm = lb.basis.inputs.sealDiameterM * 1e3;
-  return Math.ceil(Math.max(2 * sealMm, eyeHalfLengthMm + tableHalfSideMm + 1) * 2 - 1e-9) / 2;
+  return Math.ceil(Math.max(2 * sealMm, postHalfLengthMm + PRINT_CLEARANCE_MM + tableHalfSideMm) * 2 - 1e-9) / 2;
 }
 
 /** Shortest cylinder (on the height grid) meeting the reserve and the seal-in-cylinder rule on this arm, or null. Both ease with height, as in the direct search. */
@@ -83,9 +87,9 @@ export function searchLever(lb: LeverBasis, o: LeverSearchOptions): LeverSearchO
       padProudMm: pad.proudMm,
     });
   const probe = armFor(100, 200);
-  const shortest = shortestPadArmMm(lb, probe.eyeHalfLengthMm, probe.tableHalfSideMm);
   // the frame's post reaches a clearance and a wall past the eye (leverFrameSpec)
   const post = probe.eyeHalfLengthMm + PRINT_CLEARANCE_MM + wallMm;
+  const shortest = shortestPadArmMm(lb, post, probe.tableHalfSideMm);
   for (const extra of PAD_ARM_EXTRA_MM) {
     const padArm = shortest + extra;
     for (let d = SMALLEST_FLOAT_MM; d <= Math.min(limitMm, PART_SIZE_CAP_MM) + 1e-9; d += LEVER_DIAMETER_STEP_MM) {

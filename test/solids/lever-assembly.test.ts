@@ -1,0 +1,93 @@
+/**
+ * The lever valve put together as mounted, at the seal and at rest: no two parts
+ * overlap (manifold-3d intersection volumes, a library independent of the code
+ * that built and placed them), the float at rest stays off the floor (on the
+ * rim: off the floor lowered by the whole adjustment), and the nozzle's sealing
+ * face sits the indentation into the pad at the seal. Designs: our own demo
+ * scenarios (a 25 mm tray at 2 m on the floor, a 250 mm bucket at 1.5 m on the rim).
+ * Rotation of the arm about the pivot axis: elementary geometry.
+ */
+import { beforeAll, describe, expect, it } from 'vitest';
+import { designBasis } from '../../generator/sizing/layout/design-basis.ts';
+import { leverBasisFromDesign, searchLever, type LeverCandidate } from '../../generator/sizing/lever/index.ts';
+import { intersect, loadManifold, meshBounds, meshToManifold, type IndexedMesh, type ManifoldToplevel } from '../../generator/solids/mesh/index.ts';
+import { buildFloatMesh } from '../../generator/solids/parts/float-solid.ts';
+import { buildLeverArmMesh } from '../../generator/solids/parts/lever-arm-solid.ts';
+import { buildLeverFrameMountedMesh } from '../../generator/solids/parts/lever-frame-solid.ts';
+import { buildNozzleMesh } from '../../generator/solids/parts/nozzle-solid.ts';
+import { fromRows, multiply, transformMesh, translation } from '../../generator/solids/shapes/transform-mesh.ts';
+import { defaultInputs } from '../sizing/fixtures.ts';
+
+let wasm: ManifoldToplevel;
+beforeAll(async () => {
+  wasm = await loadManifold();
+});
+
+function lever(headM: number, levelM: number, mount: 'floor' | 'rim'): LeverCandidate {
+  const inp = defaultInputs({ headMaxM: headM, headMinM: 0.75 * headM, targetLevelM: levelM, maxOuterDiameterM: 0.09 });
+  const out = searchLever(leverBasisFromDesign(designBasis(inp)), mount === 'rim' ? { mount, rim: { rimHeightMm: levelM * 1e3 + 100, wallThicknessMm: 3 } } : { mount });
+  if (!out.best) throw new Error('the demo lever did not size');
+  return out.best;
+}
+
+/** Turn about the pivot axis (y through (0, z_p)), nose down by theta. */
+function aboutPivot(c: LeverCandidate, theta: number): number[] {
+  const co = Math.cos(theta);
+  const si = Math.sin(theta);
+  return multiply(translation(0, 0, c.pivotZMm), multiply(fromRows([co, 0, si], [0, 1, 0], [-si, 0, co]), translation(0, 0, -c.pivotZMm)));
+}
+
+function overlapMm3(a: IndexedMesh, b: IndexedMesh): number {
+  const ma = meshToManifold(wasm, a, 'a');
+  const mb = meshToManifold(wasm, b, 'b');
+  const m = intersect(wasm, ma, mb);
+  try {
+    return m.volume();
+  } finally {
+    m.delete();
+    ma.delete();
+    mb.delete();
+  }
+}
+
+for (const [name, headM, levelM, mount] of [
+  ['tray on the floor', 2, 0.025, 'floor'],
+  ['bucket on the rim', 1.5, 0.25, 'rim'],
+] as const) {
+  describe(`lever assembly: ${name}`, () => {
+    const c = lever(headM, levelM, mount);
+    const armTop = c.floatBottomZMm + c.float.heightMm + c.arm.barDepthMm;
+    const delta = 0.5; // the document's default indentation (fixtures.ts)
+    const restTheta = Math.asin((c.restTravelMm + delta) / c.arm.padArmMm);
+
+    it('no part overlaps another at the seal or at rest; the float stays off the floor at rest', async () => {
+      const frame = await buildLeverFrameMountedMesh(c.frame, 'preview');
+      // arm: print pose (top face on the bed) back to mounted: (x, y, z) -> (x, -y, armTop - z)
+      const armMounted = transformMesh(await buildLeverArmMesh(c.arm, 'preview'), fromRows([1, 0, 0], [0, -1, 0], [0, 0, -1], [0, 0, armTop]));
+      const floatMounted = transformMesh(buildFloatMesh(c.float, 'preview'), translation(c.arm.floatArmMm, 0, c.floatBottomZMm));
+      const nozzle = transformMesh(await buildNozzleMesh(c.nozzle, 'preview'), translation(c.arm.padArmMm, 0, c.tipZMm));
+      for (const [state, theta] of [['seal', 0], ['rest', restTheta]] as const) {
+        const turn = aboutPivot(c, theta);
+        const arm = transformMesh(armMounted, turn);
+        const float = transformMesh(floatMounted, turn);
+        expect(overlapMm3(arm, frame), `${state}: arm and frame`).toBeLessThan(1e-3);
+        expect(overlapMm3(arm, nozzle), `${state}: arm and nozzle`).toBeLessThan(1e-3);
+        expect(overlapMm3(float, frame), `${state}: float and frame`).toBeLessThan(1e-3);
+        expect(overlapMm3(float, nozzle), `${state}: float and nozzle`).toBeLessThan(1e-3);
+        const floor = mount === 'rim' ? c.rim!.adjustMm : 0;
+        expect(meshBounds(float).min[2], `${state}: float above the floor`).toBeGreaterThanOrEqual(floor - 0.05);
+      }
+      // the tongue sits in the float's socket with a clearance, the bar on the plateau: touching, not overlapping
+      expect(overlapMm3(armMounted, floatMounted), 'arm and float').toBeLessThan(1e-3);
+      expect(c.arm.tongueLengthMm).toBeLessThan(c.float.pocketDepthMm);
+      expect(c.arm.tongueDiameterMm).toBeLessThan(2 * c.float.pocketRadiusMm);
+    });
+
+    it('at the seal the arm is level and the pad face meets the lip square, the indentation deep', () => {
+      // pad face = arm top + proud (1 mm by default); the lip's face is delta below it
+      expect(armTop + 1 - c.tipZMm).toBeCloseTo(delta, 9);
+      expect(c.padTiltDeg).toBeGreaterThan(0);
+      expect(c.lipGapMm).toBeLessThanOrEqual(delta / 2 + 1e-9);
+    });
+  });
+}
