@@ -10,8 +10,9 @@ import type { LeverFrameSpec } from './lever-types.ts';
  * - deck: (front - back) x width x thickness, less the seat bore; boss: ring of its height;
  * - floor: wings (two along the cheeks and back wall, one across the back) as
  *   plates a x length x thickness plus 50-degree wedges a x a tan(50deg) / 2 x
- *   length, less three anchor holes through plate and wedge (pi r^2 (plate + the
- *   wedge's height at the hole's centre, (a / 2) tan(50deg)));
+ *   length, less three anchor slots open to the wing's edge (a half disc about the
+ *   wing's middle and a strip out to the edge, through plate and wedge: the
+ *   wedge's height falls linearly outward, so each piece is integrated exactly);
  * - rim: less the stem's two pointed pilot holes through the back wall.
  */
 export function leverFrameVolumeMm3(f: LeverFrameSpec): number {
@@ -29,8 +30,13 @@ export function leverFrameVolumeMm3(f: LeverFrameSpec): number {
     const a = f.wingMm;
     const tan = Math.tan((SELF_SUPPORT_ANGLE_DEG * Math.PI) / 180);
     const wingLength = 2 * (postLength + t) + f.widthMm;
-    const anchor = Math.PI * (f.anchorDiameterMm / 2) ** 2;
-    base = wingLength * (a * f.footThicknessMm + 0.5 * a * a * tan) - 3 * anchor * (f.footThicknessMm + (a / 2) * tan);
+    // each anchor is a slot open to the wing's edge: a half disc (r) about the wing's middle, facing the wall,
+    // then a strip 2r wide out to the edge; the wing there is plate + (a - u) tan(50deg) tall at u out from the wall
+    const r = f.anchorDiameterMm / 2;
+    const plate = f.footThicknessMm;
+    const halfDisc = ((Math.PI * r * r) / 2) * (plate + (a / 2) * tan) + (2 / 3) * r ** 3 * tan;
+    const strip = 2 * r * (plate * (a / 2) + (tan * a * a) / 8);
+    base = wingLength * (a * plate + 0.5 * a * a * tan) - 3 * (halfDisc + strip);
   } else {
     base = -2 * t * pointedHoleAreaMm2(f.stemPilotDiameterMm / 2, f.holeRoofAngleDeg);
   }

@@ -40,6 +40,35 @@ function wingSection(a: number, plate: number): [number, number][] {
   ];
 }
 
+/**
+ * Outline of a slot open to one side: the half circle of radius r about `centre`
+ * facing away from `out` (a unit vector), then straight sides running `reach`
+ * along `out`; counter-clockwise. n: segments of the whole circle.
+ */
+function openSlot(centre: [number, number], out: [number, number], r: number, n: number, reach: number): [number, number][] {
+  const [cx, cy] = centre;
+  const [ox, oy] = out;
+  const [tx, ty] = [-oy, ox]; // out turned a quarter counter-clockwise
+  const points: [number, number][] = [[cx - tx * r + ox * reach, cy - ty * r + oy * reach]];
+  const half = Math.max(2, Math.round(n / 2));
+  for (let k = 0; k <= half; k++) {
+    // from the -t side round the back (-out) to the +t side: direction cos(ang) out - sin(ang) t, ang from 90 to 270 degrees
+    const ang = Math.PI / 2 + (Math.PI * k) / half;
+    const c = Math.cos(ang);
+    const s = Math.sin(ang);
+    points.push([cx + r * (c * ox - s * tx), cy + r * (c * oy - s * ty)]);
+  }
+  points.push([cx + tx * r + ox * reach, cy + ty * r + oy * reach]);
+  // make it counter-clockwise whatever the direction
+  let area = 0;
+  for (let i = 0; i < points.length; i++) {
+    const [x0, y0] = points[i];
+    const [x1, y1] = points[(i + 1) % points.length];
+    area += x0 * y1 - x1 * y0;
+  }
+  return area > 0 ? points : points.reverse();
+}
+
 export function leverFrameTopZMm(f: LeverFrameSpec): number {
   return f.deckBottomZMm + f.deckThicknessMm;
 }
@@ -75,10 +104,12 @@ export async function buildLeverFrameMountedMesh(f: LeverFrameSpec, quality: Qua
     pieces.push(prism(section, length, fromRows([0, 0, -1], [-1, 0, 0], [0, 1, 0], [post, -w, 0])));
     // back wing: x = back - u, y = s - w, z = z
     pieces.push(prism(section, 2 * w, fromRows([-1, 0, 0], [0, 0, 1], [0, 1, 0], [back, -w, 0])));
+    // anchor holes as slots open to the wing's edge: a round hole through the wedge would leave, on its
+    // far side, a crescent printed over nothing (the ring closes beyond the hole as the wedge grows out)
     const ha = hole(f.anchorDiameterMm / 2);
     const h = f.footThicknessMm + a * Math.tan((SELF_SUPPORT_ANGLE_DEG * Math.PI) / 180) + 2 * OVERRUN_MM;
-    for (const [x, y] of [[0, w + a / 2], [0, -w - a / 2], [back - a / 2, 0]]) {
-      cutters.push(prism(circlePoints(ha.r, ha.n), h, translation(x, y, -OVERRUN_MM)));
+    for (const [x, y, ox, oy] of [[0, w + a / 2, 0, 1], [0, -w - a / 2, 0, -1], [back - a / 2, 0, -1, 0]]) {
+      cutters.push(prism(openSlot([x, y], [ox, oy], ha.r, ha.n, a / 2 + OVERRUN_MM), h, translation(0, 0, -OVERRUN_MM)));
     }
   } else {
     const hp = hole(f.stemPilotDiameterMm / 2);
