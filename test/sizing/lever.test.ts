@@ -19,6 +19,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import {
+  armStopTurnRad,
   armWeightInLiquidN,
   floatLowestZMm,
   frictionLevelBandMm,
@@ -102,6 +103,14 @@ describe('level band, pad arc, extents (Archimedes; elementary geometry)', () =>
   it('pointed hole: at 45 deg the teardrop r^2 (3 pi / 4 + 1); at 50 deg r 2.25: 5.0625 (pi - 0.87266 + 1.19175) = 17.5197 mm2', () => {
     expect(pointedHoleAreaMm2(2, 45)).toBeCloseTo(4 * ((3 * Math.PI) / 4 + 1), 10);
     expect(pointedHoleAreaMm2(2.25, 50)).toBeCloseTo(17.5197, 4);
+  });
+
+  it('rest stop: a heel 5.3 mm behind and 6 mm under the pivot meets a wall 7 mm behind it at phi - acos(7 / R) = 0.34064 rad', () => {
+    // R = hypot(5.3, 6) = 8.0056, phi = atan2(6, 5.3) = 0.84727, acos(7 / 8.0056) = 0.50663
+    expect(armStopTurnRad(5.3, 6, 7)).toBeCloseTo(0.34064, 5);
+    const t = armStopTurnRad(5.3, 6, 7);
+    expect(5.3 * Math.cos(t) + 6 * Math.sin(t)).toBeCloseTo(7, 12);
+    expect(armStopTurnRad(1, 1, 7)).toBe(Infinity);
   });
 
   it('float turned 0.1 rad about a pivot 60 mm up: far corner (90, 10) goes to 60 - 90 sin 0.1 - 50 cos 0.1 = 1.2648 mm', () => {

@@ -9,7 +9,7 @@
  */
 import { beforeAll, describe, expect, it } from 'vitest';
 import { designBasis } from '../../generator/sizing/layout/design-basis.ts';
-import { leverBasisFromDesign, searchLever, type LeverCandidate } from '../../generator/sizing/lever/index.ts';
+import { armStopTurnRad, leverBasisFromDesign, searchLever, type LeverCandidate } from '../../generator/sizing/lever/index.ts';
 import { intersect, loadManifold, meshBounds, meshToManifold, type IndexedMesh, type ManifoldToplevel } from '../../generator/solids/mesh/index.ts';
 import { buildFloatMesh } from '../../generator/solids/parts/float-solid.ts';
 import { buildLeverArmMesh } from '../../generator/solids/parts/lever-arm-solid.ts';
@@ -77,6 +77,10 @@ for (const [name, headM, levelM, mount] of [
         const floor = mount === 'rim' ? c.rim!.adjustMm : 0;
         expect(meshBounds(float).min[2], `${state}: float above the floor`).toBeGreaterThanOrEqual(floor - 0.05);
       }
+      // the rest stop: the eye's heel meets the back wall at the stop turn; a little further, the arm would be in the wall
+      const stop = armStopTurnRad(-c.arm.tailXMm, c.arm.eyeDepthMm - c.arm.holeCentreDepthMm, c.frame.postHalfLengthMm);
+      expect(overlapMm3(transformMesh(armMounted, aboutPivot(c, stop)), frame), 'arm at the stop').toBeLessThan(1e-3);
+      expect(overlapMm3(transformMesh(armMounted, aboutPivot(c, stop + 0.05)), frame), 'arm past the stop').toBeGreaterThan(0.01);
       // the tongue sits in the float's socket with a clearance, the bar on the plateau: touching, not overlapping
       expect(overlapMm3(armMounted, floatMounted), 'arm and float').toBeLessThan(1e-3);
       expect(c.arm.tongueLengthMm).toBeLessThan(c.float.pocketDepthMm);

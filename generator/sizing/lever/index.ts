@@ -17,6 +17,7 @@ export { leverFrameVolumeMm3 } from './lever-frame-volume-mm3.ts';
 export { leverFloat, type LeverFloat } from './lever-float.ts';
 export { leverPad } from './lever-pad.ts';
 export { floatLowestZMm } from './float-lowest-z-mm.ts';
+export { armStopTurnRad } from './arm-stop-turn-rad.ts';
 export { armLoad, layoutLever, type ArmLoad, type LeverLayoutOptions } from './layout-lever.ts';
 export { leverBasisFromDesign } from './lever-basis.ts';
 export { searchLever, shortestPadArmMm, type LeverSearchOptions, type LeverSearchOutcome } from './search-lever.ts';

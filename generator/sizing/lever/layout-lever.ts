@@ -5,6 +5,7 @@ import { PIN_DIAMETER_MM, pinSpec } from '../parts/pin-spec.ts';
 import { rimMountSpec, type RimMountSpec } from '../rim/rim-mount-spec.ts';
 import { rimMountVolumesMm3 } from '../rim/rim-mount-volumes.ts';
 import { RIM_ADJUST_MM } from '../rim/rim-constants.ts';
+import { armStopTurnRad } from './arm-stop-turn-rad.ts';
 import { floatLowestZMm } from './float-lowest-z-mm.ts';
 import { frictionLevelBandMm } from './friction-level-band-mm.ts';
 import { leverArmVolume } from './lever-arm-volume.ts';
@@ -88,9 +89,10 @@ export interface LeverLayoutOptions {
  *   the pad stands proud of it, and the nozzle tip is the pad face less the
  *   indentation; the pivot axis is the hole's centre depth under the top face:
  *   the arm is level at the seal by construction;
- * - at rest the arm turns down until the pad has dropped the preferred travel, or
- *   until the float's far bottom corner meets the floor (on the rim: the floor
- *   less the adjustment), whichever first; the minimum travel must fit;
+ * - at rest the arm turns down until its heel meets the frame's back wall (built
+ *   for the preferred travel), or until the float's far bottom corner meets the
+ *   floor (on the rim: the floor less the adjustment), whichever first; the pad's
+ *   travel then must be at least the minimum;
  * - the frame, the pin across it, and on the rim the hanger and stem follow.
  */
 export function layoutLever(lb: LeverBasis, o: LeverLayoutOptions): LeverCandidate {
@@ -116,21 +118,6 @@ export function layoutLever(lb: LeverBasis, o: LeverLayoutOptions): LeverCandida
   const pivot = armTop - arm.holeCentreDepthMm;
   const contact = padArcContact(arm.padArmMm, inp.sealDiameterM * 1e3, delta, tip - pivot);
 
-  // rest: pad centre (a_p) down by travel + delta, arm turned by asin((s + delta) / a_p)
-  const floorZ = o.mount === 'rim' ? RIM_ADJUST_MM : 0;
-  const lowestAt = (travel: number) => floatLowestZMm(arm.floatArmMm, R, floatBottom, pivot, Math.asin(Math.min(1, (travel + delta) / arm.padArmMm)));
-  let restTravel = b.preferredTravelMm;
-  if (lowestAt(restTravel) < floorZ) {
-    let lo = 0;
-    let hi = restTravel;
-    for (let i = 0; i < 40; i++) {
-      const mid = (lo + hi) / 2;
-      if (lowestAt(mid) >= floorZ) lo = mid;
-      else hi = mid;
-    }
-    restTravel = lo;
-  }
-
   const frame = leverFrameSpec({
     mount: o.mount,
     arm,
@@ -141,6 +128,23 @@ export function layoutLever(lb: LeverBasis, o: LeverLayoutOptions): LeverCandida
     deckThicknessMm: b.deckThicknessMm,
     bossHeightMm: b.bossHeightMm,
   });
+  // rest: the arm turns nose down until its heel meets the back wall (armStopTurnRad), or until the float's
+  // far bottom corner meets the floor (on the rim: the floor less the adjustment), whichever first; the pad
+  // has then dropped a_p sin(theta) - delta from the lip
+  const floorZ = o.mount === 'rim' ? RIM_ADJUST_MM : 0;
+  const lowestAt = (travel: number) => floatLowestZMm(arm.floatArmMm, R, floatBottom, pivot, Math.asin(Math.min(1, (travel + delta) / arm.padArmMm)));
+  const stopTurn = armStopTurnRad(-arm.tailXMm, arm.eyeDepthMm - arm.holeCentreDepthMm, frame.postHalfLengthMm);
+  let restTravel = Number.isFinite(stopTurn) ? arm.padArmMm * Math.sin(stopTurn) - delta : arm.padArmMm - delta;
+  if (lowestAt(restTravel) < floorZ) {
+    let lo = 0;
+    let hi = restTravel;
+    for (let i = 0; i < 40; i++) {
+      const mid = (lo + hi) / 2;
+      if (lowestAt(mid) >= floorZ) lo = mid;
+      else hi = mid;
+    }
+    restTravel = lo;
+  }
   const pin = pinSpec(frame.widthMm, arm.holeDiameterMm);
   let rim: RimMountSpec | null = null;
   let rimMm3 = 0;
@@ -180,7 +184,7 @@ export function layoutLever(lb: LeverBasis, o: LeverLayoutOptions): LeverCandida
   const seal = leverFloatChecks(lb, load, lf);
   if (seal.reserve < inp.reserve) violations.push('reserve');
   if (!(sealDepth <= f.cylinderHeightMm)) violations.push('seal-in-cylinder');
-  if (lowestAt(b.minimumTravelMm) < floorZ - 1e-9 || floatBottom < floorZ) violations.push('travel');
+  if (restTravel < b.minimumTravelMm - 1e-9 || floatBottom < floorZ) violations.push('travel');
   if (arm.floatArmMm - R < frame.postHalfLengthMm + FLOAT_TO_FRAME_GAP_MM - 1e-9) violations.push('float-clearance');
   if (contact.lipGapMm > delta / 2 + 1e-9) violations.push('pad-arc');
   if (footprint > inp.maxOuterDiameterM * 1e3 + 1e-9) violations.push('outer-diameter-limit');

@@ -15,6 +15,12 @@ export interface LeverArmOptions {
   padDiameterMm: number;
   padThicknessMm: number;
   padProudMm: number;
+  /**
+   * turn of the arm, nose down from level, at which the back of the eye should
+   * meet the frame's back wall (the rest stop), rad; default none: the eye ends
+   * as far behind the pivot as in front
+   */
+  restTurnRad?: number;
 }
 
 /** Smallest bar width, mm (common practice: a printed bar this wide does not twist under a few newtons). */
@@ -29,7 +35,10 @@ const upHalf = (mm: number) => Math.ceil(mm * 2 - 1e-9) / 2;
  * The arm's dimensions for a pad arm and a float arm (LeverArmSpec):
  * - pin hole: pin diameter + 2 print clearances, centred one wall plus its radius
  *   under the top face; its pointed roof (SELF_SUPPORT_ANGLE_DEG) plus one wall
- *   below sets the eye's depth; the eye is one wall longer than the hole each side;
+ *   below sets the eye's depth; the eye is one wall longer than the hole in front,
+ *   and behind reaches back as far as the rest stop asks (restTurnRad,
+ *   armStopTurnRad): at least as far as in front, at most a clearance short of
+ *   the frame's back wall;
  * - bar: at least MIN_BAR_WIDTH_MM and four walls wide; deep enough for the pad
  *   pocket (pad thickness less what stands proud) over a floor of three lines;
  * - pad table: the pocket (pad + 2 clearances) and one wall round it;
@@ -46,6 +55,13 @@ export function leverArmSpec(o: LeverArmOptions): LeverArmSpec {
   const eyeDepth = Math.max(barDepth, upHalf(holeCentreDepth + pointedHoleApexMm(holeR, SELF_SUPPORT_ANGLE_DEG) + t));
   const barWidth = upHalf(Math.max(MIN_BAR_WIDTH_MM, 4 * t));
   const pocketDiameter = o.padDiameterMm + 2 * c;
+  // the rest stop: the eye's lower back edge meets the back wall (a clearance and a wall past the front of the eye)
+  // at the rest turn: heel cos(theta) + (depth below the axis) sin(theta) = wall; never nearer the wall than a clearance
+  const eyeHalf = holeR + t;
+  const wall = eyeHalf + c + t;
+  const below = eyeDepth - holeCentreDepth;
+  const theta = o.restTurnRad ?? 0;
+  const heel = theta > 0 ? Math.min(wall - c, Math.max(eyeHalf, (wall - below * Math.sin(theta)) / Math.cos(theta))) : eyeHalf;
   // half a millimetre inside the bar each side, so the tongue's round never grazes the bar's flat sides
   const tongue = barWidth - 1;
   return {
@@ -53,9 +69,9 @@ export function leverArmSpec(o: LeverArmOptions): LeverArmSpec {
     floatArmMm: o.floatArmMm,
     barWidthMm: barWidth,
     barDepthMm: barDepth,
-    tailXMm: -(holeR + t),
+    tailXMm: -heel,
     tipXMm: o.floatArmMm + barWidth / 2,
-    eyeHalfLengthMm: holeR + t,
+    eyeHalfLengthMm: eyeHalf,
     eyeDepthMm: eyeDepth,
     holeDiameterMm: 2 * holeR,
     holeCentreDepthMm: holeCentreDepth,

@@ -15,7 +15,7 @@ export function leverArmVolume(a: LeverArmSpec): { volumeMm3: number; centroidXM
   const pieces: [number, number][] = [];
   const length = a.tipXMm - a.tailXMm;
   pieces.push([a.barWidthMm * a.barDepthMm * length, (a.tipXMm + a.tailXMm) / 2]);
-  pieces.push([a.barWidthMm * (a.eyeDepthMm - a.barDepthMm) * 2 * a.eyeHalfLengthMm, 0]);
+  pieces.push([a.barWidthMm * (a.eyeDepthMm - a.barDepthMm) * (a.eyeHalfLengthMm - a.tailXMm), (a.eyeHalfLengthMm + a.tailXMm) / 2]);
   const side = 2 * a.tableHalfSideMm;
   pieces.push([Math.max(0, side - a.barWidthMm) * side * a.barDepthMm, a.padArmMm]);
   pieces.push([Math.PI * (a.tongueDiameterMm / 2) ** 2 * a.tongueLengthMm, a.floatArmMm]);

@@ -21,7 +21,7 @@ export interface LeverArmSpec {
   barDepthMm: number;
   tailXMm: number;
   tipXMm: number;
-  /** eye block: x in [-eyeHalfLengthMm, eyeHalfLengthMm], depth eyeDepthMm from the top face */
+  /** eye block: x from tailXMm (its heel, the rest stop) to eyeHalfLengthMm, depth eyeDepthMm from the top face */
   eyeHalfLengthMm: number;
   eyeDepthMm: number;
   /** pin hole: nominal diameter (pin + 2 clearances), centre depth below the top face, roof angle */

@@ -85,6 +85,7 @@ export function searchLever(lb: LeverBasis, o: LeverSearchOptions): LeverSearchO
       padDiameterMm: pad.diameterMm,
       padThicknessMm: pad.thicknessMm,
       padProudMm: pad.proudMm,
+      restTurnRad: Math.asin(Math.min(1, (lb.basis.preferredTravelMm + lb.indentationMm) / padArm)),
     });
   const probe = armFor(100, 200);
   // the frame's post reaches a clearance and a wall past the eye (leverFrameSpec)

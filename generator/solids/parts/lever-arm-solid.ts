@@ -37,7 +37,7 @@ export async function buildLeverArmMesh(a: LeverArmSpec, quality: Quality): Prom
   const w = a.barWidthMm / 2;
   const s = a.tableHalfSideMm;
   const bar = prism(rect(a.tailXMm, a.tipXMm, -w, w), a.barDepthMm);
-  const eye = prism(rect(-a.eyeHalfLengthMm, a.eyeHalfLengthMm, -w, w), a.eyeDepthMm);
+  const eye = prism(rect(a.tailXMm, a.eyeHalfLengthMm, -w, w), a.eyeDepthMm);
   const table = prism(rect(a.padArmMm - s, a.padArmMm + s, -s, s), a.barDepthMm);
   const rt = a.tongueDiameterMm / 2;
   const tongue = prism(circlePoints(rt, segmentsFor(rt, quality)), a.tongueLengthMm + OVERRUN_MM, translation(a.floatArmMm, 0, a.barDepthMm - OVERRUN_MM));
