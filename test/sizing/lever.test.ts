@@ -28,6 +28,7 @@ import {
   leverBasisFromDesign,
   leverFloatPushN,
   leverPadForceN,
+  leverSummary,
   padArcContact,
   pivotFrictionTorqueNmm,
   pointedHoleAreaMm2,
@@ -171,6 +172,12 @@ describe('the lightest lever valve (search)', () => {
     expect(c.restLowestZMm).toBeGreaterThanOrEqual(-1e-9);
     expect(c.lipGapMm).toBeLessThanOrEqual(0.25);
     expect(c.hysteresisMm).toBeGreaterThan(0);
+    // the fields size --json will carry (issue 13, Interface)
+    const s = leverSummary(c);
+    expect(s).toMatchObject({ architecture: 'lever', mount: 'floor', rim: null });
+    expect(s.lever.ratio).toBeCloseTo(c.arm.floatArmMm / c.arm.padArmMm, 12);
+    expect(s.lever.armLengthMm).toBeCloseTo(c.arm.tipXMm - c.arm.tailXMm, 12);
+    expect(s.footprintMm).toBe(c.footprintMm);
   });
 
   it('deep bucket, 250 mm at 1.5 m: too tall for a floor frame (250 mm part cap), hung from a rim 100 mm higher it fits 90 mm', () => {
