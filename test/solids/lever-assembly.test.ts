@@ -8,27 +8,20 @@
  * Rotation of the arm about the pivot axis: elementary geometry.
  */
 import { beforeAll, describe, expect, it } from 'vitest';
-import { designBasis } from '../../generator/sizing/layout/design-basis.ts';
-import { armStopTurnRad, leverBasisFromDesign, searchLever, type LeverCandidate } from '../../generator/sizing/lever/index.ts';
+import { armStopTurnRad, type LeverCandidate } from '../../generator/sizing/lever/index.ts';
 import { intersect, loadManifold, meshBounds, meshToManifold, type IndexedMesh, type ManifoldToplevel } from '../../generator/solids/mesh/index.ts';
 import { buildFloatMesh } from '../../generator/solids/parts/float-solid.ts';
 import { buildLeverArmMesh } from '../../generator/solids/parts/lever-arm-solid.ts';
 import { buildLeverFrameMountedMesh } from '../../generator/solids/parts/lever-frame-solid.ts';
 import { buildNozzleMesh } from '../../generator/solids/parts/nozzle-solid.ts';
 import { fromRows, multiply, transformMesh, translation } from '../../generator/solids/shapes/transform-mesh.ts';
-import { defaultInputs } from '../sizing/fixtures.ts';
+import { demoLever } from './lever-demos.ts';
 
 let wasm: ManifoldToplevel;
 beforeAll(async () => {
   wasm = await loadManifold();
 });
 
-function lever(headM: number, levelM: number, mount: 'floor' | 'rim'): LeverCandidate {
-  const inp = defaultInputs({ headMaxM: headM, headMinM: 0.75 * headM, targetLevelM: levelM, maxOuterDiameterM: 0.09 });
-  const out = searchLever(leverBasisFromDesign(designBasis(inp)), mount === 'rim' ? { mount, rim: { rimHeightMm: levelM * 1e3 + 100, wallThicknessMm: 3 } } : { mount });
-  if (!out.best) throw new Error('the demo lever did not size');
-  return out.best;
-}
 
 /** Turn about the pivot axis (y through (0, z_p)), nose down by theta. */
 function aboutPivot(c: LeverCandidate, theta: number): number[] {
@@ -55,7 +48,7 @@ for (const [name, headM, levelM, mount] of [
   ['bucket on the rim', 1.5, 0.25, 'rim'],
 ] as const) {
   describe(`lever assembly: ${name}`, () => {
-    const c = lever(headM, levelM, mount);
+    const c = demoLever(headM, levelM, mount);
     const armTop = c.floatBottomZMm + c.float.heightMm + c.arm.barDepthMm;
     const delta = 0.5; // the document's default indentation (fixtures.ts)
     const restTheta = Math.asin((c.restTravelMm + delta) / c.arm.padArmMm);

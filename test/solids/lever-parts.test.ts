@@ -12,8 +12,7 @@
  * Designs: our own demo scenarios (a 25 mm tray at 2 m, a 250 mm bucket at 1.5 m).
  */
 import { beforeAll, describe, expect, it } from 'vitest';
-import { designBasis } from '../../generator/sizing/layout/design-basis.ts';
-import { leverArmVolume, leverBasisFromDesign, leverFrameVolumeMm3, searchLever, type LeverCandidate } from '../../generator/sizing/lever/index.ts';
+import { leverArmVolume, leverFrameVolumeMm3 } from '../../generator/sizing/lever/index.ts';
 import { pinVolumeMm3 } from '../../generator/sizing/parts/part-volumes.ts';
 import { rimMountVolumesMm3 } from '../../generator/sizing/rim/index.ts';
 import { countEdgeUses, holePolygonRadiusMm, loadManifold, meshBounds, meshToManifold, meshVolumeMm3, segmentsFor, type IndexedMesh, type ManifoldToplevel } from '../../generator/solids/mesh/index.ts';
@@ -22,7 +21,7 @@ import { buildLeverFrameMesh } from '../../generator/solids/parts/lever-frame-so
 import { buildPinMesh } from '../../generator/solids/parts/pin-solid.ts';
 import { buildRimHangerMesh } from '../../generator/solids/parts/rim-hanger-solid.ts';
 import { buildSlottedStemMesh } from '../../generator/solids/parts/slotted-stem-solid.ts';
-import { defaultInputs } from '../sizing/fixtures.ts';
+import { demoBucket, demoTray } from './lever-demos.ts';
 import { overhangFaces } from './overhang-faces.ts';
 
 let wasm: ManifoldToplevel;
@@ -30,14 +29,8 @@ beforeAll(async () => {
   wasm = await loadManifold();
 });
 
-function lever(headM: number, levelM: number, mount: 'floor' | 'rim'): LeverCandidate {
-  const inp = defaultInputs({ headMaxM: headM, headMinM: 0.75 * headM, targetLevelM: levelM, maxOuterDiameterM: 0.09 });
-  const out = searchLever(leverBasisFromDesign(designBasis(inp)), mount === 'rim' ? { mount, rim: { rimHeightMm: levelM * 1e3 + 100, wallThicknessMm: 3 } } : { mount });
-  if (!out.best) throw new Error('the demo lever did not size');
-  return out.best;
-}
-const tray = lever(2, 0.025, 'floor');
-const bucket = lever(1.5, 0.25, 'rim');
+const tray = demoTray();
+const bucket = demoBucket();
 
 function checkClosed(mesh: IndexedMesh, name: string, genus: number): void {
   expect(countEdgeUses(mesh), name).toMatchObject({ boundaryEdges: 0, overusedEdges: 0, inconsistentlyOriented: 0, degenerateTriangles: 0, closed: true });

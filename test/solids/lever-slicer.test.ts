@@ -12,15 +12,13 @@ import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'no
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
-import { designBasis } from '../../generator/sizing/layout/design-basis.ts';
-import { leverBasisFromDesign, searchLever } from '../../generator/sizing/lever/index.ts';
 import { writeStlBinary, type IndexedMesh } from '../../generator/solids/mesh/index.ts';
 import { buildLeverArmMesh } from '../../generator/solids/parts/lever-arm-solid.ts';
 import { buildLeverFrameMesh } from '../../generator/solids/parts/lever-frame-solid.ts';
 import { buildPinMesh } from '../../generator/solids/parts/pin-solid.ts';
 import { buildRimHangerMesh } from '../../generator/solids/parts/rim-hanger-solid.ts';
 import { buildSlottedStemMesh } from '../../generator/solids/parts/slotted-stem-solid.ts';
-import { defaultInputs } from '../sizing/fixtures.ts';
+import { demoBucket, demoTray } from './lever-demos.ts';
 
 const SLICER = '/usr/bin/prusa-slicer';
 const present = existsSync(SLICER);
@@ -42,11 +40,8 @@ function supportLines(name: string, mesh: IndexedMesh): number {
 
 describe.skipIf(!present)('PrusaSlicer adds no support (45-degree threshold) to the lever and rim parts', () => {
   it('arm, pivot pin, floor frame, rim frame, hanger and stem', async () => {
-    const tray = searchLever(leverBasisFromDesign(designBasis(defaultInputs({ headMaxM: 2, headMinM: 1.5, targetLevelM: 0.025, maxOuterDiameterM: 0.09 }))), { mount: 'floor' }).best!;
-    const bucket = searchLever(leverBasisFromDesign(designBasis(defaultInputs({ headMaxM: 1.5, headMinM: 1.125, targetLevelM: 0.25, maxOuterDiameterM: 0.09 }))), {
-      mount: 'rim',
-      rim: { rimHeightMm: 350, wallThicknessMm: 3 },
-    }).best!;
+    const tray = demoTray();
+    const bucket = demoBucket();
     const parts: [string, IndexedMesh][] = [
       ['arm', await buildLeverArmMesh(tray.arm, 'preview')],
       ['pivot-pin', await buildPinMesh(tray.pin, 'preview')],

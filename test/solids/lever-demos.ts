@@ -1,0 +1,18 @@
+/**
+ * The lever tests' demo valves, scenarios of our own (not reference data): a
+ * 25 mm tray at 2 m on the floor and a 250 mm bucket at 1.5 m hung from a rim
+ * 100 mm above its level (3 mm wall); the low tank at 75 % of full, a 90 mm footprint.
+ */
+import { designBasis } from '../../generator/sizing/layout/design-basis.ts';
+import { leverBasisFromDesign, searchLever, type LeverCandidate } from '../../generator/sizing/lever/index.ts';
+import { defaultInputs } from '../sizing/fixtures.ts';
+
+export function demoLever(headM: number, levelM: number, mount: 'floor' | 'rim'): LeverCandidate {
+  const inp = defaultInputs({ headMaxM: headM, headMinM: 0.75 * headM, targetLevelM: levelM, maxOuterDiameterM: 0.09 });
+  const out = searchLever(leverBasisFromDesign(designBasis(inp)), mount === 'rim' ? { mount, rim: { rimHeightMm: levelM * 1e3 + 100, wallThicknessMm: 3 } } : { mount });
+  if (!out.best) throw new Error('the demo lever did not size');
+  return out.best;
+}
+
+export const demoTray = () => demoLever(2, 0.025, 'floor');
+export const demoBucket = () => demoLever(1.5, 0.25, 'rim');
