@@ -27,6 +27,7 @@ import {
   leverArmVolume,
   leverBasisFromDesign,
   leverFloatPushN,
+  leverHoldDown,
   leverPadForceN,
   leverSummary,
   padArcContact,
@@ -112,6 +113,15 @@ describe('level band, pad arc, extents (Archimedes; elementary geometry)', () =>
     const t = armStopTurnRad(5.3, 6, 7);
     expect(5.3 * Math.cos(t) + 6 * Math.sin(t)).toBeCloseTo(7, 12);
     expect(armStopTurnRad(1, 1, 7)).toBe(Infinity);
+  });
+
+  it('flooded floor lever (moments about the foot\'s back edge; steel 7850 kg/m3, from memory): 16.5 N mm, anchors 1.4559 N, or 170.1 g of steel', () => {
+    // M = 0.3 x (45 + 17) - 0.02 x (20 + 17) - 0.08 x 17 = 16.5; F_a = 1.5 x 16.5 / 17; m = F_a / ((1 - 998.2 / 7850) x 9.80665)
+    const h = leverHoldDown({ floatLiftN: 0.3, floatArmMm: 45, armWetWeightN: 0.02, armCentroidMm: 20, restWetWeightN: 0.08, backEdgeXMm: -17, anchorXMm: 0, densityKgM3: 998.2 });
+    expect(h.tippingMomentNmm).toBeCloseTo(16.5, 9);
+    expect(h.anchorForceN).toBeCloseTo(1.45588, 5);
+    expect(h.ballastSteelG).toBeCloseTo(170.09, 2);
+    expect(h.upliftN).toBeCloseTo(0.2, 12);
   });
 
   it('float turned 0.1 rad about a pivot 60 mm up: far corner (90, 10) goes to 60 - 90 sin 0.1 - 50 cos 0.1 = 1.2648 mm', () => {

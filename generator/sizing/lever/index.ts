@@ -21,6 +21,7 @@ export { armStopTurnRad } from './arm-stop-turn-rad.ts';
 export { armLoad, layoutLever, type ArmLoad, type LeverLayoutOptions } from './layout-lever.ts';
 export { leverBasisFromDesign } from './lever-basis.ts';
 export { leverSummary } from './lever-summary.ts';
+export { leverHoldDown, type LeverHoldDownOptions } from './lever-hold-down.ts';
 export { searchLever, shortestPadArmMm, type LeverSearchOptions, type LeverSearchOutcome } from './search-lever.ts';
 export * from './lever-constants.ts';
 export type * from './lever-types.ts';

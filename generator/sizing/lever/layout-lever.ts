@@ -6,6 +6,8 @@ import { rimMountSpec, type RimMountSpec } from '../rim/rim-mount-spec.ts';
 import { rimMountVolumesMm3 } from '../rim/rim-mount-volumes.ts';
 import { RIM_ADJUST_MM } from '../rim/rim-constants.ts';
 import { armStopTurnRad } from './arm-stop-turn-rad.ts';
+import { armWeightInLiquidN } from './arm-weight-in-liquid-n.ts';
+import { leverHoldDown } from './lever-hold-down.ts';
 import { floatLowestZMm } from './float-lowest-z-mm.ts';
 import { frictionLevelBandMm } from './friction-level-band-mm.ts';
 import { leverArmVolume } from './lever-arm-volume.ts';
@@ -24,6 +26,8 @@ import { widestExtentMm, type PlanShape } from './widest-extent-mm.ts';
 export interface ArmLoad {
   arm: LeverArmSpec;
   armMm3: number;
+  /** the printed arm's own centroid, mm (without the pad) */
+  armOnlyCentroidMm: number;
   padMassKg: number;
   weightN: number;
   centroidMm: number;
@@ -34,7 +38,7 @@ export function armLoad(lb: LeverBasis, arm: LeverArmSpec): ArmLoad {
   const pad = leverPad(lb.basis);
   const armKg = v.volumeMm3 * 1e-9 * lb.basis.inputs.materialDensityKgM3;
   const kg = armKg + pad.massKg;
-  return { arm, armMm3: v.volumeMm3, padMassKg: pad.massKg, weightN: kg * STANDARD_GRAVITY, centroidMm: (armKg * v.centroidXMm + pad.massKg * arm.padArmMm) / kg };
+  return { arm, armMm3: v.volumeMm3, armOnlyCentroidMm: v.centroidXMm, padMassKg: pad.massKg, weightN: kg * STANDARD_GRAVITY, centroidMm: (armKg * v.centroidXMm + pad.massKg * arm.padArmMm) / kg };
 }
 
 const PIN_RADIUS_MM = PIN_DIAMETER_MM / 2;
@@ -180,6 +184,28 @@ export function layoutLever(lb: LeverBasis, o: LeverLayoutOptions): LeverCandida
   };
   const printedMm3 = volumes.armMm3 + volumes.frameMm3 + volumes.floatMm3 + volumes.nozzleMm3 + volumes.pinMm3;
 
+  // flooded: the float lifts its whole reserve; everything else weighs what it weighs wet
+  const rhoM = inp.materialDensityKgM3;
+  const padWetN = load.padMassKg * (1 - rho / inp.padDensityKgM3) * STANDARD_GRAVITY;
+  const armWetN = armWeightInLiquidN(load.armMm3, rhoM, rho, 1) + padWetN;
+  const armWetCentroid = (armWeightInLiquidN(load.armMm3, rhoM, rho, 1) * load.armOnlyCentroidMm + padWetN * arm.padArmMm) / armWetN;
+  const restWetN = armWeightInLiquidN(volumes.frameMm3 + volumes.nozzleMm3 + volumes.pinMm3, rhoM, rho, 1);
+  const hold = leverHoldDown({
+    floatLiftN: lf.availableN,
+    floatArmMm: arm.floatArmMm,
+    armWetWeightN: armWetN,
+    armCentroidMm: armWetCentroid,
+    restWetWeightN: restWetN,
+    backEdgeXMm: frame.footBackXMm,
+    // floor: the side anchors sit at the pivot's x; rim: the stem's screws in the back wall carry it all
+    anchorXMm: o.mount === 'floor' ? 0 : frame.footBackXMm + frame.wallMm,
+    densityKgM3: rho,
+  });
+  const holdDown =
+    o.mount === 'floor'
+      ? hold
+      : { upliftN: hold.upliftN, tippingMomentNmm: hold.tippingMomentNmm, anchorForceN: Math.max(0, 1.5 * hold.upliftN), ballastSteelG: 0 };
+
   const violations: LeverConstraint[] = [];
   const seal = leverFloatChecks(lb, load, lf);
   if (seal.reserve < inp.reserve) violations.push('reserve');
@@ -226,6 +252,7 @@ export function layoutLever(lb: LeverBasis, o: LeverLayoutOptions): LeverCandida
     restLowestZMm: lowestAt(restTravel),
     footprintMm: footprint,
     volumes,
+    holdDown,
     padMassKg: load.padMassKg,
     totalMassKg: printedMm3 * 1e-9 * inp.materialDensityKgM3 + load.padMassKg,
     violations,

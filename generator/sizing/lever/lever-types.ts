@@ -146,6 +146,13 @@ export interface LeverCandidate {
   footprintMm: number;
   /** printed volumes, mm3; pad mass kg; total printed plus pad, kg */
   volumes: { armMm3: number; frameMm3: number; floatMm3: number; nozzleMm3: number; pinMm3: number };
+  /**
+   * flooded: uplift of the whole valve (N; positive: it would float off), the moment tipping it up about
+   * the foot's back edge (N mm), and what holds it with the direct valve's 1.5 on the flood uplift: the
+   * anchors' pull (N) or steel ballast at the anchors (g); on the rim the hanger must hold 1.5 x the uplift
+   * on the wall (anchorForceN) and takes the moment through the stem, so no ballast
+   */
+  holdDown: { upliftN: number; tippingMomentNmm: number; anchorForceN: number; ballastSteelG: number };
   padMassKg: number;
   totalMassKg: number;
   violations: LeverConstraint[];
