@@ -30,23 +30,34 @@ const row = (label: string, value: string, unit = ''): Row => ({ label, value, u
 
 /** The result as titled sections of rows (closing force, float, housing, nozzle, pin, levels, flow, drain, hold-down, tilt, mass). */
 export function sizingSections(result: SizingSuccess): Section[] {
-  const { closingForce: cf, pressure, float: fl, housing, nozzle, pin, levels, flow, drain, vents, holdDown, tilt, mass } = result;
+  const { closingForce: cf, pressure, float: fl, seal, housing, nozzle, pin, levels, flow, drain, vents, holdDown, tilt, mass } = result;
   const headMaxM = result.inputs.headMaxM;
   const headMinM = result.inputs.headMinM;
-  const halfIndentMm = (result.inputs.indentationM * 1e3) / 2;
+  const halfIndentMm = seal.indentationMm / 2;
+  const percent = (strain: number) => fixed(strain * 100, 0);
   const fill = (minutes: number | null) => (minutes === null ? [] : [minutes]);
   return [
     {
-      title: 'Closing force (float on pad)',
+      title: 'Closing force for a tight seal (float on pad)',
       rows: [
         row(`at highest head ${fixed(headMaxM, 2)} m (${fixed(pressure.atHeadMaxKPa, 1)} kPa)`, fixed(cf.atHeadMaxN, 3), 'N'),
         row(`at lowest head ${fixed(headMinM, 2)} m (${fixed(pressure.atHeadMinKPa, 1)} kPa)`, fixed(cf.atHeadMinN, 3), 'N'),
-        row('pad preload', fixed(cf.preloadN, 3), 'N'),
+        row(cf.fromCalibration ? 'seating force (bench calibration fit)' : 'seating force (pad on the lip, no pressure)', fixed(cf.seatN, 3), 'N'),
         row(
-          cf.fromCalibration ? 'seal area (bench calibration fit)' : 'seal area (nozzle lip)',
-          `${fixed(cf.sealAreaMm2, 1)} (d ${fixed(cf.equivalentSealDiameterMm, 2)} mm)`,
+          cf.fromCalibration ? 'pressure area (bench calibration fit)' : 'pressure area (gasket-factor form)',
+          `${fixed(cf.modelAreaMm2, 1)} (d ${fixed(cf.equivalentSealDiameterMm, 2)} mm)`,
           'mm2',
         ),
+      ],
+    },
+    {
+      title: 'Seal pad',
+      rows: [
+        row(`pad${seal.padChosen ? ' (chosen for this design)' : ''}`, seal.padMaterial),
+        row('stiffness (compressive modulus)', fixed(seal.padStiffnessKpa, 0), 'kPa'),
+        row('squeeze at the tight seal, highest head', `${fixed(seal.indentationMm, 2)} (${percent(seal.strainAtSeal)} %)`, 'mm'),
+        row('hard stop takes the push from', fixed(seal.stopIndentationMm, 2), 'mm'),
+        row('worst squeeze in service (empty tank, flooded)', percent(seal.worstStrain), '%'),
       ],
     },
     {
@@ -59,6 +70,9 @@ export function sizingSections(result: SizingSuccess): Section[] {
         row('lift when fully submerged', fixed(fl.availableForceN, 3), 'N'),
         row('reserve (lift / force at highest head)', fixed(fl.reserve, 2), 'x'),
         row('depth at seal, highest / lowest head', `${fixed(fl.sealDepthAtHeadMaxMm, 1)} / ${fixed(fl.sealDepthAtHeadMinMm, 1)}`, 'mm'),
+        row('shell', fixed(fl.shellMm, 2), 'mm'),
+        row('water it can take in and still shut at full tank', fixed(fl.leakToleranceMl, 1), 'mL'),
+        row('shut-off rise per mL taken in', fixed(fl.levelRisePerMlMm, 2), 'mm'),
       ],
     },
     {
@@ -89,6 +103,7 @@ export function sizingSections(result: SizingSuccess): Section[] {
         row('float lifts off the pin', fixed(levels.liftOffMm, 1), 'mm'),
         row('pad first touches the lip', fixed(levels.firstTouchMm, 1), 'mm'),
         row('lowest target this float can reach', fixed(levels.minimumReachableMm, 1), 'mm'),
+        ...(levels.overflowMm === null ? [] : [row('container overflow', fixed(levels.overflowMm, 1), 'mm')]),
       ],
     },
     {
@@ -130,7 +145,7 @@ export function sizingSections(result: SizingSuccess): Section[] {
         row(`total (${result.inputs.materialName})`, fixed(mass.totalG, 1), 'g'),
         row('filament (1.75 mm)', fixed(mass.filamentM, 1), 'm'),
         row('housing / float / nozzle / pin', [mass.byPart.housing, mass.byPart.float, mass.byPart.nozzle, mass.byPart.pin].map((g) => fixed(g, 1)).join(' / '), 'g'),
-        row('seal pad (not printed)', fixed(mass.byPart.pad, 2), 'g'),
+        row(`seal pad (${seal.padMaterial}, not printed)`, fixed(mass.byPart.pad, 2), 'g'),
       ],
     },
   ];

@@ -12,6 +12,8 @@ import { HEAD_CAP_M, STANDARD_GRAVITY, WATER_DENSITY_20C, WATER_VISCOSITY_20C } 
 import type { CalibrationPoint, DesignInputs } from '../sizing/inputs.ts';
 import { fitSealCalibration } from '../sizing/hydrostatics/fit-seal-calibration.ts';
 import { DEFAULT_MATERIAL_NAME, findMaterial, materialNames } from '../sizing/materials.ts';
+import { AUTO_PAD, PADS, findPad, padNames } from '../sizing/seal/pads.ts';
+import { chooseSeal } from '../sizing/seal/choose-seal.ts';
 import {
   checkRange,
   densityField,
@@ -48,10 +50,11 @@ export const FIELD_UNITS = {
   'liquid.viscosity': 'mPa s',
   'nozzle.orifice': 'mm',
   'nozzle.sealDiameter': 'mm',
-  'seal.preload': 'N',
   'seal.padThickness': 'mm',
-  'seal.indentation': 'mm',
   'seal.padDensity': 'g/cm3',
+  /** read from first-version files and ignored (the pad sets both now) */
+  'seal.preload': 'N',
+  'seal.indentation': 'mm',
   'seal.calibration.head': 'm',
   'seal.calibration.mass': 'g',
   'print.material.density': 'g/cm3',
@@ -61,13 +64,18 @@ export const FIELD_UNITS = {
   reserve: '',
   'reservoir.area': 'm2',
   'reservoir.rise': 'mm',
+  'container.overflow': 'mm',
+  'print.bed.width': 'mm',
+  'print.bed.depth': 'mm',
 } as const;
 
 /**
  * The defaults, written as a grower would write them (DESIGN "Symbols and
  * defaults"; nozzle.orifice is 2 mm, not DESIGN's 3 mm: a 3 mm bore through a
- * barb for a 4 mm tube leaves walls thinner than two print lines). Pad density:
- * soft rubber, from memory (conservative for foam).
+ * barb for a 4 mm tube leaves walls thinner than two print lines). The pad is
+ * chosen by the sizing ("auto": the softest closed-cell sponge that fits, see
+ * generator/sizing/seal/pads.ts); its density comes from the pad table unless
+ * given. Bed: 220 x 220 mm, a common size of hobby printers (common practice).
  */
 export const DEFAULT_DOCUMENT = {
   supply: { tubeInnerDiameter: '4 mm', tubeLength: '5 m' },
@@ -76,8 +84,8 @@ export const DEFAULT_DOCUMENT = {
     viscosity: `${formatNumber(WATER_VISCOSITY_20C * 1e3)} mPa s`,
   },
   nozzle: { orifice: '2 mm', sealDiameter: '5 mm' },
-  seal: { preload: '0.1 N', padThickness: '3 mm', indentation: '0.5 mm', padDensity: '1.2 g/cm3' },
-  print: { material: DEFAULT_MATERIAL_NAME, wall: '2.25 mm', lineWidth: '0.45 mm' },
+  seal: { pad: AUTO_PAD, padThickness: '3 mm' },
+  print: { material: DEFAULT_MATERIAL_NAME, wall: '2.25 mm', lineWidth: '0.45 mm', bed: '220 x 220 mm' },
   limits: { maxOuterDiameter: '120 mm' },
   reserve: 1.5,
 } as const;
@@ -112,6 +120,8 @@ export const FIELD_SPECS = {
   reserve: { unit: '', label: 'the reserve (float lift over the force needed)', min: 1, max: 5 },
   reservoirArea: { unit: 'm2', label: 'the reservoir area', min: 1e-4, max: 100 },
   reservoirRise: { unit: 'mm', label: 'the reservoir rise', min: 1, max: 1000 },
+  overflow: { unit: 'mm', label: 'the overflow height (above the container floor)', min: 10, max: 2000, example: '60 mm' },
+  bedSide: { unit: 'mm', label: 'a bed side', min: 50, max: 1000, example: '220 mm' },
 } satisfies Record<string, QuantitySpec>;
 
 export const MAX_CALIBRATION_POINTS = 20;
@@ -171,6 +181,66 @@ const materialField = z.unknown().optional().transform((raw, ctx): MaterialChoic
   return z.NEVER;
 }) as unknown as z.ZodType<MaterialChoice>;
 
+/** `seal.pad`: a name from the pad table, or "auto" (the sizing chooses). Null: not a table pad. */
+const padField = z.unknown().optional().transform((raw, ctx): string | null => {
+  const value = raw === undefined ? D.seal.pad : raw;
+  if (typeof value === 'string') {
+    if (value.trim().toLowerCase() === AUTO_PAD) return null;
+    const found = findPad(value);
+    if (found) return found.name;
+  }
+  ctx.issues.push({
+    code: 'custom',
+    input: raw,
+    message: `${showInput(value)} is not a pad in the table; give "${AUTO_PAD}" (floatwright chooses) or one of ${padNames().join(', ')}.`,
+  });
+  return z.NEVER;
+}) as unknown as z.ZodType<string | null>;
+
+const bedSectionSchema = section({
+  width: lengthField({ ...S.bedSide, label: 'the bed width' }),
+  depth: lengthField({ ...S.bedSide, label: 'the bed depth' }),
+});
+
+interface BedSize {
+  widthM: number;
+  depthM: number;
+}
+
+/** `print.bed`: "220 x 220 mm" (one unit for both, or one each) or `{ "width": "220 mm", "depth": "220 mm" }`. */
+const bedField = z.unknown().optional().transform((raw, ctx): BedSize => {
+  const value = raw === undefined ? D.print.bed : raw;
+  if (typeof value === 'string') {
+    const parts = value.split(/\s*[x\u00d7*]\s*(?=[\d.+-])/i);
+    if (parts.length === 2) {
+      // "220 x 220 mm": the unit written after the second number serves the first too
+      const unit = parts[1].replace(/^[\s\d.+\-eE]*/, '');
+      const first = /^[\s\d.+\-eE]*$/.test(parts[0]) && unit ? `${parts[0]} ${unit}` : parts[0];
+      const sides = [first, parts[1]].map((text, i) => measure(text, 'length', { ...S.bedSide, label: i === 0 ? 'the bed width' : 'the bed depth' }));
+      const bad = sides.find((r) => !r.ok);
+      if (bad && !bad.ok) {
+        ctx.issues.push({ code: 'custom', input: raw, message: `${showInput(value)}: ${bad.message}` });
+        return z.NEVER;
+      }
+      const [w, d] = sides as { ok: true; measured: Measured }[];
+      return { widthM: w.measured.si, depthM: d.measured.si };
+    }
+  } else if (value !== null && typeof value === 'object' && !Array.isArray(value)) {
+    const parsed = bedSectionSchema.safeParse(value);
+    if (!parsed.success) {
+      for (const issue of parsed.error.issues) ctx.issues.push({ ...issue } as never);
+      return z.NEVER;
+    }
+    return { widthM: parsed.data.width.si, depthM: parsed.data.depth.si };
+  }
+  ctx.issues.push({
+    code: 'custom',
+    input: raw,
+    message: `${showInput(value)} is not a bed size; give it as "220 x 220 mm" or { "width": "220 mm", "depth": "220 mm" }, each side ${rangeText(S.bedSide)}.`,
+  });
+  return z.NEVER;
+}) as unknown as z.ZodType<BedSize>;
+
 const calibrationPoint = section({
   head: headField({ ...S.calibrationHead, required: true }),
   mass: massField({ ...S.calibrationMass }),
@@ -210,17 +280,20 @@ const documentShape = {
     sealDiameter: lengthField({ ...S.sealDiameter, fallback: D.nozzle.sealDiameter }),
   }).prefault(EMPTY),
   seal: section({
-    preload: forceField({ ...S.preload, fallback: D.seal.preload }),
+    pad: padField,
     padThickness: lengthField({ ...S.padThickness, fallback: D.seal.padThickness }),
-    // no fallback here: the default depends on the pad (see the cross-field checks)
-    indentation: optionalQuantityField('length', S.indentation, false),
-    padDensity: densityField({ ...S.padDensity, fallback: D.seal.padDensity }),
+    // no fallback: the pad table gives the density unless the grower knows better
+    padDensity: optionalQuantityField('density', S.padDensity, false),
     calibration: calibrationField,
+    // first-version keys: still read (a saved file must open), checked, then ignored with a warning
+    preload: optionalQuantityField('force', S.preload, false),
+    indentation: optionalQuantityField('length', S.indentation, false),
   }).prefault(EMPTY),
   print: section({
     material: materialField,
     wall: lengthField({ ...S.wall, fallback: D.print.wall }),
     lineWidth: lengthField({ ...S.lineWidth, fallback: D.print.lineWidth }),
+    bed: bedField,
   }).prefault(EMPTY),
   limits: section({
     maxOuterDiameter: lengthField({ ...S.maxOuterDiameter, fallback: D.limits.maxOuterDiameter }),
@@ -229,6 +302,9 @@ const documentShape = {
   reservoir: section({
     area: optionalQuantityField('area', S.reservoirArea),
     rise: optionalQuantityField('length', S.reservoirRise),
+  }).optional(),
+  container: section({
+    overflow: optionalQuantityField('length', S.overflow),
   }).optional(),
 };
 
@@ -240,11 +316,12 @@ export interface NormalizedDoc {
   level: { target: string };
   liquid: { density: string; viscosity: string };
   nozzle: { orifice: string; sealDiameter: string };
-  seal: { preload: string; padThickness: string; indentation: string; padDensity: string; calibration: { head: string; mass: string }[] };
-  print: { material: string | { name: string; density: string }; wall: string; lineWidth: string };
+  seal: { pad: string; padThickness: string; padDensity?: string; calibration: { head: string; mass: string }[] };
+  print: { material: string | { name: string; density: string }; wall: string; lineWidth: string; bed: string };
   limits: { maxOuterDiameter: string };
   reserve: number;
   reservoir?: { area: string; rise: string };
+  container?: { overflow: string };
 }
 
 export interface ParsedDesign {
@@ -261,7 +338,7 @@ function fail(ctx: Ctx, path: (string | number)[], input: unknown, message: stri
 export const designSchema = section(documentShape).transform((doc, ctx): ParsedDesign => {
   const rho = doc.liquid.density.si;
   const issuesBefore = ctx.issues.length;
-  const { supply, nozzle, seal, print, reservoir } = doc;
+  const { supply, nozzle, seal, print, reservoir, container } = doc;
 
   // Heads: a pressure becomes a height with the liquid's density (H = p / (rho g)).
   const headMaxResult = resolveHead(supply.headMax!, rho, S.headMax, STANDARD_GRAVITY);
@@ -284,13 +361,8 @@ export const designSchema = section(documentShape).transform((doc, ctx): ParsedD
       `${nozzle.orifice.shown} is not smaller than nozzle.sealDiameter (${normalizedText(nozzle.sealDiameter.si, 'mm')}); the orifice must be narrower than the lip that seals around it.`);
   }
 
-  const halfPadMm = fromSi(seal.padThickness.si, 'mm') / 2;
-  // Not given: the default 0.5 mm, or half a pad thinner than 1 mm (a default the grower never typed must not be refused).
-  const defaultIndentationM = Math.min(toSi(parseFloat(D.seal.indentation), 'mm'), seal.padThickness.si / 2);
-  const indentation = seal.indentation ?? { si: defaultIndentationM, shown: normalizedText(defaultIndentationM, 'mm') };
-  const indentationSpec = { ...S.indentation, max: halfPadMm, label: `the pad indentation (at most half the ${normalizedText(seal.padThickness.si, 'mm')} pad)` };
-  const indentationProblem = checkRange(indentation.si, indentation.shown, indentationSpec);
-  if (indentationProblem) fail(ctx, ['seal', 'indentation'], undefined, indentationProblem);
+  const retiredFields = (['preload', 'indentation'] as const).filter((k) => seal[k] !== null).map((k) => `seal.${k}`);
+  const padDensityKgM3 = seal.padDensity?.si ?? (seal.pad === null ? PADS[0] : findPad(seal.pad)!).densityKgM3;
 
   const calibration: CalibrationPoint[] = [];
   const calibrationText: { head: string; mass: string }[] = [];
@@ -302,10 +374,7 @@ export const designSchema = section(documentShape).transform((doc, ctx): ParsedD
   });
   // The sizing core fits F = F_pre + A_eff rho g H to the bench points; a fit whose area is not positive
   // (masses that fall as the head rises) cannot size a float, so it is refused here, at the door.
-  if (calibration.length > 0 && calibration.length === (seal.calibration ?? []).length) {
-    const fit = calibrationFitProblem(calibration, calibrationText, rho, seal.preload.si);
-    if (fit) fail(ctx, ['seal', 'calibration'], undefined, fit);
-  }
+  const calibrationComplete = calibration.length > 0 && calibration.length === (seal.calibration ?? []).length;
 
   const lineMm = fromSi(print.lineWidth.si, 'mm');
   const wallSpec = { ...S.wall, min: 2 * lineMm, minExclusive: false, label: `the wall thickness (at least two ${formatNumber(lineMm)} mm line widths)` };
@@ -323,6 +392,7 @@ export const designSchema = section(documentShape).transform((doc, ctx): ParsedD
 
   const area = reservoir?.area ?? null;
   const rise = reservoir?.rise ?? null;
+  const overflow = container?.overflow ?? null;
   const inputs: DesignInputs = {
     headMaxM: headMaxResult.measured.si,
     headMinM: headMin.si,
@@ -331,10 +401,9 @@ export const designSchema = section(documentShape).transform((doc, ctx): ParsedD
     liquidViscosityPaS: doc.liquid.viscosity.si,
     orificeM: nozzle.orifice.si,
     sealDiameterM: nozzle.sealDiameter.si,
-    preloadN: seal.preload.si,
+    padName: seal.pad,
     padThicknessM: seal.padThickness.si,
-    indentationM: indentation.si,
-    padDensityKgM3: seal.padDensity.si,
+    padDensityKgM3,
     calibration,
     materialName: print.material.name,
     materialDensityKgM3: print.material.densityKgM3,
@@ -346,7 +415,21 @@ export const designSchema = section(documentShape).transform((doc, ctx): ParsedD
     tubeLengthM: supply.tubeLength.si,
     reservoirAreaM2: area ? area.si : null,
     reservoirRiseM: rise ? rise.si : null,
+    overflowM: overflow ? overflow.si : null,
+    bedWidthM: print.bed.widthM,
+    bedDepthM: print.bed.depthM,
+    retiredFields,
   };
+  // The sizing fits F = F_seat + A rho g H to the bench points (one point: A alone, F_seat from the pad model);
+  // a fit whose area is not positive (masses that fall as the head rises) cannot size a float: refused at the door.
+  if (calibrationComplete) {
+    const seatN = chooseSeal({ ...inputs, calibration: [] }).seatN;
+    const fit = calibrationFitProblem(calibration, calibrationText, rho, seatN);
+    if (fit) {
+      fail(ctx, ['seal', 'calibration'], undefined, fit);
+      return z.NEVER;
+    }
+  }
   const U = FIELD_UNITS;
   const document: NormalizedDoc = {
     ...(doc.name !== undefined ? { name: doc.name } : {}),
@@ -367,10 +450,9 @@ export const designSchema = section(documentShape).transform((doc, ctx): ParsedD
       sealDiameter: normalizedText(inputs.sealDiameterM, U['nozzle.sealDiameter']),
     },
     seal: {
-      preload: normalizedText(inputs.preloadN, U['seal.preload']),
+      pad: inputs.padName ?? AUTO_PAD,
       padThickness: normalizedText(inputs.padThicknessM, U['seal.padThickness']),
-      indentation: normalizedText(inputs.indentationM, U['seal.indentation']),
-      padDensity: normalizedText(inputs.padDensityKgM3, U['seal.padDensity']),
+      ...(seal.padDensity ? { padDensity: normalizedText(inputs.padDensityKgM3, U['seal.padDensity']) } : {}),
       calibration: calibrationText,
     },
     print: {
@@ -380,28 +462,30 @@ export const designSchema = section(documentShape).transform((doc, ctx): ParsedD
       },
       wall: normalizedText(inputs.wallM, U['print.wall']),
       lineWidth: normalizedText(inputs.lineWidthM, U['print.lineWidth']),
+      bed: `${formatNumber(fromSi(inputs.bedWidthM, 'mm'))} x ${normalizedText(inputs.bedDepthM, U['print.bed.depth'])}`,
     },
     limits: { maxOuterDiameter: normalizedText(inputs.maxOuterDiameterM, U['limits.maxOuterDiameter']) },
     reserve: Number(formatNumber(inputs.reserve, 10)),
     ...(area && rise
       ? { reservoir: { area: normalizedText(area.si, U['reservoir.area']), rise: normalizedText(rise.si, U['reservoir.rise']) } }
       : {}),
+    ...(overflow ? { container: { overflow: normalizedText(overflow.si, U['container.overflow']) } } : {}),
   };
   return { inputs, document };
 });
 
 /** Why the bench points cannot be fitted (fitted seal area not positive), or null when they can. */
-function calibrationFitProblem(points: CalibrationPoint[], text: { head: string; mass: string }[], rho: number, preloadN: number): string | null {
+function calibrationFitProblem(points: CalibrationPoint[], text: { head: string; mass: string }[], rho: number, seatN: number): string | null {
   let areaM2: number;
   try {
-    areaM2 = fitSealCalibration(points, rho, preloadN).sealAreaM2;
+    areaM2 = fitSealCalibration(points, rho, seatN).sealAreaM2;
   } catch {
     areaM2 = Number.NaN;
   }
   if (areaM2 > 0) return null;
   const shown = text.slice(0, 4).map((p) => `${p.mass} at ${p.head}`).join(', ') + (text.length > 4 ? ', ...' : '');
   const area = Number.isFinite(areaM2) ? ` (fitted seal area ${formatNumber(areaM2 * 1e6)} mm2)` : '';
-  return `${shown} do not rise with head${area}; the mass that stops the flow must grow with the head (fitted seal area more than 0 mm2${points.length === 1 || new Set(points.map((p) => p.headM)).size === 1 ? `, and above the ${formatNumber(preloadN)} N preload` : ''}): check the heads and masses.`;
+  return `${shown} do not rise with head${area}; the mass that stops the flow must grow with the head (fitted seal area more than 0 mm2${points.length === 1 || new Set(points.map((p) => p.headM)).size === 1 ? `, and above the pad's ${formatNumber(Number(seatN.toPrecision(3)))} N seating force` : ''}): check the heads and masses.`;
 }
 
 export type DesignParse = { ok: true; inputs: DesignInputs; document: NormalizedDoc } | { ok: false; errors: FieldError[] };

@@ -50,3 +50,22 @@ export const DRAIN_HEAD_LOSS_M = 0.002;
 
 /** Hold-down safety factor on the flood uplift (DESIGN: 1.5 F_up - W). */
 export const HOLD_DOWN_FACTOR = 1.5;
+
+/**
+ * Indentation that seats a pad on a printed nozzle lip with no pressure behind it, m.
+ * The lip's face is the first layer on the bed: its ridges and out-of-flatness are about
+ * 0.1 mm (from memory); twice that conforms the pad across the whole ring (common practice).
+ */
+export const MIN_SEATING_INDENTATION_M = 0.2e-3;
+
+/** Largest compressive strain of a pad in service, with the hard stop (common practice against compression set). */
+export const PAD_STOP_STRAIN = 0.25;
+
+/**
+ * Largest strain at the tight seal at full tank when the sizing chooses the pad: 5 % short of the
+ * stop, so a pad at the soft side of its grade still seals before the stop carries the push (our choice).
+ */
+export const AUTO_PAD_STRAIN = 0.2;
+
+/** Least height of the container's overflow above the tight shut-off at full tank, m (DESIGN second part). */
+export const OVERFLOW_MARGIN_M = 0.01;

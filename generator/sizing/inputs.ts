@@ -25,15 +25,13 @@ export interface DesignInputs {
   orificeM: number;
   /** outer diameter of the nozzle lip that presses the pad, m (d_s) */
   sealDiameterM: number;
-  /** force to indent the pad with no pressure, N (F_pre) */
-  preloadN: number;
+  /** seal pad: a name from the pad table (generator/sizing/seal/pads.ts), or null to let the sizing choose */
+  padName: string | null;
   /** seal pad thickness, m (t_pad) */
   padThicknessM: number;
-  /** pad indentation at seal, m (delta) */
-  indentationM: number;
-  /** pad material density, kg/m3 (for the float's mass) */
+  /** pad material density, kg/m3 (for the float's mass): the document's, else the pad's own from the table */
   padDensityKgM3: number;
-  /** bench points; when present they replace preload and seal area by a fit */
+  /** bench points; when present they replace the seating force and the model's area by a fit */
   calibration: CalibrationPoint[];
   /** print material name (as given, or "custom") */
   materialName: string;
@@ -55,4 +53,11 @@ export interface DesignInputs {
   reservoirAreaM2: number | null;
   /** reservoir rise for fill time, m, or null when not given */
   reservoirRiseM: number | null;
+  /** container overflow height above its floor, m, or null when not given */
+  overflowM: number | null;
+  /** printer bed, m (plates never exceed it) */
+  bedWidthM: number;
+  bedDepthM: number;
+  /** document fields that were read but no longer mean anything (a first-version file); the sizing warns */
+  retiredFields: string[];
 }

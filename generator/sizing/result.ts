@@ -128,12 +128,42 @@ export interface SizingSuccess {
   closingForce: {
     atHeadMaxN: number;
     atHeadMinN: number;
+    /** seating force F_seat (the bench fit's intercept when calibrated); same as seatN */
     preloadN: number;
-    /** effective seal area used (from d_s or the calibration fit) */
+    /** area the pressure acts on in the force model (gasket-factor area, or the calibration fit); same as modelAreaMm2 */
     sealAreaMm2: number;
     /** d_s equivalent to that area */
     equivalentSealDiameterMm: number;
     fromCalibration: boolean;
+    /** area in the tight-seal force model: (pi/4) G^2 + 2 pi b G m, or the bench fit's */
+    modelAreaMm2: number;
+    /** seating force: max(y on the land, push that seats the pad 0.2 mm), or the bench fit's intercept */
+    seatN: number;
+    /** film force area of the land and the bore area, for comparison */
+    filmAreaMm2: number;
+    boreAreaMm2: number;
+  };
+  seal: {
+    /** the pad's table name, e.g. "sponge grade 2" */
+    padMaterial: string;
+    /** what the pad is, with the source of its stiffness */
+    padDescription: string;
+    /** true when the sizing chose the pad (document: "auto" or nothing) */
+    padChosen: boolean;
+    /** compressive modulus used by the contact model, kPa */
+    padStiffnessKpa: number;
+    gasketFactor: number;
+    seatingStressKpa: number;
+    padThicknessMm: number;
+    /** indentation and strain at the tight seal at H_max */
+    indentationMm: number;
+    strainAtSeal: number;
+    /** indentation at which the hard stop takes the float's push (25 % of the pad) */
+    stopIndentationMm: number;
+    /** largest strain in service (tank empty with the reservoir full; flooded), as the pad sees it behind the stop */
+    worstStrain: number;
+    /** the same without a stop: what the float alone would do to the pad */
+    worstStrainWithoutStop: number;
   };
   pressure: { atHeadMaxKPa: number; atHeadMinKPa: number };
   float: {
@@ -151,6 +181,14 @@ export interface SizingSuccess {
     /** submerged depth when sealed at H_max and H_min */
     sealDepthAtHeadMaxMm: number;
     sealDepthAtHeadMinMm: number;
+    /** shell thickness (four extrusion lines) */
+    shellMm: number;
+    /** printed float alone, dry, before the pad goes in: the weigh-soak-weigh test's reference */
+    dryMassG: number;
+    /** water the float can take in before it can no longer shut tight at full tank, mL */
+    leakToleranceMl: number;
+    /** rise of the tight shut-off level at full tank per mL taken in, mm */
+    levelRisePerMlMm: number;
   };
   housing: {
     boreMm: number;
@@ -169,6 +207,8 @@ export interface SizingSuccess {
     liftOffMm: number;
     firstTouchMm: number;
     minimumReachableMm: number;
+    /** the container's overflow height, when given (the tight shut-off at full tank stays 10 mm below it) */
+    overflowMm: number | null;
   };
   flow: {
     atHeadMaxLph: number;

@@ -1,4 +1,4 @@
-import { FILAMENT_DIAMETER_MM, HOLD_DOWN_FACTOR, PART_SIZE_CAP_MM, PRINT_CLEARANCE_MM, STANDARD_GRAVITY, STEEL_DENSITY } from './constants.ts';
+import { FILAMENT_DIAMETER_MM, HOLD_DOWN_FACTOR, OVERFLOW_MARGIN_M, PAD_STOP_STRAIN, PART_SIZE_CAP_MM, PRINT_CLEARANCE_MM, STANDARD_GRAVITY, STEEL_DENSITY } from './constants.ts';
 import { depthForForceMm } from './float/depth-for-force.ts';
 import { circleArea } from './hydrostatics/circle-area.ts';
 import { pressurePa } from './hydrostatics/pressure-pa.ts';
@@ -7,6 +7,9 @@ import { designBasis, type DesignBasis } from './layout/design-basis.ts';
 import { CONSTRAINT_TEXT } from './layout/constraint-text.ts';
 import { searchSize } from './layout/search-size.ts';
 import { nozzleThinnestWallMm } from './parts/nozzle-spec.ts';
+import { landStrain } from './seal/land-strain.ts';
+import { PADS } from './seal/pads.ts';
+import { leakToleranceMl } from './float/leak-tolerance-ml.ts';
 import type { Candidate } from './layout/evaluate-candidate.ts';
 import type { DesignInputs } from './inputs.ts';
 import type { SizingFailure, SizingResult, SizingSuccess, Warning, WayOut } from './result.ts';
@@ -54,11 +57,46 @@ function nozzleProblems(b: DesignBasis): { reasons: Warning[]; waysOut: WayOut[]
   return { reasons, waysOut };
 }
 
+/** The pad's own check: at the tight seal at H_max it must not already lean on the hard stop. */
+function padOnStop(b: DesignBasis): boolean {
+  return b.indentationMm > b.padStopIndentationMm + 1e-9;
+}
+
+function padProblems(b: DesignBasis): { reasons: Warning[]; waysOut: WayOut[] } {
+  if (!padOnStop(b)) return { reasons: [], waysOut: [] };
+  const inp = b.inputs;
+  const reasons: Warning[] = [{
+    code: 'pad-on-stop',
+    message: `The ${b.pad.name} pad (${fmt(b.padStiffnessKpa, 0)} kPa) is squeezed ${fmt(b.indentationMm, 2)} mm at the tight seal at ${fmt(inp.headMaxM, 2)} m of head, past the hard stop at ${fmt(b.padStopIndentationMm, 2)} mm (${fmt(PAD_STOP_STRAIN * 100, 0)} % of its ${fmt(b.padThicknessMm, 2)} mm): the seal would lean on the stop instead of the pad.`,
+  }];
+  const waysOut: WayOut[] = [];
+  const stiffer = PADS.find((p) => p.stiffnessPa > b.pad.stiffnessPa && works({ ...inp, padName: p.name }));
+  if (stiffer) waysOut.push({ field: 'seal.pad', value: stiffer.name, message: `a stiffer pad: ${stiffer.name}` });
+  if (inp.padName !== null && works({ ...inp, padName: null })) {
+    waysOut.push({ field: 'seal.pad', value: 'auto', message: 'let floatwright choose the pad' });
+  }
+  const maxThickness = 0.01;
+  if (works({ ...inp, padThicknessM: maxThickness })) {
+    // thicker pads seat with a smaller strain; find the thinnest that works (bisection on the 0.5 mm steps sponge comes in)
+    let t = Math.ceil(inp.padThicknessM * 2e3) / 2e3;
+    while (t < maxThickness && !works({ ...inp, padThicknessM: t })) t += 0.0005;
+    waysOut.push({ field: 'seal.padThickness', value: `${fmt(t * 1e3, 1)} mm`, message: `a pad at least ${fmt(t * 1e3, 1)} mm thick` });
+  }
+  return { reasons, waysOut };
+}
+
+/** Checks that need no float: the nozzle's walls and the pad against its stop. */
+function basisProblems(b: DesignBasis): { reasons: Warning[]; waysOut: WayOut[] } {
+  const nozzle = nozzleProblems(b);
+  if (nozzle.reasons.length) return nozzle;
+  return padProblems(b);
+}
+
 /** Whether some float works for these inputs (used to search for ways out). */
 function works(inp: DesignInputs): boolean {
   try {
     const b = designBasis(inp);
-    if (nozzleProblems(b).reasons.length) return false;
+    if (nozzleProblems(b).reasons.length || padOnStop(b)) return false;
     const q = flowAt(inp, inp.headMaxM);
     return searchSize(b, drainAreaRequiredM2({ flowM3s: q.flowM3s }) * 1e6).best !== null;
   } catch {
@@ -123,10 +161,29 @@ function failure(b: DesignBasis, outcome: ReturnType<typeof searchSize>): Sizing
   return { ok: false, reasons, waysOut, warnings: [] };
 }
 
+/** The tight shut-off at full tank comes within 10 mm of the container's overflow: refused, with what works. */
+function overflowFailure(inp: DesignInputs, shutOffMaxMm: number): SizingFailure {
+  const overflowMm = inp.overflowM! * 1e3;
+  const marginMm = OVERFLOW_MARGIN_M * 1e3;
+  const reasons: Warning[] = [{
+    code: 'overflow',
+    message: `At full tank the valve shuts tight at ${fmt(shutOffMaxMm)} mm, within ${fmt(marginMm, 0)} mm of the container's overflow at ${fmt(overflowMm)} mm: the container would spill before the valve shut.`,
+  }];
+  const waysOut: WayOut[] = [];
+  // the shut-off at full tank is the target (the layout places the nozzle so); keep it the margin below the overflow
+  const lower = Math.floor((overflowMm - marginMm - (shutOffMaxMm - inp.targetLevelM * 1e3)) * 2) / 2;
+  if (lower >= 5 && works({ ...inp, targetLevelM: lower / 1e3, overflowM: null })) {
+    waysOut.push({ field: 'level.target', value: `${fmt(lower)} mm`, message: `a target level of at most ${fmt(lower)} mm` });
+  }
+  const higher = Math.ceil(shutOffMaxMm + marginMm);
+  waysOut.push({ field: 'container.overflow', value: `${higher} mm`, message: `an overflow at least ${higher} mm above the container floor` });
+  return { ok: false, reasons, waysOut, warnings: [] };
+}
+
 function warningsFor(b: DesignBasis, c: Candidate, tiltGapMm: number, netWeightN: number, ballastG: number, lowFlow: boolean): Warning[] {
   const inp = b.inputs;
   const w: Warning[] = [];
-  const deltaMm = inp.indentationM * 1e3;
+  const deltaMm = b.indentationMm;
   if (tiltGapMm > deltaMm / 2) {
     w.push({
       code: 'tilt-gap',
@@ -154,6 +211,24 @@ function warningsFor(b: DesignBasis, c: Candidate, tiltGapMm: number, netWeightN
   if (lowFlow) {
     w.push({ code: 'low-flow', message: 'At the lowest tank level the valve passes under 1 L/h: refilling will be slow.' });
   }
+  if (b.fromCalibration && (b.sealAreaM2 < b.boreAreaM2 || b.sealAreaM2 > 2 * circleArea(inp.sealDiameterM))) {
+    w.push({
+      code: 'calibration-area',
+      message: `The bench points give a seal area of ${fmt(b.sealAreaM2 * 1e6, 1)} mm2, outside the bore's ${fmt(b.boreAreaM2 * 1e6, 1)} mm2 to twice the lip's ${fmt(2 * circleArea(inp.sealDiameterM) * 1e6, 1)} mm2: the points are more likely wrong than the pad; repeat them.`,
+    });
+  }
+  if (inp.retiredFields.length) {
+    w.push({
+      code: 'retired-fields',
+      message: `${inp.retiredFields.join(' and ')} no longer count${inp.retiredFields.length === 1 ? 's' : ''} and ${inp.retiredFields.length === 1 ? 'was' : 'were'} ignored: the pad (seal.pad) now sets the seating force and the squeeze.`,
+    });
+  }
+  if (!b.padChosen && b.pad.kind === 'rubber') {
+    w.push({
+      code: 'rubber-pad',
+      message: `A ${b.pad.name} pad needs ${fmt(b.preloadN, 2)} N just to seat on the lip and gives only ${fmt(b.indentationMm, 2)} mm; a closed-cell sponge (seal.pad "auto") seals with a smaller float.`,
+    });
+  }
   if (b.fromCalibration && b.calibrationRmsN > 0.05 * b.forceAtHeadMaxN) {
     w.push({ code: 'calibration-scatter', message: 'The bench points scatter more than 5 % about the fitted line: repeat the measurements.' });
   }
@@ -170,8 +245,8 @@ function warningsFor(b: DesignBasis, c: Candidate, tiltGapMm: number, netWeightN
  */
 export function sizeDesign(inp: DesignInputs): SizingResult {
   const b = designBasis(inp);
-  const nozzle = nozzleProblems(b);
-  if (nozzle.reasons.length) return { ok: false, reasons: nozzle.reasons, waysOut: nozzle.waysOut, warnings: [] };
+  const early = basisProblems(b);
+  if (early.reasons.length) return { ok: false, reasons: early.reasons, waysOut: early.waysOut, warnings: [] };
 
   const rho = inp.liquidDensityKgM3;
   const qMax = flowAt(inp, inp.headMaxM);
@@ -182,11 +257,22 @@ export function sizeDesign(inp: DesignInputs): SizingResult {
   if (!c) return failure(b, outcome);
 
   const f = c.float;
-  const depthAt = (forceN: number) => depthForForceMm(f, forceN, c.massKg, rho);
-  const deltaMm = inp.indentationM * 1e3;
+  const depthAt = (forceN: number, massKg = c.massKg) => depthForForceMm(f, forceN, massKg, rho);
+  const deltaMm = b.indentationMm;
   const floatingDepth = depthAt(0);
   const shutOffMax = c.sealBottomMm + depthAt(b.forceAtHeadMaxN);
   const shutOffMin = c.sealBottomMm + depthAt(b.forceAtHeadMinN);
+  if (inp.overflowM !== null && shutOffMax > (inp.overflowM - OVERFLOW_MARGIN_M) * 1e3 + 1e-9) return overflowFailure(inp, shutOffMax);
+
+  // The pad in service (DESIGN second part): with the tank empty and the reservoir full the float's whole
+  // push F_seal(H_max) bears on the land; flooded, its whole lift F_avail. The stop caps the strain at 25 %.
+  const strainUnder = (forceN: number) =>
+    landStrain({ forceN, pressurePa: 0, boreAreaM2: b.boreAreaM2, landAreaM2: b.landAreaM2, stiffnessPa: b.pad.stiffnessPa });
+  const worstWithoutStop = Math.max(b.strainAtSeal, strainUnder(b.forceAtHeadMaxN), strainUnder(c.availableN));
+  // Water taken in adds rho V of mass; the float sinks until it displaces V more. Per mL, from the last
+  // 0.01 mL before the seal (a backward step, so a float with no leak tolerance left still has a figure).
+  const stepM3 = 1e-8;
+  const levelRisePerMl = (depthAt(b.forceAtHeadMaxN) - depthAt(b.forceAtHeadMaxN, c.massKg - rho * stepM3)) / (stepM3 * 1e6);
 
   const rhoM = inp.materialDensityKgM3;
   const gramsOf = (mm3: number) => mm3 * 1e-9 * rhoM * 1e3;
@@ -227,6 +313,24 @@ export function sizeDesign(inp: DesignInputs): SizingResult {
       sealAreaMm2: b.sealAreaM2 * 1e6,
       equivalentSealDiameterMm: b.equivalentSealDiameterMm,
       fromCalibration: b.fromCalibration,
+      modelAreaMm2: b.sealAreaM2 * 1e6,
+      seatN: b.preloadN,
+      filmAreaMm2: b.filmAreaM2 * 1e6,
+      boreAreaMm2: b.boreAreaM2 * 1e6,
+    },
+    seal: {
+      padMaterial: b.pad.name,
+      padDescription: b.pad.basis,
+      padChosen: b.padChosen,
+      padStiffnessKpa: b.padStiffnessKpa,
+      gasketFactor: b.pad.gasketFactor,
+      seatingStressKpa: b.pad.seatingStressPa / 1e3,
+      padThicknessMm: b.padThicknessMm,
+      indentationMm: b.indentationMm,
+      strainAtSeal: b.strainAtSeal,
+      stopIndentationMm: b.padStopIndentationMm,
+      worstStrain: Math.min(worstWithoutStop, PAD_STOP_STRAIN),
+      worstStrainWithoutStop: worstWithoutStop,
     },
     pressure: { atHeadMaxKPa: pressurePa(inp.headMaxM, rho) / 1e3, atHeadMinKPa: pressurePa(inp.headMinM, rho) / 1e3 },
     float: {
@@ -240,6 +344,10 @@ export function sizeDesign(inp: DesignInputs): SizingResult {
       reserve: c.reserve,
       sealDepthAtHeadMaxMm: depthAt(b.forceAtHeadMaxN),
       sealDepthAtHeadMinMm: depthAt(b.forceAtHeadMinN),
+      shellMm: f.shellMm,
+      dryMassG: floatPlasticG,
+      leakToleranceMl: leakToleranceMl(c.availableN, b.forceAtHeadMaxN, rho),
+      levelRisePerMlMm: levelRisePerMl,
     },
     housing: {
       boreMm: c.housing.boreMm,
@@ -265,6 +373,7 @@ export function sizeDesign(inp: DesignInputs): SizingResult {
       liftOffMm: c.pinTopMm + floatingDepth,
       firstTouchMm: c.sealBottomMm - deltaMm + floatingDepth,
       minimumReachableMm: c.minimumReachableMm,
+      overflowMm: inp.overflowM === null ? null : inp.overflowM * 1e3,
     },
     flow: {
       atHeadMaxLph: qMax.flowLph,

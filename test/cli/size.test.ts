@@ -71,10 +71,26 @@ describe('floatwright size --design PRESET --json', () => {
     expect(result.levels.shutOffAtHeadMaxMm).toBeCloseTo(result.levels.targetMm, 6);
   });
 
-  it('rooftop-tubs: closing force at 2.2 m equals rho g H (pi/4) d_s^2 + F_pre (hydrostatics, p A)', async () => {
+  it('rooftop-tubs: tight-seal force at 2.2 m by the gasket-factor form on a grade 2 sponge (ASME VIII-1 App. 2; ASTM D1056)', async () => {
     const result = json(runs.get('rooftop-tubs')!);
-    const expected = 998.2 * 9.80665 * 2.2 * (Math.PI / 4) * 0.005 ** 2 + 0.1; // 0.5229 N
+    // Lip 2 / 5 mm: G = 3.5 mm, b = 0.75 mm; m = 0.5 gives 17.87 mm2 (ASME BPVC VIII-1 Mandatory App. 2 form; m from memory).
+    const area = (Math.PI / 4) * 3.5 ** 2 + 2 * Math.PI * 0.75 * 3.5 * 0.5; // mm2
+    expect(area).toBeCloseTo(17.87, 2);
+    const ring = Math.PI * 3.5 * 1.5; // land pi G 2b = (pi/4)(5^2 - 2^2) = 16.49 mm2
+    const p = 998.2 * 9.80665 * 2.2; // Pa, rho g H
+    // Grade 1 sponge (14-34 kPa at 25 %, ASTM D1056 from memory; middle 24 kPa, so 96 kPa secant) would be squeezed
+    // past the 20 % the choice allows: land stress (F - p A_o)/A_land over E, seated by 0.2 mm of the 3 mm pad.
+    const strain = (E: number) => ((p * area * 1e-6 + E * (0.2 / 3) * ring * 1e-6 - p * Math.PI * 1e-6) / (ring * 1e-6)) / E;
+    expect(strain(96e3)).toBeGreaterThan(0.2);
+    expect(strain(192e3)).toBeLessThan(0.2); // grade 2: 34-62 kPa, middle 48 kPa, 192 kPa secant
+    expect(result.seal.padMaterial).toBe('sponge grade 2');
+    const expected = p * area * 1e-6 + 192e3 * (0.2 / 3) * ring * 1e-6; // 0.385 + 0.211 = 0.596 N
     expect(result.closingForce.atHeadMaxN).toBeCloseTo(expected, 6);
+    expect(result.closingForce.seatN).toBeCloseTo(192e3 * (0.2 / 3) * ring * 1e-6, 9);
+    expect(result.closingForce.modelAreaMm2).toBeCloseTo(area, 9);
+    expect(result.seal.indentationMm).toBeCloseTo(strain(192e3) * 3, 9);
+    expect(result.seal.stopIndentationMm).toBeCloseTo(0.75, 12); // 25 % of 3 mm (common practice)
+    expect(result.float.shellMm).toBeCloseTo(4 * 0.45, 12); // four 0.45 mm lines
     expect(result.inputs.headMinM).toBe(1.6);
     expect(result.inputs.materialName).toBe('PETG');
   });

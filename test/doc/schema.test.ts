@@ -42,10 +42,9 @@ describe('defaults', () => {
       liquidViscosityPaS: 1.0016e-3,
       orificeM: 0.002,
       sealDiameterM: 0.005,
-      preloadN: 0.1,
+      padName: null, // "auto": the sizing chooses the pad
       padThicknessM: 0.003,
-      indentationM: 0.0005,
-      padDensityKgM3: 1200,
+      padDensityKgM3: 200, // closed-cell sponge, about 0.2 g/cm3 (from memory), the kind "auto" chooses
       calibration: [],
       materialName: 'PETG',
       materialDensityKgM3: 1270,
@@ -57,6 +56,10 @@ describe('defaults', () => {
       tubeLengthM: 5,
       reservoirAreaM2: null,
       reservoirRiseM: null,
+      overflowM: null,
+      bedWidthM: 0.22, // 220 x 220 mm, a common hobby printer bed (common practice)
+      bedDepthM: 0.22,
+      retiredFields: [],
     });
   });
 
@@ -118,7 +121,7 @@ describe('defaults', () => {
     expect(inputs.targetLevelM).toBe(0.04);
     expect(inputs.liquidDensityKgM3).toBe(1000);
     expect(inputs.liquidViscosityPaS).toBeCloseTo(1.2e-3, 15);
-    expect(inputs.preloadN).toBe(0.2);
+    expect(inputs.retiredFields).toEqual(['seal.preload']);
     expect(inputs.padDensityKgM3).toBeCloseTo(300, 9);
     expect(inputs.calibration).toEqual([{ headM: 1, massKg: 0.04 }]);
     expect(inputs.materialName).toBe('Spool 7');
@@ -134,12 +137,12 @@ describe('defaults', () => {
     expect(brine.inputs.headMaxM).toBeCloseTo(20000 / (1100 * 9.80665), 12);
   });
 
-  it('accepts viscosity as mPa s, Pa s or cP; preload as N, gf or g', () => {
+  it('accepts viscosity as mPa s, Pa s or cP; a first-version preload as N, gf or g (read, then ignored)', () => {
     for (const v of ['1.2 mPa s', '0.0012 Pa s', '1.2 cP']) {
       expect(ok(parseDesign(withField('liquid.viscosity', v))).inputs.liquidViscosityPaS).toBeCloseTo(1.2e-3, 15);
     }
     for (const p of ['0.0980665 N', '10 gf', '10 g']) {
-      expect(ok(parseDesign(withField('seal.preload', p))).inputs.preloadN).toBeCloseTo(0.0980665, 12);
+      expect(ok(parseDesign(withField('seal.preload', p))).inputs.retiredFields).toEqual(['seal.preload']);
     }
   });
 
@@ -203,7 +206,6 @@ describe('refusals name the field, the value and the range', () => {
 
   it('checks the fields that depend on each other', () => {
     expect(errorFor(withField('nozzle.orifice', '5 mm'), 'nozzle.orifice')).toContain('nozzle.sealDiameter (5 mm)');
-    expect(errorFor(withField('seal.indentation', '2 mm'), 'seal.indentation')).toContain('from 0.05 mm to 1.5 mm');
     expect(errorFor(withField('print.wall', '0.8 mm'), 'print.wall')).toContain('from 0.9 mm to 10 mm');
     expect(errorFor(withField('reservoir', { area: '0.1 m2' }), 'reservoir.rise')).toContain('reservoir.area');
     expect(errorFor(withField('reservoir', { rise: '10 mm' }), 'reservoir.area')).toContain('missing');
@@ -304,13 +306,45 @@ describe('reusable field machinery (for later documents)', () => {
   });
 });
 
-describe('the indentation default follows a thin pad', () => {
-  // common practice: a pad is indented at most half its thickness; the default 0.5 mm halves for a pad under 1 mm
-  it('takes half of a 0.8 mm pad when the indentation is not given, and refuses a given one that is too deep', () => {
-    const thin = parseDesign({ supply: { headMax: '1 m' }, level: { target: '40 mm' }, seal: { padThickness: '0.8 mm' } });
-    expect(thin.ok && thin.inputs.indentationM).toBeCloseTo(0.0004, 12);
-    const deep = parseDesign({ supply: { headMax: '1 m' }, level: { target: '40 mm' }, seal: { padThickness: '0.8 mm', indentation: '0.5 mm' } });
-    expect(deep.ok).toBe(false);
-    if (!deep.ok) expect(deep.errors[0].field).toBe('seal.indentation');
+describe('seal.pad, container.overflow, print.bed', () => {
+  it('takes a pad from the table by name, in any case and spacing; "auto" or nothing lets the sizing choose', () => {
+    expect(ok(parseDesign(withField('seal.pad', 'Sponge-Grade-2'))).inputs.padName).toBe('sponge grade 2');
+    expect(ok(parseDesign(withField('seal.pad', 'rubber 50'))).inputs.padName).toBe('rubber 50A');
+    expect(ok(parseDesign(withField('seal.pad', 'AUTO'))).inputs.padName).toBeNull();
+    expect(ok(parseDesign(withField('seal.pad', 'rubber 50A'))).document.seal.pad).toBe('rubber 50A');
+    // a solid rubber's density, about 1.2 g/cm3 (from memory), unless the document gives one
+    expect(ok(parseDesign(withField('seal.pad', 'rubber 50A'))).inputs.padDensityKgM3).toBeCloseTo(1200, 9);
+  });
+  it('refuses an unknown pad and lists the known ones', () => {
+    const message = errorFor(withField('seal.pad', 'felt'), 'seal.pad');
+    expect(message).toContain('"felt"');
+    for (const name of ['auto', 'sponge grade 0', 'sponge grade 5', 'rubber 30A', 'rubber 70A']) expect(message).toContain(name);
+    expect(errorFor(withField('seal.pad', 3), 'seal.pad')).toContain('not a pad');
+  });
+  it('reads a first-version file: seal.preload and seal.indentation are checked, then ignored (listed for a warning)', () => {
+    const old = ok(parseDesign({ ...MINIMAL, seal: { preload: '0.1 N', padThickness: '3 mm', indentation: '0.5 mm', padDensity: '1.2 g/cm3' } }));
+    expect(old.inputs.retiredFields).toEqual(['seal.preload', 'seal.indentation']);
+    expect(old.inputs.padDensityKgM3).toBeCloseTo(1200, 9);
+    expect(Object.keys(old.document.seal)).not.toContain('preload');
+    expect(Object.keys(old.document.seal)).not.toContain('indentation');
+    expect(errorFor({ ...MINIMAL, seal: { indentation: '-1 mm' } }, 'seal.indentation')).toContain('-1 mm');
+  });
+  it('takes an overflow height and writes it back', () => {
+    const d = ok(parseDesign({ ...MINIMAL, container: { overflow: '3 in' } }));
+    expect(d.inputs.overflowM).toBeCloseTo(0.0762, 12); // 1 in = 25.4 mm exactly (NIST SP 811)
+    expect(d.document.container).toEqual({ overflow: '76.2 mm' });
+    expect(errorFor({ ...MINIMAL, container: { overflow: '5 mm' } }, 'container.overflow')).toContain('from 10 mm');
+  });
+  it('takes the bed as "W x D unit", one unit each, or { width, depth }; refuses a bed that is not one', () => {
+    const bed = (value: unknown) => ok(parseDesign(withField('print.bed', value))).inputs;
+    expect(bed('250 x 210 mm')).toMatchObject({ bedWidthM: 0.25, bedDepthM: 0.21 });
+    expect(bed('25 cm x 210 mm')).toMatchObject({ bedWidthM: 0.25, bedDepthM: 0.21 });
+    expect(bed('10x10 in').bedWidthM).toBeCloseTo(0.254, 12); // NIST SP 811: 1 in = 25.4 mm
+    expect(bed({ width: '300 mm', depth: 200 })).toMatchObject({ bedWidthM: 0.3, bedDepthM: 0.2 });
+    expect(ok(parseDesign(withField('print.bed', '250 x 210 mm'))).document.print.bed).toBe('250 x 210 mm');
+    expect(ok(parseDesign(MINIMAL)).document.print.bed).toBe('220 x 220 mm');
+    expect(errorFor(withField('print.bed', '220 mm'), 'print.bed')).toContain('"220 x 220 mm"');
+    expect(errorFor(withField('print.bed', '20 x 220 mm'), 'print.bed')).toContain('from 50 mm');
+    expect(errorFor(withField('print.bed', { width: '220 mm' }), 'print.bed.depth')).toBeTruthy();
   });
 });

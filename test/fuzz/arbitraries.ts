@@ -33,6 +33,9 @@ const POUND_G = 453.59237; // NIST SP 811
 const PSI_PA = 6894.757; // NIST SP 811 App. B.9
 
 /** Every print material name of the table, with spellings a grower types (DESIGN materials table). */
+/** Pad names as a grower may type them (the table's own rows; spelled freely), and "auto". */
+export const PAD_SPELLINGS: readonly string[] = ['auto', 'AUTO', 'sponge grade 0', 'Sponge Grade 1', 'sponge-2', 'sponge grade 3', 'sponge 5', 'rubber 30A', 'Rubber-50a', 'rubber 70A', 'rubber 80A'];
+
 export const MATERIAL_SPELLINGS: readonly string[] = [
   'PLA', 'pla', 'PETG', 'petg', 'PET-G', 'ABS', 'abs', 'ASA', 'PP', 'polypropylene', 'PA12', 'nylon 12', 'Nylon12', 'TPU 95A', 'tpu', 'tpu-95a',
 ];
@@ -115,6 +118,7 @@ export interface DesignSpec {
   orificeMm: number | null;
   sealDiameterMm: number | null;
   preloadN: number | null;
+  padChoice: string | null;
   forceSpelling: Spelling;
   padThicknessMm: number | null;
   /** indentation as a share of half the pad */
@@ -174,6 +178,7 @@ export function designSpec(options: SpecOptions = {}): fc.Arbitrary<DesignSpec> 
     preloadN: maybe(p ? between(0, 1) : between(0, 5), absent),
     forceSpelling: spelling(FORCE_UNITS.length),
     padThicknessMm: maybe(between(0.5, 10), absent),
+    padChoice: maybe(fc.constantFrom(...PAD_SPELLINGS), absent),
     indentationShare: maybe(between(0, 1), absent),
     padDensityGcm3: maybe(between(0.05, 3), absent),
     calibration: maybe(
@@ -253,11 +258,11 @@ export function toDocument(s: DesignSpec): Record<string, unknown> {
     doc.nozzle = { orifice: write(orifice, s.lengthSpelling, LENGTH_UNITS, 1), sealDiameter: write(seal, s.targetSpelling, LENGTH_UNITS, 1) };
   }
   const seal: Record<string, unknown> = {};
-  // bench points on a line come with that line's preload (a single point is fitted holding the preload)
-  const preload = s.calibration?.line ? s.calibration.line.preloadN : s.preloadN;
-  if (preload !== null) seal.preload = write(preload, s.forceSpelling, FORCE_UNITS, 1);
+  // a first-version preload: still read (range-checked), then ignored
+  if (s.preloadN !== null) seal.preload = write(s.preloadN, s.forceSpelling, FORCE_UNITS, 1);
   const pad = s.padThicknessMm ?? DEFAULT_PAD_MM;
   if (s.padThicknessMm !== null) seal.padThickness = write(pad, s.lengthSpelling, LENGTH_UNITS, 1);
+  if (s.padChoice !== null) seal.pad = s.padChoice;
   // indentation from 0.05 mm to half the pad (schema's cross-field rule)
   // (the default 0.5 mm indentation is refused under a 1 mm pad, so a thin pad always carries its own)
   const share = s.indentationShare ?? (pad < 1 ? 0.5 : null);

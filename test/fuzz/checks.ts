@@ -76,12 +76,24 @@ export function checkSized(inp: DesignInputs, s: SizingSuccess): string[] {
   expect(Math.abs(s.levels.shutOffAtHeadMaxMm - inp.targetLevelM * 1e3) <= SHUT_OFF_TOLERANCE_MM,
     `shut-off at H_max ${s.levels.shutOffAtHeadMaxMm} mm vs target ${inp.targetLevelM * 1e3} mm`);
 
-  // closing force (hydrostatics): rho g H A + F_pre, when not calibrated
+  // closing force for a tight seal, when not calibrated: the gasket-factor form of ASME BPVC VIII-1 Mandatory
+  // Appendix 2, G = (d_o + d_s)/2, b = (d_s - d_o)/4, F = p (pi/4 G^2 + 2 pi b G m) + F_seat with
+  // F_seat = max(y pi G 2b, E (0.2 mm / t_pad) pi G 2b) (seating by 0.2 mm: our stated choice), m, y, E from the pad
   const rho = inp.liquidDensityKgM3;
   if (inp.calibration.length === 0) {
-    const f = rho * G * inp.headMaxM * (Math.PI / 4) * inp.sealDiameterM ** 2 + inp.preloadN;
-    expect(Math.abs(s.closingForce.atHeadMaxN - f) <= 1e-9 * Math.max(1, f), `closing force ${s.closingForce.atHeadMaxN} N vs rho g H A + F_pre = ${f} N`);
+    const Gm = (inp.orificeM + inp.sealDiameterM) / 2;
+    const b = (inp.sealDiameterM - inp.orificeM) / 4;
+    const ring = Math.PI * Gm * 2 * b;
+    const seat = Math.max(s.seal.seatingStressKpa * 1e3 * ring, s.seal.padStiffnessKpa * 1e3 * (0.2e-3 / inp.padThicknessM) * ring);
+    const f = rho * G * inp.headMaxM * ((Math.PI / 4) * Gm * Gm + 2 * Math.PI * b * Gm * s.seal.gasketFactor) + seat;
+    expect(Math.abs(s.closingForce.atHeadMaxN - f) <= 1e-9 * Math.max(1, f), `closing force ${s.closingForce.atHeadMaxN} N vs gasket-factor form ${f} N`);
   }
+  // the pad never leans on its stop at the tight seal; in service it sees at most 25 % (the stop)
+  expect(s.seal.indentationMm <= s.seal.stopIndentationMm + 1e-9, `pad squeezed ${s.seal.indentationMm} mm at seal, past the stop ${s.seal.stopIndentationMm} mm`);
+  expect(s.seal.worstStrain <= 0.25 + 1e-12, `worst pad strain ${s.seal.worstStrain}`);
+  // leak tolerance (Archimedes): (F_avail - F_seal(H_max)) / (rho g)
+  const leak = ((s.float.availableForceN - s.closingForce.atHeadMaxN) / (rho * G)) * 1e6;
+  expect(Math.abs(leak - s.float.leakToleranceMl) <= 1e-9 * Math.max(1, leak), `leak tolerance ${s.float.leakToleranceMl} mL vs ${leak} mL`);
   expect(s.closingForce.atHeadMaxN > 0, `closing force ${s.closingForce.atHeadMaxN} N is not positive`);
 
   // float envelope volume, cylinder plus frustum (geometry), against the sizing's
@@ -108,7 +120,7 @@ export function checkSized(inp: DesignInputs, s: SizingSuccess): string[] {
   expect(s.nozzle.travelMm >= minTravel - 1e-9, `travel ${s.nozzle.travelMm} mm < ${minTravel} mm`);
   const padTopRest = s.parts.mount.floatRestZMm + fs.heightMm + fs.padProudMm;
   expect(Math.abs(s.parts.mount.nozzleTipZMm - padTopRest - s.nozzle.travelMm) <= 1e-6, `tip - pad top at rest ${s.parts.mount.nozzleTipZMm - padTopRest} mm vs travel ${s.nozzle.travelMm} mm`);
-  const sealBottom = s.parts.mount.nozzleTipZMm - fs.heightMm - fs.padProudMm + inp.indentationM * 1e3;
+  const sealBottom = s.parts.mount.nozzleTipZMm - fs.heightMm - fs.padProudMm + s.seal.indentationMm;
   expect(Math.abs(sealBottom - s.parts.mount.floatSealZMm) <= 1e-6, `float bottom at seal ${s.parts.mount.floatSealZMm} vs z_tip - h_f - proud + delta ${sealBottom}`);
   // levels in order: lift-off, first touch, shut-off at H_min, at H_max
   const L = s.levels;
@@ -203,7 +215,7 @@ export function checkAssembly(
   const c = (P.housing.seatBoreMm - n.collarDiameterMm) / 2;
   const h = n.crushRibs.heightMm;
   const ribMm3 = h > c ? n.crushRibs.count * 0.5 * n.crushRibs.baseWidthMm * ((h - c) ** 2 / h) * n.collarLengthMm : 0;
-  const lipMm3 = Math.PI * (n.lipDiameterMm / 2) ** 2 * sizing.inputs.indentationM * 1e3;
+  const lipMm3 = Math.PI * (n.lipDiameterMm / 2) ** 2 * sizing.seal.indentationMm;
   const names = Object.keys(parts).filter((k) => parts[k]);
   for (const state of ['rest', 'seal'] as const) {
     const ms: Record<string, Manifold> = {};

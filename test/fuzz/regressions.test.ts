@@ -26,10 +26,10 @@ describe('regressions found by the fuzzing', () => {
     expect(errors.map((e) => e.field)).toEqual(['seal.calibration']);
     expect(errors[0].message).toMatch(/1\.8233 g at 0\.6154\d* m/); // the values
     expect(errors[0].message).toMatch(/more than 0 mm2/); // the allowed range
-    // one point under the preload: m g = 0.1 g * 9.80665 m/s2 = 0.98 mN < 0.1 N (seed run 2, explore script)
+    // one point under the pad's seating force: m g = 0.1 g * 9.80665 m/s2 = 0.98 mN, far below any pad's (seed run 2, explore script)
     const one = refusal({ supply: { headMax: '2 m' }, level: { target: '40 mm' }, seal: { calibration: [{ head: 0.01, mass: '0.1 g' }] } });
     expect(one[0].field).toBe('seal.calibration');
-    expect(one[0].message).toMatch(/0\.1 N preload/);
+    expect(one[0].message).toMatch(/above the pad's [\d.]+ N seating force/);
   });
 
   it('a design no float can lift says why (was: a failure with no reasons)', () => {
@@ -41,8 +41,9 @@ describe('regressions found by the fuzzing', () => {
     expect(result.ok).toBe(false);
     if (result.ok) return;
     expect(checkInfeasible(result)).toEqual([]);
-    expect(result.reasons.map((r) => r.code)).toContain('reserve');
-    expect(result.reasons[0].message).toMatch(/250 mm/);
+    // since the pad model: 122 N on a 16.5 mm2 land would crush any table pad past its stop, which is said first
+    expect(result.reasons.map((r) => r.code)).toContain('pad-on-stop');
+    expect(result.reasons[0].message).toMatch(/past the hard stop/);
   });
 });
 

@@ -29,7 +29,9 @@ function sizeOrThrow(doc: unknown, spec: DesignSpec): { result: SizingResult; in
   const parsed = parseDesign(doc);
   if (!parsed.ok) {
     // scattered or random bench points may fall with head: that one refusal is allowed, and must say so on seal.calibration
-    const scattered = spec.calibration && (spec.calibration.line === null || spec.calibration.line.scatter > 0);
+    // and so may one head alone: its fit holds the pad's own seating force, which the line's intercept need not reach
+    const singleHead = spec.calibration && new Set(spec.calibration.points.map((p) => p.headM)).size === 1;
+    const scattered = spec.calibration && (spec.calibration.line === null || spec.calibration.line.scatter > 0 || singleHead);
     const onlyCalibration = parsed.errors.every((e) => e.field === 'seal.calibration');
     if (scattered && onlyCalibration) return null;
     throw new Error(`accepted document refused: ${JSON.stringify(parsed.errors)}\n${JSON.stringify(doc)}`);

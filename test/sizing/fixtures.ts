@@ -10,10 +10,9 @@ export function defaultInputs(over: Partial<DesignInputs> = {}): DesignInputs {
     liquidViscosityPaS: 1.0016e-3,
     orificeM: 0.002,
     sealDiameterM: 0.005,
-    preloadN: 0.1,
+    padName: null,
     padThicknessM: 0.003,
-    indentationM: 0.0005,
-    padDensityKgM3: 1200,
+    padDensityKgM3: 200,
     calibration: [],
     materialName: 'PETG',
     materialDensityKgM3: 1270,
@@ -25,6 +24,10 @@ export function defaultInputs(over: Partial<DesignInputs> = {}): DesignInputs {
     tubeLengthM: 5,
     reservoirAreaM2: 0.12,
     reservoirRiseM: 0.02,
+    overflowM: null,
+    bedWidthM: 0.22,
+    bedDepthM: 0.22,
+    retiredFields: [],
     ...over,
   };
 }

@@ -79,7 +79,7 @@ describe.each(['rest', 'seal'] as const)('assembly at %s', (state) => {
           expect(v, pair).toBeGreaterThan(0);
           expect(v, pair).toBeLessThanOrEqual(ribInterferenceMm3() * 1.02 + CONTACT_MM3);
         } else if (pair === 'nozzle+pad' && state === 'seal') {
-          const lipMm3 = Math.PI * (P.nozzle.lipDiameterMm / 2) ** 2 * sizing.inputs.indentationM * 1e3;
+          const lipMm3 = Math.PI * (P.nozzle.lipDiameterMm / 2) ** 2 * sizing.seal.indentationMm;
           expect(v, pair).toBeGreaterThan(0);
           expect(v, pair).toBeLessThanOrEqual(lipMm3 * 1.01);
         } else {
@@ -123,7 +123,7 @@ describe.each(['rest', 'seal'] as const)('assembly at %s', (state) => {
     let tip = Infinity;
     for (let i = 2; i < m.nozzle.positions.length; i += 3) tip = Math.min(tip, m.nozzle.positions[i]);
     expect(tip).toBeCloseTo(P.mount.nozzleTipZMm, 4);
-    if (state === 'seal') expect(padTop - tip).toBeCloseTo(sizing.inputs.indentationM * 1e3, 4); // the pad is indented by delta
+    if (state === 'seal') expect(padTop - tip).toBeCloseTo(sizing.seal.indentationMm, 4); // the pad is indented by delta
     else expect(tip - padTop).toBeCloseTo(sizing.nozzle.travelMm, 4); // open by the travel s
   });
 });

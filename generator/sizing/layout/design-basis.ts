@@ -1,21 +1,42 @@
 import { FLOAT_GAP_MM, PRINT_CLEARANCE_MM } from '../constants.ts';
 import { circleArea, diameterForArea } from '../hydrostatics/circle-area.ts';
-import { closingForceN } from '../hydrostatics/closing-force-n.ts';
-import { fitSealCalibration } from '../hydrostatics/fit-seal-calibration.ts';
 import { nozzleSpec } from '../parts/nozzle-spec.ts';
+import { chooseSeal } from '../seal/choose-seal.ts';
+import type { PadMaterial } from '../seal/pads.ts';
 import type { DesignInputs } from '../inputs.ts';
 import type { NozzleSpec } from '../result.ts';
 
 /** Everything that does not depend on the float's size: forces, pad, nozzle, travel. */
 export interface DesignBasis {
   inputs: DesignInputs;
+  /** area in the force model (gasket-factor area, or the bench fit's), m2 */
   sealAreaM2: number;
+  /** seating force F_seat (or the bench fit's intercept), N */
   preloadN: number;
   equivalentSealDiameterMm: number;
   fromCalibration: boolean;
   calibrationRmsN: number;
+  /** force for a TIGHT seal at H_max and H_min, N (sealForceN at those heads) */
   forceAtHeadMaxN: number;
   forceAtHeadMinN: number;
+  /** force for a tight seal at any head, N: p(H) A + F_seat, or the bench line */
+  sealForceN: (headM: number) => number;
+  /** film force area of the land, pi (r_s^2 - r_o^2) / (2 ln(r_s/r_o)), m2 */
+  filmAreaM2: number;
+  /** bore area (pi/4) d_o^2, m2 */
+  boreAreaM2: number;
+  /** contact ring (pi/4)(d_s^2 - d_o^2), m2 */
+  landAreaM2: number;
+  /** the pad's table row, and whether the sizing chose it */
+  pad: PadMaterial;
+  padChosen: boolean;
+  padStiffnessKpa: number;
+  padThicknessMm: number;
+  /** pad strain and indentation at the tight seal at H_max */
+  strainAtSeal: number;
+  indentationMm: number;
+  /** indentation at which the hard stop takes the float's push (25 % of the pad), mm */
+  padStopIndentationMm: number;
   /** pad disc and how it sits */
   padDiameterMm: number;
   padProudMm: number;
@@ -33,24 +54,15 @@ export interface DesignBasis {
 
 /** Collar engagement in the seat, mm: at least 6 mm or one collar diameter (common practice for press fits). */
 const MIN_SEAT_LENGTH_MM = 6;
+/** Float shell in extrusion lines: four, so one bad line cannot open a leak path (DESIGN second part; common practice). */
+export const FLOAT_SHELL_LINES = 4;
 
 export function designBasis(inp: DesignInputs): DesignBasis {
-  let sealArea = circleArea(inp.sealDiameterM);
-  let preload = inp.preloadN;
-  let rms = 0;
-  const fromCalibration = inp.calibration.length > 0;
-  if (fromCalibration) {
-    const fit = fitSealCalibration(inp.calibration, inp.liquidDensityKgM3, inp.preloadN);
-    sealArea = fit.sealAreaM2;
-    preload = Math.max(0, fit.preloadN);
-    rms = fit.rmsResidualN;
-  }
-  const force = (headM: number) =>
-    closingForceN({ headM, sealAreaM2: sealArea, preloadN: preload, densityKgM3: inp.liquidDensityKgM3 });
+  const seal = chooseSeal(inp);
   const lineMm = inp.lineWidthM * 1e3;
   const sealMm = inp.sealDiameterM * 1e3;
   const padThicknessMm = inp.padThicknessM * 1e3;
-  const indentationMm = inp.indentationM * 1e3;
+  const indentationMm = seal.indentationMm;
   const radialGap = FLOAT_GAP_MM + PRINT_CLEARANCE_MM;
   // The pad must cover the lip wherever the float drifts in its bore, with 1 mm to spare; cut to a half millimetre.
   const padDiameter = Math.ceil((sealMm + 2 * radialGap + 2) * 2) / 2;
@@ -74,17 +86,29 @@ export function designBasis(inp: DesignInputs): DesignBasis {
   const minimumTravel = Math.max((inp.orificeM * 1e3) / 2, 1.5);
   return {
     inputs: inp,
-    sealAreaM2: sealArea,
-    preloadN: preload,
-    equivalentSealDiameterMm: diameterForArea(sealArea) * 1e3,
-    fromCalibration,
-    calibrationRmsN: rms,
-    forceAtHeadMaxN: force(inp.headMaxM),
-    forceAtHeadMinN: force(inp.headMinM),
+    sealAreaM2: seal.modelAreaM2,
+    preloadN: seal.seatN,
+    equivalentSealDiameterMm: diameterForArea(seal.modelAreaM2) * 1e3,
+    fromCalibration: seal.fromCalibration,
+    calibrationRmsN: seal.calibrationRmsN,
+    forceAtHeadMaxN: seal.sealForceN(inp.headMaxM),
+    forceAtHeadMinN: seal.sealForceN(inp.headMinM),
+    sealForceN: seal.sealForceN,
+    filmAreaM2: seal.filmAreaM2,
+    boreAreaM2: seal.boreAreaM2,
+    landAreaM2: seal.landAreaM2,
+    pad: seal.pad,
+    padChosen: seal.padChosen,
+    padStiffnessKpa: seal.pad.stiffnessPa / 1e3,
+    padThicknessMm,
+    strainAtSeal: seal.strainAtSeal,
+    indentationMm,
+    padStopIndentationMm: seal.stopIndentationMm,
     padDiameterMm: padDiameter,
     padProudMm: padProud,
     padMassKg: padVolumeM3 * inp.padDensityKgM3,
-    floatShellMm: 3 * lineMm,
+    // DESIGN second part: a float shell of four extrusion lines, for watertightness
+    floatShellMm: FLOAT_SHELL_LINES * lineMm,
     radialGapMm: radialGap,
     deckThicknessMm: deck,
     bossHeightMm: seatLength - deck,

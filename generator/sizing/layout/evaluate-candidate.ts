@@ -94,7 +94,7 @@ export function layoutCandidate(b: DesignBasis, f: FloatSizing, drainAreaMm2: nu
   const inp = b.inputs;
   const wallMm = inp.wallM * 1e3;
   const targetMm = inp.targetLevelM * 1e3;
-  const deltaMm = inp.indentationM * 1e3;
+  const deltaMm = b.indentationMm;
   const bore = f.float.outerDiameterMm + 2 * b.radialGapMm;
   const notch = drainNotchSize(bore, drainAreaMm2);
   const pinMin = pinTopMinimumMm(notch.heightMm, wallMm, PIN_DIAMETER_MM);
