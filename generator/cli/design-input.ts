@@ -24,6 +24,8 @@ export const DESIGN_FLAGS = [
   { flag: 'tube-length', path: 'supply.tubeLength', help: 'supply tube length (default 5 m)', example: '8m' },
   { flag: 'max-diameter', path: 'limits.maxOuterDiameter', help: 'widest the valve may be (default 120 mm)', example: '90mm' },
   { flag: 'reserve', path: 'reserve', help: 'float lift over the force needed to close (default 1.5)', example: '2' },
+  { flag: 'pad', path: 'seal.pad', help: 'seal pad from the table, e.g. "sponge grade 2" or "rubber 40A" (default auto: the softest sponge that fits)', example: 'sponge-2' },
+  { flag: 'overflow', path: 'container.overflow', help: 'height of the container overflow above its floor (the valve shuts 10 mm below it at least)', example: '80mm' },
 ] as const;
 
 /** parseArgs options for --design and the design flags. */

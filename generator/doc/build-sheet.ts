@@ -20,12 +20,19 @@ export const LAYER_HEIGHT_MM = 0.2;
 /** Finer layers for the nozzle's barb and lip, mm (common practice). */
 export const NOZZLE_LAYER_HEIGHT_MM = 0.12;
 
+/** The dry float may weigh this share more or less than modelled and pass (common practice: a few per cent of slicer and filament spread). */
+export const DRY_MASS_TOLERANCE = 0.05;
+/** A float that gains more than this in a day's soak leaks: reject it, g (DESIGN second part). */
+export const SOAK_GAIN_LIMIT_G = 0.5;
+/** An inline strainer's openings at most this share of the bore (common practice: one grain on the land holds the valve open). */
+export const STRAINER_SHARE_OF_BORE = 1 / 3;
+
 /** Optional details of the files written with the sheet. */
 export interface BuildSheetFiles {
   /** file names per part, e.g. { housing: "rooftop-tubs-housing.stl" } */
   stl?: Partial<Record<string, string>>;
   plate3mf?: string;
-  /** whether the printed pad was written */
+  /** whether the pad's cutting template was written */
   withPad?: boolean;
 }
 
@@ -84,11 +91,16 @@ function sheetContent(s: SizingSuccess, doc: NormalizedDoc, files: BuildSheetFil
       [
         'Seal pad',
         '1',
-        `disc ${f1(P.float.padDiameterMm)} mm across, ${f1(P.float.padThicknessMm)} mm thick, closed-cell foam or soft rubber` +
-          (files.withPad ? ` (or print ${stl('pad')} in TPU 95A or softer)` : '') +
+        `disc ${f1(P.float.padDiameterMm)} mm across, ${f1(P.float.padThicknessMm)} mm thick, cut from ${s.seal.padDescription}` +
+          (files.withPad ? ` (${stl('pad')} is a cutting template: print it in any filament, lay it on the sheet and cut round it)` : '') +
           `; ${f2(s.mass.byPart.pad)} g, counted in the float's mass`,
       ],
       ['Supply tube', `${doc.supply.tubeLength}`, `inner diameter ${doc.supply.tubeInnerDiameter}, pushed over the barb`],
+      [
+        'Inline strainer',
+        '1',
+        `in the supply tube before the valve, openings finer than ${f2(P.nozzle.orificeMm * STRAINER_SHARE_OF_BORE)} mm (a third of the ${f1(P.nozzle.orificeMm)} mm bore): one grain caught on the lip holds the valve open`,
+      ],
       [
         'Hold-down',
         s.holdDown.neededN > 0 ? '1 set' : 'none needed',
@@ -128,7 +140,7 @@ function sheetContent(s: SizingSuccess, doc: NormalizedDoc, files: BuildSheetFil
         'none; no brim or raft on the sealing face: the first layer is the seal',
       ],
       ['Retainer pin', 'flat side down', '3 lines', '100 %', `${LAYER_HEIGHT_MM} mm`, 'none'],
-      ...(files.withPad ? [['Seal pad (TPU, optional)', 'flat', '2 lines', '100 %', `${LAYER_HEIGHT_MM} mm`, 'none']] : []),
+      ...(files.withPad ? [['Pad cutting template (optional, any filament)', 'flat', '2 lines', '100 %', `${LAYER_HEIGHT_MM} mm`, 'none']] : []),
     ],
   };
 
@@ -149,6 +161,10 @@ function sheetContent(s: SizingSuccess, doc: NormalizedDoc, files: BuildSheetFil
       `${f1(P.nozzle.orificeMm)} mm drill turned by hand.`,
     `Push the nozzle insert into the seat from inside the housing, barb first, until its shoulder sits against the boss under the deck. The sealing face then stands ${f1(P.mount.nozzleTipZMm)} mm above the base.`,
     `Put the seal pad in the float's pocket (${f1(2 * P.float.pocketRadiusMm)} mm across, ${f1(P.float.pocketDepthMm)} mm deep); it should stand ${f1(P.float.padProudMm)} mm proud. A drop of flexible glue keeps it there.`,
+    `Test the float before it goes in. Weigh it dry, without the pad: it should weigh ${f1(s.float.dryMassG)} g, within ${f1(DRY_MASS_TOLERANCE * 100)} % ` +
+      `(${f1(s.float.dryMassG * (1 - DRY_MASS_TOLERANCE))} to ${f1(s.float.dryMassG * (1 + DRY_MASS_TOLERANCE))} g). Hold it fully under water for a day, ` +
+      `dry the outside and weigh it again: reject it if it gained more than ${f1(SOAK_GAIN_LIMIT_G)} g. ` +
+      `(It can take in ${f1(s.float.leakToleranceMl)} mL before it no longer shuts at full tank; every mL raises the shut-off by ${f2(s.float.levelRisePerMlMm)} mm.)`,
     'Slide the float into the housing from below, flat bottom down, pad up.',
     `Slide the retainer pin through the two holes near the base, flat side down, head outside. The float now rests on it, ${f1(P.mount.pinTopZMm)} mm above the base, and cannot fall out.`,
     'Push the supply tube over the barb on the deck.',

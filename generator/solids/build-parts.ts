@@ -1,11 +1,11 @@
 /**
  * The printable parts of a sized design, each an indexed mesh in its print
  * pose resting on z = 0 (DESIGN "Parts"): housing deck down, float bottom
- * down, nozzle tip down, pin on its flat; the optional printed pad flat.
+ * down, nozzle tip down, pin on its flat; the pad disc (cutting template) flat.
  * Every dimension comes from `sizing.parts` (the sizing result alone).
  *
  * Options: quality 'preview' (chord error 0.3 mm, for the view) or 'export'
- * (0.05 mm, for files); withPad (default false) adds the printed pad.
+ * (0.05 mm, for files); withPad (default false) adds the pad disc (a cutting template).
  * A builder that fails throws an Error whose message starts with the part's
  * name (e.g. "housing: ...").
  */

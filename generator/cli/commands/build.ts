@@ -31,7 +31,7 @@ per part (housing, float, nozzle insert, retainer pin) in print orientation, a
   --design FILE            design document (JSON); flags below override its values
   --out DIR                folder for the files (made if missing)
   --quality Q              export (default: chord error at most 0.05 mm) or preview (coarse, quick)
-  --with-pad               also write a printable seal pad (TPU); the default pad is a bought disc
+  --with-pad               also write the seal pad's disc as a cutting template (the pad itself is cut from sponge or rubber sheet)
 ${designFlagsHelp()}
   --json                   print the sizing result as JSON with a "parts" list of the files written
   --debug                  show the stack trace if floatwright itself fails

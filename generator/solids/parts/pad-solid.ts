@@ -1,8 +1,9 @@
 /**
- * The optional printed seal pad (flexible filament): a disc of the float's
- * padDiameterMm by padThicknessMm, lying flat on z = 0. The default is a
- * bought disc of closed-cell foam or soft rubber; this is for growers who
- * print one in TPU.
+ * The seal pad's disc: padDiameterMm by padThicknessMm, lying flat on z = 0.
+ * The pad itself is cut from closed-cell sponge or rubber sheet (the pad
+ * table); this disc is drawn in the preview and written, on request, as a
+ * cutting template. A printed flexible pad is too stiff for a float to seat
+ * and cannot absorb a tilt (generator/sizing/seal/pads.ts).
  */
 import { geom3ToMesh, segmentsFor, type IndexedMesh, type Quality } from '../mesh/index.ts';
 import type { FloatSpec } from '../../sizing/result.ts';
