@@ -55,6 +55,31 @@ describe('fw-design-form', () => {
   });
 });
 
+describe('fw-design-form: the seal pad menu', () => {
+  it('has a labelled menu of the pad table, shows the document\'s pad and sends a pick up ("auto" removes the key)', async () => {
+    const form = await mount<HTMLElement & { updateComplete: Promise<unknown> }>('fw-design-form', {
+      doc: { supply: { headMax: '2 m' }, level: { target: '40 mm' }, seal: { pad: 'Sponge-2' } },
+      units: 'metric',
+      errors: {},
+    });
+    const root = form.shadowRoot!;
+    const select = root.querySelector('#f-seal-pad') as HTMLSelectElement;
+    expect(root.querySelector('label[for="f-seal-pad"]')).not.toBeNull(); // WCAG 2.2 SC 1.3.1: a label tied to the control
+    const options = [...select.options].map((o) => o.value);
+    expect(options).toContain('sponge grade 2');
+    expect(options).toContain('rubber 50A');
+    expect(select.value).toBe('sponge grade 2');
+    let detail: unknown = null;
+    form.addEventListener('field-input', (e) => (detail = (e as CustomEvent).detail));
+    select.value = 'rubber 40A';
+    select.dispatchEvent(new Event('change'));
+    expect(detail).toEqual({ path: 'seal.pad', value: 'rubber 40A' });
+    select.value = 'auto';
+    select.dispatchEvent(new Event('change'));
+    expect(detail).toEqual({ path: 'seal.pad', value: undefined });
+  });
+});
+
 describe('fw-push-plot', () => {
   it('draws the curve and labels the level held at full tank', async () => {
     const s = sized({ supply: { headMax: '2.2 m', headMin: '1.2 m' }, level: { target: '45 mm' } });

@@ -40,8 +40,10 @@ describe('net upward push of the sealed float', () => {
     for (let i = 1; i < c.points.length; i++) expect(c.points[i].pushN).toBeGreaterThanOrEqual(c.points[i - 1].pushN - 1e-12);
   });
 
-  it('drops the level from full to low tank by (H_max - H_min) d_s^2 / D_f^2 (DESIGN closed form)', () => {
-    const drop = ((2.2 - 1.6) * 1000 * 5 ** 2) / s.float.outerDiameterMm ** 2;
+  it('drops the level from full to low tank by (H_max - H_min) A_m / A_f (DESIGN closed form)', () => {
+    // A_m: the gasket-factor area of the 2 / 5 mm lip with m 0.5, pi/4 G^2 + 2 pi b G m = 17.87 mm2 (ASME VIII-1 App. 2 form)
+    const areaMm2 = (Math.PI / 4) * 3.5 ** 2 + 2 * Math.PI * 0.75 * 3.5 * 0.5;
+    const drop = ((2.2 - 1.6) * 1000 * areaMm2) / ((Math.PI / 4) * s.float.outerDiameterMm ** 2);
     expect(s.levels.shutOffAtHeadMaxMm - levelForPush(s, s.closingForce.atHeadMinN)).toBeCloseTo(drop, 3);
   });
 

@@ -1,6 +1,7 @@
 import { LitElement, css, html, nothing } from 'lit';
 import { customElement, property } from 'lit/decorators.js';
 import { materialNames } from '../../generator/sizing/materials.ts';
+import { AUTO_PAD, findPad, padNames } from '../../generator/sizing/seal/pads.ts';
 import { getAt, type Doc } from '../lib/doc-path.ts';
 import { FIELD_GROUPS } from '../lib/form-fields.ts';
 import { MATERIAL_DENSITY_FIELD, OTHER_FILAMENT, materialChoice, otherFilamentValue } from '../lib/material-choice.ts';
@@ -85,6 +86,36 @@ export class FwDesignForm extends LitElement {
     const choice = materialChoice(getAt(this.doc, 'print.material'));
     const value = choice.kind === 'table' ? choice.name : choice.kind === 'other' ? OTHER_FILAMENT : '';
     if (select && select.value !== value) select.value = value;
+    const padSelect = this.renderRoot.querySelector<HTMLSelectElement>('#f-seal-pad');
+    const padValue = this.padValue();
+    if (padSelect && padSelect.value !== padValue) padSelect.value = padValue;
+  }
+
+  /** The pad menu's value for the document: a table name, AUTO_PAD, or '' for text that is not a pad. */
+  private padValue(): string {
+    const raw = getAt(this.doc, 'seal.pad');
+    if (raw === undefined || (typeof raw === 'string' && raw.trim().toLowerCase() === AUTO_PAD)) return AUTO_PAD;
+    return typeof raw === 'string' ? (findPad(raw)?.name ?? '') : '';
+  }
+
+  private renderPad() {
+    const error = this.errors['seal.pad'];
+    const raw = getAt(this.doc, 'seal.pad');
+    return html`<div class="field ${error ? 'bad' : ''}">
+      <label for="f-seal-pad">Seal pad</label>
+      <div class="box">
+        <select id="f-seal-pad" name="seal.pad" aria-invalid=${error ? 'true' : 'false'} aria-describedby="f-seal-pad-msg"
+          @change=${(e: Event) => {
+            const v = (e.target as HTMLSelectElement).value;
+            this.emit('seal.pad', v === AUTO_PAD ? undefined : v);
+          }}>
+          <option value=${AUTO_PAD}>softest sponge that fits</option>
+          ${padNames().map((n) => html`<option value=${n}>${n}</option>`)}
+          ${this.padValue() === '' ? html`<option value="" disabled>${String(raw)} (not in the list)</option>` : nothing}
+        </select>
+      </div>
+      <div class="msg" id="f-seal-pad-msg" role=${error ? 'alert' : nothing}>${error ?? ''}</div>
+    </div>`;
   }
 
   private pickMaterial(value: string): void {
@@ -141,6 +172,7 @@ export class FwDesignForm extends LitElement {
         <legend>${g.title}</legend>
         ${g.intro ? html`<p class="intro">${g.intro}</p>` : nothing}
         ${g.id === 'print' ? this.renderMaterial() : nothing}
+        ${g.id === 'nozzle' ? this.renderPad() : nothing}
         ${g.fields.map((f) => this.renderField(f))}
       </fieldset>`,
     )}

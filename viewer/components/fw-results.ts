@@ -88,6 +88,17 @@ export class FwResults extends LitElement {
           ${s.closingForce.fromCalibration ? html`<dt>Lip width from your bench test</dt><dd data-result="calibrated-lip">${f.printMm(s.closingForce.equivalentSealDiameterMm, 2)}</dd>` : nothing}
         </dl>
       </section>
+      <section aria-label="Seal pad and float">
+        <h2>Seal pad and float</h2>
+        <dl>
+          <dt>Pad${s.seal.padChosen ? ' (chosen for this valve)' : ''}</dt><dd data-result="pad">${s.seal.padMaterial}, ${f.printMm(s.seal.padThicknessMm)} thick</dd>
+          <dt>Pad squeeze when shut, tank full</dt><dd>${f.printMm(s.seal.indentationMm, 2)} (${(s.seal.strainAtSeal * 100).toFixed(0)} %)</dd>
+          <dt>Most squeeze in use (a stop holds it)</dt><dd>${(s.seal.worstStrain * 100).toFixed(0)} %</dd>
+          <dt>Float shell</dt><dd>${f.printMm(s.float.shellMm, 2)}</dd>
+          <dt>Float weighs dry, before the pad</dt><dd data-result="float-dry">${f.massG(s.float.dryMassG, u, 1)}</dd>
+          <dt>Water the float can take in and still shut</dt><dd data-result="leak-tolerance">${s.float.leakToleranceMl.toFixed(1)} mL (each mL raises the level ${f.printMm(s.float.levelRisePerMlMm, 2)})</dd>
+        </dl>
+      </section>
       <section aria-label="Holding down">
         <h2>Holding it down</h2>
         <p data-result="ballast">${s.holdDown.ballastSteelG > 0

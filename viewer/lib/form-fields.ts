@@ -28,6 +28,7 @@ export const FIELD_GROUPS: readonly FieldGroup[] = [
       { path: 'limits.maxOuterDiameter', label: 'Widest valve that fits', kind: 'length', metric: 'mm', imperial: 'in', optional: true },
       { path: 'reservoir.area', label: 'Water surface area', kind: 'area', metric: 'm2', imperial: 'ft2', optional: true, hint: 'for the refill time' },
       { path: 'reservoir.rise', label: 'Refill depth', kind: 'length', metric: 'mm', imperial: 'in', optional: true, hint: 'for the refill time' },
+      { path: 'container.overflow', label: 'Overflow height', kind: 'length', metric: 'mm', imperial: 'in', optional: true, hint: 'above the floor; the valve shuts at least 10 mm lower' },
     ],
   },
   {
@@ -46,8 +47,6 @@ export const FIELD_GROUPS: readonly FieldGroup[] = [
       { path: 'nozzle.orifice', label: 'Nozzle hole', kind: 'length', metric: 'mm', imperial: 'mm', optional: true },
       { path: 'nozzle.sealDiameter', label: 'Nozzle lip, outside width', kind: 'length', metric: 'mm', imperial: 'mm', optional: true },
       { path: 'seal.padThickness', label: 'Pad thickness', kind: 'length', metric: 'mm', imperial: 'mm', optional: true },
-      { path: 'seal.indentation', label: 'Pad squeeze when shut', kind: 'length', metric: 'mm', imperial: 'mm', optional: true },
-      { path: 'seal.preload', label: 'Push to dent the pad', kind: 'force', metric: 'N', imperial: 'ozf', optional: true },
       { path: 'reserve', label: 'Spare lift (times the push needed)', kind: 'number', metric: '', imperial: '', optional: true },
     ],
   },
