@@ -116,7 +116,7 @@ describe.skipIf(!haveChromium)('workbench in Chromium', () => {
     await head.pressSequentially('2.2', { delay: 30 });
     const level = page.getByLabel('Water depth to hold');
     const samples: number[] = [];
-    for (const value of ['52', '38', '45']) {
+    for (const value of ['52', '48', '45']) {
       const before = await buildId();
       await level.fill('');
       await page.evaluate(() => document.querySelector('fw-app')!.removeAttribute('data-input-to-preview-ms'));
