@@ -177,10 +177,10 @@ describe('the lightest lever valve (search)', () => {
     expect(c.footprintMm).toBeLessThanOrEqual(90);
     expect(c.ratio).toBeGreaterThan(1);
     // the arm is level at the seal: tip and pivot on the arm's own section
-    expect(c.tipZMm - c.pivotZMm).toBeCloseTo(c.arm.holeCentreDepthMm + 1 - 0.5, 9);
+    expect(c.tipZMm - c.pivotZMm).toBeCloseTo(c.arm.holeCentreDepthMm + 1 - lb.indentationMm, 9);
     expect(c.restTravelMm).toBeGreaterThanOrEqual(lb.basis.minimumTravelMm);
     expect(c.restLowestZMm).toBeGreaterThanOrEqual(-1e-9);
-    expect(c.lipGapMm).toBeLessThanOrEqual(0.25);
+    expect(c.lipGapMm).toBeLessThanOrEqual(lb.indentationMm / 2);
     expect(c.hysteresisMm).toBeGreaterThan(0);
     // the fields size --json will carry (issue 13, Interface)
     const s = leverSummary(c);

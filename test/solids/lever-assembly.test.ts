@@ -15,7 +15,8 @@ import { buildLeverArmMesh } from '../../generator/solids/parts/lever-arm-solid.
 import { buildLeverFrameMountedMesh } from '../../generator/solids/parts/lever-frame-solid.ts';
 import { buildNozzleMesh } from '../../generator/solids/parts/nozzle-solid.ts';
 import { fromRows, multiply, transformMesh, translation } from '../../generator/solids/shapes/transform-mesh.ts';
-import { demoLever } from './lever-demos.ts';
+import { designBasis } from '../../generator/sizing/layout/design-basis.ts';
+import { demoLever, demoLeverInputs } from './lever-demos.ts';
 
 let wasm: ManifoldToplevel;
 beforeAll(async () => {
@@ -50,7 +51,7 @@ for (const [name, headM, levelM, mount] of [
   describe(`lever assembly: ${name}`, () => {
     const c = demoLever(headM, levelM, mount);
     const armTop = c.floatBottomZMm + c.float.heightMm + c.arm.barDepthMm;
-    const delta = 0.5; // the document's default indentation (fixtures.ts)
+    const delta = designBasis(demoLeverInputs(headM, levelM)).indentationMm; // the pad's squeeze at the tight seal (seal model)
     const restTheta = Math.asin((c.restTravelMm + delta) / c.arm.padArmMm);
 
     it('no part overlaps another at the seal or at rest; the float stays off the floor at rest', async () => {

@@ -7,8 +7,12 @@ import { designBasis } from '../../generator/sizing/layout/design-basis.ts';
 import { leverBasisFromDesign, searchLever, type LeverCandidate } from '../../generator/sizing/lever/index.ts';
 import { defaultInputs } from '../sizing/fixtures.ts';
 
+/** The demo valve's inputs (the low tank at 75 % of the head, a 90 mm footprint). */
+export const demoLeverInputs = (headM: number, levelM: number) =>
+  defaultInputs({ headMaxM: headM, headMinM: 0.75 * headM, targetLevelM: levelM, maxOuterDiameterM: 0.09 });
+
 export function demoLever(headM: number, levelM: number, mount: 'floor' | 'rim'): LeverCandidate {
-  const inp = defaultInputs({ headMaxM: headM, headMinM: 0.75 * headM, targetLevelM: levelM, maxOuterDiameterM: 0.09 });
+  const inp = demoLeverInputs(headM, levelM);
   const out = searchLever(leverBasisFromDesign(designBasis(inp)), mount === 'rim' ? { mount, rim: { rimHeightMm: levelM * 1e3 + 100, wallThicknessMm: 3 } } : { mount });
   if (!out.best) throw new Error('the demo lever did not size');
   return out.best;
