@@ -30,7 +30,9 @@ function sizeOrThrow(doc: unknown, spec: DesignSpec): { result: SizingResult; in
   if (!parsed.ok) {
     // scattered or random bench points may fall with head: that one refusal is allowed, and must say so on seal.calibration
     // and so may one head alone: its fit holds the pad's own seating force, which the line's intercept need not reach
-    const singleHead = spec.calibration && new Set(spec.calibration.points.map((p) => p.headM)).size === 1;
+    // (counted on the points as written: those off the scale are never weighed)
+    const written = ((doc as { seal?: { calibration?: { head: unknown }[] } }).seal?.calibration ?? []).map((p) => p.head);
+    const singleHead = spec.calibration && new Set(written).size <= 1;
     const scattered = spec.calibration && (spec.calibration.line === null || spec.calibration.line.scatter > 0 || singleHead);
     const onlyCalibration = parsed.errors.every((e) => e.field === 'seal.calibration');
     if (scattered && onlyCalibration) return null;
