@@ -46,6 +46,10 @@ const REQUIRED_NUMBERS = [
   'drain.requiredAreaMm2', 'drain.providedAreaMm2',
   'holdDown.upliftN', 'holdDown.netWeightN', 'holdDown.ballastSteelG',
   'tilt.maxAngleDeg', 'tilt.lipGapMm',
+  // issue 9 (seal and float integrity)
+  'float.shellMm', 'float.leakToleranceMl', 'float.levelRisePerMlMm',
+  'seal.padStiffnessKpa', 'seal.indentationMm', 'seal.worstStrain',
+  'closingForce.modelAreaMm2', 'closingForce.seatN',
 ];
 const at = (obj: any, path: string) => path.split('.').reduce((o, k) => (o == null ? undefined : o[k]), obj);
 
@@ -93,6 +97,29 @@ describe('floatwright size --design PRESET --json', () => {
     expect(result.float.shellMm).toBeCloseTo(4 * 0.45, 12); // four 0.45 mm lines
     expect(result.inputs.headMinM).toBe(1.6);
     expect(result.inputs.materialName).toBe('PETG');
+  });
+});
+
+describe('seal pad and overflow on the command line', () => {
+  it('--pad names a table pad; an unknown one is refused by its field and flag, listing the known pads', async () => {
+    const [named, unknown] = await Promise.all([
+      floatwright('size', '--design', 'presets/rooftop-tubs.json', '--pad', 'Sponge-2', '--json'),
+      floatwright('size', '--design', 'presets/rooftop-tubs.json', '--pad', 'felt'),
+    ]);
+    expect(named.status).toBe(0);
+    expect(json(named).seal.padMaterial).toBe('sponge grade 2');
+    expect(json(named).seal.padChosen).toBe(false);
+    expect(unknown.status).toBe(2);
+    expect(flat(unknown.stderr)).toContain('seal.pad (--pad): "felt" is not a pad in the table');
+    expect(flat(unknown.stderr)).toContain('sponge grade 0');
+    expect(flat(unknown.stderr)).toContain('rubber 80A');
+  });
+  it('--overflow within 10 mm of the shut-off is refused with a way out naming container.overflow', async () => {
+    const run = await floatwright('size', '--design', 'presets/rooftop-tubs.json', '--overflow', '50mm');
+    expect(run.status).toBe(2);
+    const out = flat(run.stdout + run.stderr);
+    expect(out).toContain('within 10 mm of the container\'s overflow at 50 mm');
+    expect(out).toContain('container.overflow = 55 mm');
   });
 });
 

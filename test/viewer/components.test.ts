@@ -106,6 +106,13 @@ describe('fw-results', () => {
     // 50.8 mm is exactly 2 in (NIST SP 811)
     expect(el.shadowRoot!.querySelector('[data-result="level-full"]')!.textContent).toBe('2.00 in');
   });
+  it('shows the pad and the water the float can take in (Archimedes: (F_avail - F_seal) / (rho g))', async () => {
+    const s = sized({ supply: { headMax: '2.2 m' }, level: { target: '45 mm' } });
+    const el = await mount<HTMLElement>('fw-results', { result: s, lastGood: s, units: 'metric' });
+    expect(el.shadowRoot!.querySelector('[data-result="pad"]')!.textContent).toContain(s.seal.padMaterial);
+    const ml = ((s.float.availableForceN - s.closingForce.atHeadMaxN) / (998.2 * 9.80665)) * 1e6; // water 998.2 kg/m3 (CRC, from memory); g NIST SP 330
+    expect(el.shadowRoot!.querySelector('[data-result="leak-tolerance"]')!.textContent).toContain(`${ml.toFixed(1)} mL`);
+  });
 });
 
 describe('fw-cautions', () => {
