@@ -55,7 +55,7 @@ export function sizingSections(result: SizingSuccess): Section[] {
       rows: [
         row(`pad${seal.padChosen ? ' (chosen for this design)' : ''}`, seal.padMaterial),
         row('stiffness (compressive modulus)', fixed(seal.padStiffnessKpa, 0), 'kPa'),
-        row('squeeze at the tight seal, highest head', `${fixed(seal.indentationMm, 2)} (${percent(seal.strainAtSeal)} %)`, 'mm'),
+        row('squeeze at the tight seal, highest / lowest head', `${fixed(seal.indentationMm, 2)} (${percent(seal.strainAtSeal)} %) / ${fixed(seal.indentationAtHeadMinMm, 2)}`, 'mm'),
         row('hard stop takes the push from', fixed(seal.stopIndentationMm, 2), 'mm'),
         row('worst squeeze in service (empty tank, flooded)', percent(seal.worstStrain), '%'),
       ],

@@ -158,6 +158,8 @@ export interface SizingSuccess {
     /** indentation and strain at the tight seal at H_max */
     indentationMm: number;
     strainAtSeal: number;
+    /** indentation at the tight seal at H_min (less pressure: shallower) */
+    indentationAtHeadMinMm: number;
     /** indentation at which the hard stop takes the float's push (25 % of the pad) */
     stopIndentationMm: number;
     /** largest strain in service (tank empty with the reservoir full; flooded), as the pad sees it behind the stop */

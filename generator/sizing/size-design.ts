@@ -328,6 +328,7 @@ export function sizeDesign(inp: DesignInputs): SizingResult {
       padThicknessMm: b.padThicknessMm,
       indentationMm: b.indentationMm,
       strainAtSeal: b.strainAtSeal,
+      indentationAtHeadMinMm: b.indentationAtHeadMinMm,
       stopIndentationMm: b.padStopIndentationMm,
       worstStrain: Math.min(worstWithoutStop, PAD_STOP_STRAIN),
       worstStrainWithoutStop: worstWithoutStop,

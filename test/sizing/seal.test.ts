@@ -114,6 +114,12 @@ describe('the pad in a sized design', () => {
     expect(b.filmAreaM2 * 1e6).toBeCloseTo(9.0, 2);
     expect(b.boreAreaM2 * 1e6).toBeCloseTo(Math.PI, 12);
     expect(b.padStopIndentationMm).toBeCloseTo(0.75, 12);
+    // at the low tank (1.6 m): the same contact model at p(1.6 m) and F_seal(1.6 m), shallower than at full tank
+    const ring = (Math.PI / 4) * (25 - 4) * 1e-6;
+    const p = RHO * G * 1.6;
+    const strainLow = (b.sealForceN(1.6) - p * Math.PI * 1e-6) / ring / (b.padStiffnessKpa * 1e3);
+    expect(b.indentationAtHeadMinMm).toBeCloseTo(strainLow * 3, 9);
+    expect(b.indentationAtHeadMinMm).toBeLessThan(b.indentationMm);
   });
   it('worst strain in service is capped by the stop at 25 % (common practice); without it the flooded float would squeeze more', () => {
     const r = ok(defaultInputs());

@@ -35,6 +35,8 @@ export interface DesignBasis {
   /** pad strain and indentation at the tight seal at H_max */
   strainAtSeal: number;
   indentationMm: number;
+  /** pad indentation at the tight seal at H_min (the shallower), mm */
+  indentationAtHeadMinMm: number;
   /** indentation at which the hard stop takes the float's push (25 % of the pad), mm */
   padStopIndentationMm: number;
   /** pad disc and how it sits */
@@ -103,6 +105,7 @@ export function designBasis(inp: DesignInputs): DesignBasis {
     padThicknessMm,
     strainAtSeal: seal.strainAtSeal,
     indentationMm,
+    indentationAtHeadMinMm: seal.indentationAtHeadMinMm,
     padStopIndentationMm: seal.stopIndentationMm,
     padDiameterMm: padDiameter,
     padProudMm: padProud,

@@ -31,6 +31,8 @@ export interface SealModel {
   strainAtSeal: number;
   /** indentation at the tight seal at H_max, mm */
   indentationMm: number;
+  /** indentation at the tight seal at H_min, mm (less pressure, less push: the shallower of the two) */
+  indentationAtHeadMinMm: number;
   /** indentation at which the hard stop takes the push (25 % of the pad), mm */
   stopIndentationMm: number;
 }
@@ -67,13 +69,15 @@ export function sealModel(inp: DesignInputs, pad: PadMaterial, padChosen: boolea
     rms = fit.rmsResidualN;
   }
   const sealForceN = (headM: number) => closingForceN({ headM, sealAreaM2: area, preloadN: seat, densityKgM3: rho });
-  const strain = landStrain({
-    forceN: sealForceN(inp.headMaxM),
-    pressurePa: pressurePa(inp.headMaxM, rho, STANDARD_GRAVITY),
-    boreAreaM2: boreArea,
-    landAreaM2: landArea,
-    stiffnessPa: pad.stiffnessPa,
-  });
+  const strainAt = (headM: number) =>
+    landStrain({
+      forceN: sealForceN(headM),
+      pressurePa: pressurePa(headM, rho, STANDARD_GRAVITY),
+      boreAreaM2: boreArea,
+      landAreaM2: landArea,
+      stiffnessPa: pad.stiffnessPa,
+    });
+  const strain = strainAt(inp.headMaxM);
   const tMm = inp.padThicknessM * 1e3;
   return {
     pad,
@@ -88,6 +92,7 @@ export function sealModel(inp: DesignInputs, pad: PadMaterial, padChosen: boolea
     sealForceN,
     strainAtSeal: strain,
     indentationMm: strain * tMm,
+    indentationAtHeadMinMm: strainAt(inp.headMinM) * tMm,
     stopIndentationMm: PAD_STOP_STRAIN * tMm,
   };
 }
