@@ -3,6 +3,8 @@
  * own arguments, writes through `io` and returns its exit code; it throws only
  * for faults in floatwright itself (main turns those into exit 1).
  */
+import { terminalText } from '../doc/safe-text/terminal-text.ts';
+
 export interface Io {
   /** standard output (results, and JSON in --json mode) */
   out(text: string): void;
@@ -25,8 +27,18 @@ export const EXIT_OK = 0;
 export const EXIT_FAULT = 1;
 export const EXIT_INPUT = 2;
 
-/** Io on the process's own streams. */
+/**
+ * Io on the process's own streams. Everything printed loses its control
+ * characters (terminalText): a name or a value holding an escape sequence
+ * cannot drive the terminal. JSON output is unaffected in meaning: JSON.stringify
+ * already writes C0 characters as \u escapes; C1 and direction overrides are dropped.
+ */
 export const processIo: Io = {
-  out: (text) => process.stdout.write(text),
-  err: (text) => process.stderr.write(text),
+  out: (text) => process.stdout.write(printable(text)),
+  err: (text) => process.stderr.write(printable(text)),
 };
+
+/** terminalText, keeping a carriage return that opens the text: the progress bar redraws its line with it. */
+function printable(text: string): string {
+  return text.startsWith('\r') ? `\r${terminalText(text.slice(1))}` : terminalText(text);
+}

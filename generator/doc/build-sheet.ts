@@ -10,6 +10,7 @@
  * wall counts follow from the design's wall and line width.
  */
 import { CAUTIONS } from './cautions.ts';
+import { markdownText } from './safe-text/markdown-text.ts';
 import type { NormalizedDoc } from './schema.ts';
 import { sizingSections, type Section } from './format-sizing.ts';
 import { CONSTRAINT_TEXT } from '../sizing/layout/constraint-text.ts';
@@ -192,7 +193,8 @@ function sheetContent(s: SizingSuccess, doc: NormalizedDoc, files: BuildSheetFil
   };
 }
 
-const mdCell = (text: string) => text.replace(/\|/g, '\\|').replace(/\n/g, ' ');
+/** Every text in the Markdown sheet, ours or the grower's (name, notes, material): one line, Markdown characters escaped. */
+const mdCell = markdownText;
 
 function mdTable(head: string[], rows: string[][]): string[] {
   return [`| ${head.map(mdCell).join(' | ')} |`, `| ${head.map(() => '---').join(' | ')} |`, ...rows.map((r) => `| ${r.map(mdCell).join(' | ')} |`)];
@@ -201,16 +203,17 @@ function mdTable(head: string[], rows: string[][]): string[] {
 /** The build sheet as Markdown. */
 export function buildSheetMarkdown(sizing: SizingSuccess, document: NormalizedDoc, files?: BuildSheetFiles): string {
   const c = sheetContent(sizing, document, files);
-  const out: string[] = [`# ${c.title}`, '', ...c.intro.flatMap((p) => [p, '']), '## Cautions', ''];
-  out.push(...c.cautions.map((x) => `- **${x.title}.** ${x.text}`), '', '## Sizing', '');
+  const m = mdCell;
+  const out: string[] = [`# ${m(c.title)}`, '', ...c.intro.flatMap((p) => [m(p), '']), '## Cautions', ''];
+  out.push(...c.cautions.map((x) => `- **${m(x.title)}.** ${m(x.text)}`), '', '## Sizing', '');
   for (const section of c.figures) {
-    out.push(`### ${section.title}`, '', ...mdTable(['quantity', 'value', 'unit'], section.rows.map((r) => [r.label, r.value, r.unit])), '');
+    out.push(`### ${m(section.title)}`, '', ...mdTable(['quantity', 'value', 'unit'], section.rows.map((r) => [r.label, r.value, r.unit])), '');
   }
-  out.push('Bound by:', '', ...c.boundBy.map((b) => `- ${b}`), '');
-  out.push('Warnings:', '', ...(c.warnings.length ? c.warnings.map((w) => `- ${w}`) : ['- none']), '');
-  out.push(`## ${c.bom.title}`, '', ...mdTable(c.bom.head, c.bom.rows), '');
-  out.push(`## ${c.print.title}`, '', ...mdTable(c.print.head, c.print.rows), '', ...c.printNotes.map((n) => `- ${n}`), '');
-  out.push('## Assembly', '', ...c.steps.map((step, i) => `${i + 1}. ${step}`), '');
+  out.push('Bound by:', '', ...c.boundBy.map((b) => `- ${m(b)}`), '');
+  out.push('Warnings:', '', ...(c.warnings.length ? c.warnings.map((w) => `- ${m(w)}`) : ['- none']), '');
+  out.push(`## ${m(c.bom.title)}`, '', ...mdTable(c.bom.head, c.bom.rows), '');
+  out.push(`## ${m(c.print.title)}`, '', ...mdTable(c.print.head, c.print.rows), '', ...c.printNotes.map((n) => `- ${m(n)}`), '');
+  out.push('## Assembly', '', ...c.steps.map((step, i) => `${i + 1}. ${m(step)}`), '');
   return out.join('\n');
 }
 

@@ -6,11 +6,14 @@
  * Markdown for terminals and files; HTML for a browser's print button.
  */
 import { CAUTIONS } from '../doc/cautions.ts';
+import { markdownText } from '../doc/safe-text/markdown-text.ts';
 import type { PlanResult } from './types.ts';
 
 export interface PlanReportTable {
   headers: string[];
   rows: string[][];
+  /** rows to stand out (the containers that starve), by row index; a flag, never read back from a cell's text */
+  marked?: boolean[];
 }
 
 export interface PlanReport {
@@ -116,6 +119,7 @@ export function planReport(result: PlanResult, files: Readonly<Record<string, re
         'plastic g each', 'ballast g each', 'warnings',
       ],
       rows,
+      marked: result.containers.map((c) => c.starving),
     },
     designs: { headers: ['design', 'print', 'for', 'material and plastic', 'files'], rows: designs },
     totals: { headers: ['to buy and print', 'amount'], rows: totals },
@@ -125,7 +129,8 @@ export function planReport(result: PlanResult, files: Readonly<Record<string, re
   };
 }
 
-const cell = (s: string) => s.replace(/\|/g, '\\|');
+/** Every text in the Markdown report, ours or the grower's (names, notes): one line, Markdown characters escaped. */
+const cell = markdownText;
 
 function markdownTable(t: PlanReportTable): string[] {
   return [`| ${t.headers.map(cell).join(' | ')} |`, `|${t.headers.map(() => '---').join('|')}|`, ...t.rows.map((r) => `| ${r.map(cell).join(' | ')} |`)];
@@ -133,20 +138,20 @@ function markdownTable(t: PlanReportTable): string[] {
 
 /** The report as Markdown. */
 export function planMarkdown(report: PlanReport): string {
-  const lines = [`# ${report.title}`, '', ...report.summary, '', '## Containers', '', ...markdownTable(report.containers), ''];
-  lines.push('Levels: the depth each valve holds when the tank is full and when it is at its lowest. (!) marks a container that starves.', '');
-  if (report.starving.length) lines.push('## Would starve', '', ...report.starving.map((s) => `- ${s}`), '');
+  const lines = [`# ${cell(report.title)}`, '', ...report.summary.map(cell), '', '## Containers', '', ...markdownTable(report.containers), ''];
+  lines.push('Levels: the depth each valve holds when the tank is full and when it is at its lowest. (!) after a name and STARVES in the warnings mark a container that starves.', '');
+  if (report.starving.length) lines.push('## Would starve', '', ...report.starving.map((s) => `- ${cell(s)}`), '');
   lines.push('## Designs', '', ...markdownTable(report.designs), '', '## Totals', '', ...markdownTable(report.totals), '');
-  if (report.warnings.length) lines.push('## Warnings', '', ...report.warnings.map((w) => `- ${w}`), '');
-  lines.push('## Cautions', '', ...report.cautions.map((c) => `- **${c.title}.** ${c.text}`), '');
+  if (report.warnings.length) lines.push('## Warnings', '', ...report.warnings.map((w) => `- ${cell(w)}`), '');
+  lines.push('## Cautions', '', ...report.cautions.map((c) => `- **${cell(c.title)}.** ${cell(c.text)}`), '');
   return lines.join('\n');
 }
 
 const esc = (s: string) => s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;');
 
-function htmlTable(t: PlanReportTable, marked: (row: string[]) => boolean = () => false): string {
+function htmlTable(t: PlanReportTable): string {
   const head = `<tr>${t.headers.map((h) => `<th>${esc(h)}</th>`).join('')}</tr>`;
-  const body = t.rows.map((r) => `<tr${marked(r) ? ' class="starving"' : ''}>${r.map((c) => `<td>${esc(c)}</td>`).join('')}</tr>`).join('\n');
+  const body = t.rows.map((r, i) => `<tr${t.marked?.[i] ? ' class="starving"' : ''}>${r.map((c) => `<td>${esc(c)}</td>`).join('')}</tr>`).join('\n');
   return `<table>\n<thead>${head}</thead>\n<tbody>\n${body}\n</tbody>\n</table>`;
 }
 
@@ -167,7 +172,7 @@ tr.starving td { background: #fde2e2; font-weight: 600; }
 <h1>${esc(report.title)}</h1>
 ${report.summary.map((s) => `<p>${esc(s)}</p>`).join('\n')}
 <h2>Containers</h2>
-${htmlTable(report.containers, (r) => r[0]!.endsWith('(!)'))}
+${htmlTable(report.containers)}
 ${report.starving.length ? `<h2>Would starve</h2>${list(report.starving)}` : ''}
 <h2>Designs</h2>
 ${htmlTable(report.designs)}

@@ -21,6 +21,7 @@
  *     "reservoirArea": "0.08 m2", "rise": "20 mm" } ] }
  * ```
  */
+import { nameKey } from '../doc/safe-text/name-key.ts';
 import { z } from 'zod';
 import {
   lengthField,
@@ -52,6 +53,14 @@ export const PLAN_FIELD_SPECS = {
 
 export const DEFAULT_STARVING_SHARE = 0.5;
 export const MAX_CONTAINERS = 500;
+/**
+ * Most valves one plan may hold (every row's count added up). A bench a grower
+ * builds and tends by hand is tens to a few hundred containers; 1000 valves is
+ * about 4000 printed parts and 80 kg of filament, months on one printer, and
+ * keeps the plate set (a 3MF per bed of parts) to some hundreds of files, where
+ * 500 rows x 1000 would write gigabytes. Common practice, not a physical limit.
+ */
+export const MAX_VALVES = 1000;
 
 /**
  * Container fields that are design fields under another name:
@@ -295,9 +304,12 @@ export function parsePlan(doc: unknown): PlanParse {
     if (c) {
       if (c.name === undefined || c.name.trim() === '') {
         errors.push({ field: `${at}.name`, message: 'missing; give each container a name, e.g. "top shelf".' });
-      } else if (names.has(c.name)) {
-        errors.push({ field: `${at}.name`, message: `${showInput(c.name)} is already the name of containers.${names.get(c.name)}; give each row its own name.` });
-      } else names.set(c.name, i);
+      } else if (names.has(nameKey(c.name))) {
+        // compared as people read them: case, spaces and Unicode form do not make two names (refused, not merged:
+        // rows with one name would share one line of the report and one folder name)
+        const first = names.get(nameKey(c.name))!;
+        errors.push({ field: `${at}.name`, message: `${showInput(c.name)} is already the name of containers.${first} (${showInput(rows[first]?.name)}; names differing only in case, spaces or accents count as one); give each row its own name.` });
+      } else names.set(nameKey(c.name), i);
       if (!Number.isInteger(c.count.si)) {
         errors.push({ field: `${at}.count`, message: `${formatNumber(c.count.si)} is not a whole number; ${S.count.label} must be a whole number from 1 to ${S.count.max}.` });
       }
@@ -320,6 +332,15 @@ export function parsePlan(doc: unknown): PlanParse {
   });
 
   if (errors.length) return { ok: false, errors };
+
+  const valves = containers.reduce((n, c) => n + c.count, 0);
+  if (valves > MAX_VALVES) {
+    errors.push({
+      field: 'containers',
+      message: `the rows hold ${valves} valves in all; a plan holds at most ${MAX_VALVES} (${MAX_VALVES} valves is about ${MAX_VALVES * 4} printed parts, months of printing on one printer). Split the bench into plans of at most ${MAX_VALVES} valves, each fed by its own tank or main.`,
+    });
+    return { ok: false, errors };
+  }
 
   // A container above the low tank surface gets no water; say so at the door (the exact tip comes later).
   containers.forEach((c) => {

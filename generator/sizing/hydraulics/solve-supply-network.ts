@@ -1,4 +1,4 @@
-import { ORIFICE_DISCHARGE_COEFFICIENT, SHARP_ENTRANCE_LOSS, STANDARD_GRAVITY, TUBE_ROUGHNESS_M } from '../constants.ts';
+import { ORIFICE_DISCHARGE_COEFFICIENT, SHARP_ENTRANCE_LOSS, TUBE_ROUGHNESS_M } from '../constants.ts';
 import { checkRange } from './check-range.ts';
 import { MAX_RELATIVE_ROUGHNESS } from './colebrook-friction-factor.ts';
 import { flowRegime, type FlowRegime } from './flow-regime.ts';
@@ -60,7 +60,7 @@ export interface SupplyNetworkResult {
   branches: NetworkBranchResult[];
   /** flow leaving the tank into the main, L/h (equals the sum of the branch totals) */
   mainFlowLph: number;
-  /** true when the tank-outflow bracket shrank to 1e-10 (relative) */
+  /** true when the far-head bracket shrank to 1e-10 (relative to the head span searched) */
   converged: boolean;
   /** marches of the main taken by the outer root search */
   iterations: number;
@@ -77,15 +77,18 @@ const RELATIVE_TOLERANCE = 1e-10;
  * downstream of it (Darcy-Weisbach with darcyFrictionFactor; tee losses neglected). A valve
  * whose tip lies above the head at its tee gets zero flow.
  *
- * Method: single-unknown shooting. Guess the tank outflow Q; march down the main tee by
- * tee, taking each segment's loss at the flow still in it and each valve's flow from the head
- * at its tee (an inner bracketed solve of the single-line energy balance); what is left after the
- * last tee, R(Q), increases with Q (more outflow lowers every tee head, so every draw falls),
- * R(0) <= 0 and R(sum of orifice-only flows at full tank head) >= 0, so a bracketed search on Q finds
- * the one solution. Both root searches keep a bracket and use the Illinois variant of
- * regula falsi (as sure as bisection, far fewer marches). Sources, from memory: energy equation for
- * pipes in series and branching pipes (White, Fluid Mechanics, ch. 6); Illinois method
- * (Dowell and Jarratt 1971, BIT 11:168-174).
+ * Method: single-unknown shooting from the far end. Guess the energy head E_far at the farthest
+ * tee; march up the main tee by tee, each valve's flow from the head at its tee (an inner bracketed
+ * solve of the single-line energy balance), each segment's loss at the sum of the flows drawn beyond
+ * it, to the tank surface this needs, E_tank(E_far). It increases with E_far (a higher far head
+ * raises every draw and every loss upstream), equals E_far below the lowest tip (no flow), and is at
+ * least E_tank at E_far = E_tank, so a bracketed search on E_far finds the one solution. Marching
+ * this way, every segment's flow is the sum of draws beyond it: never negative, flow conserved
+ * exactly, and no head ever above the tank (a march from the tank with a guessed outflow could run
+ * the main dry part way and, with 150 rows of 1000 valves, overflow to an infinite head). Both root
+ * searches keep a bracket and use the Illinois variant of regula falsi (as sure as bisection, far fewer
+ * marches). Sources, from memory: energy equation for pipes in series and branching pipes (White, Fluid
+ * Mechanics, ch. 6); Illinois method (Dowell and Jarratt 1971, BIT 11:168-174).
  *
  * Example: one valve on a tee 3 m along an 8 mm main (K_in 0.5), branch tube 4 mm x 2 m,
  * 3 mm orifice, tank 0.35 m above the tip, water at 20 C: 23.51 L/h, 0.3296 m of head at the tee,
@@ -135,35 +138,45 @@ export function solveSupplyNetwork(opts: SupplyNetworkOptions): SupplyNetworkRes
   const valveFlows = new Array<number>(branches.length).fill(0);
   const teeHeads = new Array<number>(branches.length).fill(tankM);
 
-  /** Head lost along a main segment, with the sign of its flow (a backward guess raises the head). */
+  /** Head lost along a main segment carrying flowM3s (>= 0: the draws downstream of it). */
   const mainLossM = (flowM3s: number, lengthM: number, minorLossK: number): number =>
-    Math.sign(flowM3s) *
-    tubeHeadLossM({ flowM3s: Math.abs(flowM3s), innerDiameterM: mainD, lengthM, densityKgM3, viscosityPaS, roughnessM, minorLossK });
+    flowM3s > 0 ? tubeHeadLossM({ flowM3s, innerDiameterM: mainD, lengthM, densityKgM3, viscosityPaS, roughnessM, minorLossK }) : 0;
 
-  /** March from the tank with outflow Q; fills valveFlows and teeHeads; returns the flow left after the last tee. */
-  const leftoverM3s = (tankOutflowM3s: number): number => {
-    let headM = tankM;
-    let inMainM3s = tankOutflowM3s;
-    let positionM = 0;
-    alongMain.forEach((b, k) => {
-      headM -= mainLossM(inMainM3s, b.mainLengthM - positionM, k === 0 ? entranceLossK : 0);
-      positionM = b.mainLengthM;
+  let mainFlowM3s = 0;
+  let overshootM = Infinity;
+  /**
+   * March up the main from the far tee, given the energy head there; fills valveFlows and
+   * teeHeads and returns the tank surface this needs. Every segment carries the sum of the
+   * draws beyond it, so flow is conserved by construction and no flow is ever negative.
+   */
+  const tankHeadFor = (farHeadM: number): number => {
+    let headM = farHeadM;
+    let inMainM3s = 0;
+    for (let k = alongMain.length - 1; k >= 0; k--) {
+      const b = alongMain[k]!;
+      if (k < alongMain.length - 1) headM += mainLossM(inMainM3s, alongMain[k + 1]!.mainLengthM - b.mainLengthM, 0);
+      // far above the tank already: this guess is too high whatever lies upstream (marching on could overflow)
+      if (headM > tankM + overshootM) return headM;
       const q = b.count > 0 ? valveFlowM3s({ ...b.line, headM: headM - b.tipElevationM }, RELATIVE_TOLERANCE * 1e-2, 'illinois') : 0;
       valveFlows[b.index] = q;
       teeHeads[b.index] = headM;
-      inMainM3s -= b.count * q;
-    });
-    return inMainM3s;
+      inMainM3s += b.count * q;
+    }
+    mainFlowM3s = inMainM3s;
+    return alongMain.length ? headM + mainLossM(inMainM3s, alongMain[0]!.mainLengthM, entranceLossK) : headM;
   };
 
-  // Upper bracket: every valve's orifice-only flow at the full tank head.
-  const upperM3s = alongMain.reduce((sum, b) => {
-    const headM = tankM - b.tipElevationM;
-    const orificeAreaM2 = 0.25 * Math.PI * b.line.orificeM ** 2;
-    return headM > 0 ? sum + b.count * cd * orificeAreaM2 * Math.sqrt(2 * STANDARD_GRAVITY * headM) : sum;
-  }, 0);
-  const solved = upperM3s > 0 ? illinoisIncreasing(leftoverM3s, 0, upperM3s, RELATIVE_TOLERANCE) : { root: 0, iterations: 0, converged: true };
-  leftoverM3s(solved.root); // leave the arrays at the answer
+  // Below the lowest drawing tip nothing flows and the tank head needed equals the far head; at the tank's
+  // own head it is at least the tank's. The far head is searched between, relative to the lower end.
+  const drawing = alongMain.filter((b) => b.count > 0);
+  const lowestM = Math.min(tankM, ...drawing.map((b) => b.tipElevationM));
+  const spanM = tankM - lowestM;
+  overshootM = Math.max(spanM, 1);
+  const solved =
+    drawing.length > 0 && spanM > 0
+      ? illinoisIncreasing((d) => tankHeadFor(lowestM + d) - tankM, 0, spanM, RELATIVE_TOLERANCE)
+      : { root: spanM, iterations: 0, converged: true };
+  tankHeadFor(lowestM + solved.root); // leave the arrays at the answer
 
   const results = branches.map((b): NetworkBranchResult => {
     const flowM3s = valveFlows[b.index]!;
@@ -179,7 +192,7 @@ export function solveSupplyNetwork(opts: SupplyNetworkOptions): SupplyNetworkRes
   });
   return {
     branches: results,
-    mainFlowLph: solved.root * 3.6e6,
+    mainFlowLph: mainFlowM3s * 3.6e6,
     converged: solved.converged,
     iterations: solved.iterations,
   };

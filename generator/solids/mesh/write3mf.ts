@@ -17,6 +17,7 @@
  * arrangement that does not fit the plate.
  */
 import { strToU8, zipSync } from 'fflate';
+import { xmlText } from '../../doc/safe-text/xml-text.ts';
 import { countEdgeUses } from './count-edge-uses.ts';
 import { formatFloat32 } from './format-float32.ts';
 import { isIndexedMesh } from './is-indexed-mesh.ts';
@@ -153,6 +154,7 @@ function appendMesh(out: string[], mesh: IndexedMesh, offset: number[]): void {
   out.push('    </triangles>\n');
 }
 
+/** Names and the title as XML text: characters XML 1.0 forbids become U+FFFD (xmlText), then & < > " ' are escaped. */
 function escapeXml(text: string): string {
-  return text.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&apos;' })[c] as string);
+  return xmlText(text).replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&apos;' })[c] as string);
 }
