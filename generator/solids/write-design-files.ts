@@ -14,7 +14,8 @@
  *
  * Options: quality ('preview' | 'export', required); baseName (default: the
  * design's name made file-safe, else "float-valve"); withPad (default false:
- * also write the printed seal pad).
+ * also write the printed seal pad); signal (default none: an AbortSignal that
+ * stops the run between steps, undoing what it wrote).
  */
 import { randomBytes } from 'node:crypto';
 import { lstat, mkdir, rename, rm, writeFile } from 'node:fs/promises';
@@ -40,6 +41,8 @@ export interface WriteDesignOptions {
   quality: Quality;
   baseName?: string;
   withPad?: boolean;
+  /** stop when aborted (Ctrl-C): checked before each step; the folder is put back as it was */
+  signal?: AbortSignal;
 }
 
 export interface WrittenPart {
@@ -145,6 +148,8 @@ export async function writeDesignFiles(
   contents.push({ file: `${base}-build-sheet.md`, bytes: buildSheetMarkdown(sizing, document, sheetFiles), what: 'build sheet' });
   contents.push({ file: `${base}-build-sheet.html`, bytes: buildSheetHtml(sizing, document, sheetFiles), what: 'build sheet' });
 
+  const stop = () => options.signal?.throwIfAborted();
+  stop();
   await mkdir(dir, { recursive: true });
   const tag = `${process.pid}-${randomBytes(4).toString('hex')}`;
   const temps: string[] = [];
@@ -154,6 +159,7 @@ export async function writeDesignFiles(
   const backups: { target: string; backup: string }[] = [];
   try {
     for (const c of contents) {
+      stop();
       const temp = join(dir, `.${c.file}.${tag}.tmp`);
       temps.push(temp);
       try {
@@ -168,6 +174,7 @@ export async function writeDesignFiles(
       if (info && !info.isFile()) throw new Error(`${c.what} (${c.file}): something that is not a file already has this name in ${dir}; move it away`);
     }
     for (let i = 0; i < contents.length; i++) {
+      stop();
       const target = join(dir, contents[i].file);
       const backup = join(dir, `.${contents[i].file}.${tag}.bak`);
       try {

@@ -57,7 +57,7 @@ describe('floatwright plan', () => {
     expect(run.stderr).toBe(''); // no progress bar when not at a terminal or with --json
 
     const top = readdirSync(out).sort();
-    expect(top).toEqual(['d1-top-tier', 'd2-middle-tier', 'd3-bottom-tier', 'd4-deck-buckets', 'plan-report.html', 'plan-report.md', 'plan.json', 'plates']);
+    expect(top).toEqual(['.floatwright-output', 'd1-top-tier', 'd2-middle-tier', 'd3-bottom-tier', 'd4-deck-buckets', 'plan-report.html', 'plan-report.md', 'plan.json', 'plates']);
     // The plate set holds every part to print once: 4 parts x 11 valves. 3MF is a zip with 3D/3dmodel.model
     // (3MF Core Specification), read here with fflate's unzip and a count of <object> elements.
     let objects = 0;

@@ -4,12 +4,12 @@
  */
 import type { FieldError } from '../../doc/fields.ts';
 import { sizeDesign } from '../../sizing/size-design.ts';
-import { PartBuildError } from '../../solids/build-parts.ts';
 import { writeDesignFiles } from '../../solids/write-design-files.ts';
 import { EXIT_INPUT, EXIT_OK, type Command, type Io } from '../command.ts';
 import { readCommandLine, reportInputErrors } from '../command-line.ts';
 import { DESIGN_OPTIONS, designFlagsHelp, flagForField, loadDesign } from '../design-input.ts';
 import { fixed, formatCautions, formatFailureText } from '../../doc/format-sizing.ts';
+import { writeIntoOutFolder } from '../output/write-into-out-folder.ts';
 
 const OPTIONS = {
   ...DESIGN_OPTIONS,
@@ -29,7 +29,8 @@ per part (housing, float, nozzle insert, retainer pin) in print orientation, a
 (Markdown and a printable HTML page). Files are named after the design.
 
   --design FILE            design document (JSON); flags below override its values
-  --out DIR                folder for the files (made if missing)
+  --out DIR                folder for the files (made if missing, with a marker file
+                           .floatwright-output; a file or a symbolic link is refused)
   --quality Q              export (default: chord error at most 0.05 mm) or preview (coarse, quick)
   --with-pad               also write the seal pad's disc as a cutting template (the pad itself is cut from sponge or rubber sheet)
 ${designFlagsHelp()}
@@ -41,8 +42,9 @@ Examples:
   floatwright build --design presets/rooftop-tubs.json --out out/rooftop
   floatwright build --design presets/bucket-tote.json --out out/tote --quality preview --json
 
-Exit status: 0 written; 2 bad input, no size fits, or a part could not be built (nothing is written then);
-1 a fault in floatwright.
+Exit status: 0 written; 2 bad input, no size fits, a part could not be built, the folder
+is busy (another run writes there) or cannot be written (nothing is written then);
+130 / 143 stopped by Ctrl-C / SIGTERM (the earlier files are put back); 1 a fault in floatwright.
 `;
 
 const STYLE = { command: 'build', subject: 'the design', flagFor: flagForField, help: HELP };
@@ -72,33 +74,28 @@ async function run(argv: string[], io: Io): Promise<number> {
     return EXIT_INPUT;
   }
 
-  let written;
-  try {
-    written = await writeDesignFiles(result, parsed.document, out as string, {
-      quality: quality as 'export' | 'preview',
-      withPad: values['with-pad'] === true,
-    });
-  } catch (error) {
-    if (!(error instanceof PartBuildError) && !(error instanceof Error && /^(3MF plate|design document|build sheet|\w+ STL)/.test(error.message))) {
-      if (!(error as NodeJS.ErrnoException)?.code) throw error;
-    }
-    const message = error instanceof Error ? error.message : String(error);
-    if (json) io.out(`${JSON.stringify({ ok: false, errors: [{ field: error instanceof PartBuildError ? error.part : 'files', message }] }, null, 2)}\n`);
-    else io.err(`floatwright build: could not write the files, so none were written. ${message}\n`);
-    return EXIT_INPUT;
+  const written = await writeIntoOutFolder(out as string, (dir, signal) =>
+    writeDesignFiles(result, parsed.document, dir, { quality: quality as 'export' | 'preview', withPad: values['with-pad'] === true, signal }),
+  );
+  if (!written.ok) {
+    const { field, message, status } = written;
+    if (json) io.out(`${JSON.stringify({ ok: false, errors: [{ field, message }] }, null, 2)}\n`);
+    else io.err(`floatwright build: ${message}\n`);
+    return status;
   }
 
   if (json) {
     // the sizing result's part dimensions move to `partSpecs`; `parts` lists the files written
     const { parts: partSpecs, ...rest } = result;
-    io.out(`${JSON.stringify({ ...rest, partSpecs, parts: written.parts, files: written.files }, null, 2)}\n`);
+    io.out(`${JSON.stringify({ ...rest, partSpecs, parts: written.value.parts, files: written.value.files }, null, 2)}\n`);
     return EXIT_OK;
   }
-  const rows = written.parts.map(
+  const { parts, files } = written.value;
+  const rows = parts.map(
     (p) =>
       `  ${p.name.padEnd(8)} ${fixed(p.volumeMm3 / 1000, 2).padStart(8)} cm3 ${fixed(p.massG, 1).padStart(7)} g ${String(p.triangles).padStart(7)} triangles  ${p.file}`,
   );
-  const others = written.files.filter((f) => !written.parts.some((p) => p.file === f));
+  const others = files.filter((f) => !parts.some((p) => p.file === f));
   io.out(
     [
       `floatwright build: ${parsed.document.name ?? 'design'} (${quality} quality)`,

@@ -5,9 +5,9 @@
  * design plus the plan report. Files are written into a temporary folder next
  * to DIR and renamed into place only when everything is written.
  */
-import { mkdir, mkdtemp, readdir, rename, rm, writeFile } from 'node:fs/promises';
+import { mkdtemp, readdir, rename, rm, writeFile } from 'node:fs/promises';
 import { availableParallelism } from 'node:os';
-import { basename, dirname, join, resolve } from 'node:path';
+import { basename, dirname, join } from 'node:path';
 import type { FieldError } from '../../doc/fields.ts';
 import { ROOT_FIELD } from '../../doc/fields.ts';
 import { parsePlan, PLAN_ROOT_FIELD } from '../../plan/schema.ts';
@@ -19,6 +19,11 @@ import { EXIT_INPUT, EXIT_OK, type Command, type Io } from '../command.ts';
 import { readCommandLine, reportInputErrors } from '../command-line.ts';
 import { readDesignFile } from '../design-input.ts';
 import type { BuildPool, DesignJob } from '../plan/build-designs.ts';
+import { catchInterrupt, type Interrupt } from '../output/interrupt.ts';
+import { isBookkeeping, openOutFolder, type OutFolder } from '../output/open-out-folder.ts';
+import { takeLock } from '../output/out-lock.ts';
+import { writeMarker } from '../output/out-marker.ts';
+import { failureOutcome } from '../output/write-into-out-folder.ts';
 
 const OPTIONS = {
   out: { type: 'string', short: 'o' },
@@ -43,13 +48,16 @@ that would starve, and totals the plastic and ballast.
                            and the plan report (plan-report.md / .html, plan.json) into DIR;
                            without it only the report is printed
   --quality Q              export (default; 0.05 mm chord error) or preview (coarser, faster)
-  --force                  replace DIR if it already holds files
+  --force                  replace DIR if it holds an earlier floatwright output (its marker
+                           file .floatwright-output lists everything in it); a folder holding
+                           anything else, a file or a symbolic link is never replaced
   --json                   print {"ok", "containers", "designs", "totals"} on standard output
   --debug                  show the stack trace if floatwright itself fails
   -h, --help               show this help
 
-Exit status: 0 planned; 2 bad input or a container no size fits (nothing is
-written); 1 a fault in floatwright.
+Exit status: 0 planned; 2 bad input, a container no size fits, DIR busy (another
+run writes there), refused or not writable (nothing is written); 130 / 143 stopped
+by Ctrl-C / SIGTERM (DIR keeps its earlier files); 1 a fault in floatwright.
 `;
 
 const QUALITIES = ['export', 'preview'] as const;
@@ -60,17 +68,6 @@ const inputErrors = (errors: FieldError[], json: boolean, io: Io, subject?: stri
 /** A folder name from a container name: "top tier" -> "top-tier". */
 function slug(text: string): string {
   return text.toLowerCase().normalize('NFKD').replace(/[^a-z0-9]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 40) || 'design';
-}
-
-async function isEmptyOrMissing(dir: string): Promise<boolean> {
-  try {
-    return (await readdir(dir)).length === 0;
-  } catch (error) {
-    const code = (error as NodeJS.ErrnoException).code;
-    if (code === 'ENOENT') return true;
-    if (code === 'ENOTDIR') return false;
-    throw error;
-  }
 }
 
 /** A progress bar on standard error, only for a person at a terminal. */
@@ -95,23 +92,37 @@ export interface WritePlanOptions {
   threads?: number;
   /** extra keys for plan.json */
   extra?: Record<string, unknown>;
-  /** build workers started earlier (startBuildPool), left open for the caller to close */
+  /** build workers started earlier (startBuildPool), left open for the caller to close (closed early if the run is stopped) */
   pool?: BuildPool;
+  /** the output folder, already opened (openOutFolder with replace); default: opened here */
+  folder?: OutFolder;
+  /** stops the run (Ctrl-C): the new files are removed and the earlier folder stays */
+  signal?: AbortSignal;
 }
 
 /**
  * Builds every design of a solved plan and writes the plan folder: a
- * temporary folder beside `out`, renamed into place at the end (with
- * `force`, an existing `out` is replaced only after the new one is complete).
+ * temporary folder beside `out` (with its own marker and lock), swapped into
+ * place at the end, so `out` holds the earlier files or the new ones, never a
+ * mix. The folder is opened with openOutFolder: never a link or a file; with
+ * `force`, an earlier floatwright output is replaced, nothing else.
  * Returns the files per design.
  */
 export async function writePlanFolder(opts: WritePlanOptions): Promise<{ files: Record<string, string[]>; plates: string[]; triangles: number; threads: number }> {
   const { buildDesigns } = await import('../plan/build-designs.ts');
-  const { result } = opts;
-  const out = resolve(opts.out);
-  await mkdir(dirname(out), { recursive: true });
+  const { result, signal } = opts;
+  const folder = opts.folder ?? (await openOutFolder(opts.out, { shownAs: opts.out, replace: true, force: opts.force }));
+  const out = folder.path;
+  const stopped = new Promise<never>((_, reject) => {
+    if (signal?.aborted) reject(signal.reason);
+    signal?.addEventListener('abort', () => reject(signal.reason), { once: true });
+  });
+  stopped.catch(() => {});
   const temp = await mkdtemp(join(dirname(out), `.${basename(out)}.partial-`));
+  let building: Promise<unknown> | null = null;
   try {
+    await writeMarker(temp, []);
+    await takeLock(temp, opts.out);
     const used = new Set<string>();
     const jobs: DesignJob[] = result.designs.map((d) => {
       const first = result.containers.find((c) => c.index === d.containerIndices[0])!;
@@ -129,7 +140,10 @@ export async function writePlanFolder(opts: WritePlanOptions): Promise<{ files: 
         quantity: d.quantity,
       };
     });
-    const built = await buildDesigns({ jobs, root: temp, quality: opts.quality, onProgress: opts.onProgress, threads: opts.threads, pool: opts.pool });
+    const designs = buildDesigns({ jobs, root: temp, quality: opts.quality, onProgress: opts.onProgress, threads: opts.threads, pool: opts.pool, signal });
+    building = designs;
+    const built = await Promise.race([designs, stopped]);
+    signal?.throwIfAborted();
     const { writePlateSet } = await import('../plan/plate-set.ts');
     const plates = await writePlateSet(
       temp,
@@ -143,20 +157,27 @@ export async function writePlanFolder(opts: WritePlanOptions): Promise<{ files: 
     await writeFile(join(temp, 'plan-report.md'), planMarkdown(report));
     await writeFile(join(temp, 'plan-report.html'), planHtml(report));
     await writeFile(join(temp, 'plan.json'), `${JSON.stringify(planJson(result, built.files, { ...opts.extra, plates }), null, 2)}\n`);
+    const entries = (await readdir(temp)).filter((n) => !isBookkeeping(n));
+    await writeMarker(temp, entries);
+    signal?.throwIfAborted();
 
-    if (await isEmptyOrMissing(out)) {
-      await rm(out, { recursive: true, force: true });
+    // The swap: the earlier folder (holding this run's lock) aside, the new one (holding its own) in.
+    const old = `${temp}-old`;
+    await rename(out, old);
+    try {
       await rename(temp, out);
-    } else {
-      if (!opts.force) throw new Error(`${out} is not empty`); // checked before building; a race lands here
-      const old = `${temp}-old`;
-      await rename(out, old);
-      await rename(temp, out);
-      await rm(old, { recursive: true, force: true });
+    } catch (error) {
+      await rename(old, out);
+      throw error;
     }
+    await rm(old, { recursive: true, force: true });
+    await folder.finish(entries, { replaceListing: true });
     return { ...built, plates };
   } catch (error) {
+    if (signal?.aborted) await opts.pool?.close(); // its workers write into temp: stop them before it is removed
+    await building?.catch(() => {}); // and this thread's own design (it stops at its next step)
     await rm(temp, { recursive: true, force: true });
+    if (!opts.folder) await folder.abandon();
     throw error;
   }
 }
@@ -178,20 +199,45 @@ async function run(argv: string[], io: Io): Promise<number> {
     return inputErrors([{ field: '--quality', message: `${JSON.stringify(quality)} is not a quality; give export or preview.` }], json, io, 'the command line');
   }
   const out = typeof values.out === 'string' ? values.out : null;
-  if (out !== null && !values.force && !(await isEmptyOrMissing(resolve(out)))) {
-    return inputErrors([{ field: '--out', message: `"${out}" already holds files; choose a new folder, empty it, or add --force to replace it.` }], json, io, 'the command line');
+  if (out !== null && out.trim() === '') {
+    return inputErrors([{ field: '--out', message: 'empty; give the folder to write the plan into, e.g. --out bench.' }], json, io, 'the command line');
+  }
+  // The folder is checked and locked first: a busy or refused folder costs no solving.
+  const interrupt = out !== null ? catchInterrupt() : null;
+  let folder: OutFolder | null = null;
+  if (out !== null) {
+    try {
+      folder = await openOutFolder(out, { shownAs: out, replace: true, force: values.force === true });
+    } catch (error) {
+      interrupt?.dispose();
+      const failed = failureOutcome(error, out, null);
+      return inputErrors([{ field: failed.field, message: failed.message }], json, io, 'the command line');
+    }
   }
 
   // Start the build workers now, so they warm up while the plan is checked and solved.
   const pool = out !== null && availableParallelism() > 1 ? (await import('../plan/build-designs.ts')).startBuildPool() : null;
+  let status = EXIT_INPUT;
   try {
-    return await planAndWrite(positionals[0]!, out, quality as 'export' | 'preview', values.force === true, json, io, pool);
+    status = await planAndWrite(positionals[0]!, out, quality as 'export' | 'preview', json, io, pool, folder, interrupt);
+    return status;
   } finally {
+    if (status !== EXIT_OK) await folder?.abandon();
+    interrupt?.dispose();
     await pool?.close();
   }
 }
 
-async function planAndWrite(file: string, out: string | null, quality: 'export' | 'preview', force: boolean, json: boolean, io: Io, pool: BuildPool | null): Promise<number> {
+async function planAndWrite(
+  file: string,
+  out: string | null,
+  quality: 'export' | 'preview',
+  json: boolean,
+  io: Io,
+  pool: BuildPool | null,
+  folder: OutFolder | null,
+  interrupt: Interrupt | null,
+): Promise<number> {
   const read = await readDesignFile(file);
   if (!read.ok) {
     return inputErrors(read.errors.map((e) => ({ ...e, field: e.field === ROOT_FIELD ? PLAN_ROOT_FIELD : e.field, message: e.message.replace('a design document', 'a plan document').replace('the design file', 'the plan file') })), json, io);
@@ -215,7 +261,16 @@ async function planAndWrite(file: string, out: string | null, quality: 'export' 
     const bar = progressBar(io, !json && process.stdout.isTTY === true);
     const started = performance.now();
     // One design builds in this thread; more go to the pool.
-    const built = await writePlanFolder({ result, out, quality, force, onProgress: bar.update, ...(pool && result.designs.length > 1 ? { pool } : { threads: 1 }) });
+    let built;
+    try {
+      built = await writePlanFolder({ result, out, quality, folder: folder!, signal: interrupt!.signal, onProgress: bar.update, ...(pool && result.designs.length > 1 ? { pool } : { threads: 1 }) });
+    } catch (error) {
+      bar.done();
+      const failed = failureOutcome(error, out, interrupt);
+      if (json) io.out(`${JSON.stringify({ ok: false, errors: [{ field: failed.field, message: failed.message }] }, null, 2)}\n`);
+      else io.err(`floatwright plan: ${failed.message}\n`);
+      return failed.status;
+    }
     bar.done();
     files = built.files;
     plates = built.plates;

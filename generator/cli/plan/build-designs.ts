@@ -58,6 +58,8 @@ export interface BuildDesignsOptions {
   threads?: number;
   /** an already started pool (left open: the caller closes it) */
   pool?: BuildPool;
+  /** stops the designs built on this thread between steps (the caller closes the pool to stop the workers) */
+  signal?: AbortSignal;
 }
 
 /** Files written per design id (paths relative to root), and triangles in all. */
@@ -80,7 +82,7 @@ export async function buildDesigns(opts: BuildDesignsOptions): Promise<BuildDesi
   const threads = opts.pool ? opts.pool.workers.length + 1 : Math.max(1, Math.min(opts.threads ?? availableParallelism(), jobs.length));
   if (!opts.pool && (jobs.length <= 1 || threads === 1)) {
     for (const job of jobs) {
-      const r = await writeDesignFiles({ ...job, dir: join(root, job.folder) });
+      const r = await writeDesignFiles({ ...job, dir: join(root, job.folder), signal: opts.signal });
       record(job, r.files, r.triangles);
     }
     return { files, triangles, threads: 1 };
@@ -93,7 +95,7 @@ export async function buildDesigns(opts: BuildDesignsOptions): Promise<BuildDesi
   // This thread takes jobs from the same queue while the workers do.
   const local = async () => {
     for (let job = queue.shift(); job; job = queue.shift()) {
-      const r = await writeDesignFiles({ ...job, dir: join(root, job.folder) });
+      const r = await writeDesignFiles({ ...job, dir: join(root, job.folder), signal: opts.signal });
       record(job, r.files, r.triangles);
     }
   };

@@ -20,10 +20,12 @@ export interface DesignFilesOptions {
   quality: Quality;
   /** valves to print from this set (shown in the document's name) */
   quantity: number;
+  /** stops the writing between steps (Ctrl-C) */
+  signal?: AbortSignal;
 }
 
 /** Writes the set and returns the file names written (relative to `dir`) and the triangle count. */
 export async function writeDesignFiles(opts: DesignFilesOptions): Promise<{ files: string[]; triangles: number }> {
-  const written = await writeFileSet(opts.sizing, opts.document, opts.dir, { quality: opts.quality, baseName: opts.prefix });
+  const written = await writeFileSet(opts.sizing, opts.document, opts.dir, { quality: opts.quality, baseName: opts.prefix, signal: opts.signal });
   return { files: written.files.map((f) => basename(f)), triangles: written.parts.reduce((n, p) => n + p.triangles, 0) };
 }
