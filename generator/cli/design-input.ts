@@ -3,7 +3,8 @@
  * and flags that override single values in it. Shared by every command that
  * takes a design (size, build).
  */
-import { open } from 'node:fs/promises';
+import { constants } from 'node:fs';
+import { open, stat } from 'node:fs/promises';
 import type { ParseArgsConfig } from 'node:util';
 import { closestKey, ROOT_FIELD, type FieldError } from '../doc/fields.ts';
 import { mergeOverrides, parseDesign, type DesignParse } from '../doc/schema.ts';
@@ -60,10 +61,15 @@ export async function readDesignFile(path: string): Promise<FileRead> {
   const fail = (message: string): FileRead => ({ ok: false, errors: [{ field: ROOT_FIELD, message }] });
   let text: string;
   try {
-    const handle = await open(path, 'r');
+    // Looked at before it is opened: opening a FIFO waits for a writer for ever, a device may never end.
+    const first = await stat(path);
+    if (first.isDirectory()) return fail(`"${path}" is a folder, not a file; give the path of a design document (.json).`);
+    if (!first.isFile()) return fail(`"${path}" is not a regular file (a pipe, a device or a socket); give the path of a design document (.json).`);
+    // O_NONBLOCK: should it be swapped for a FIFO after the look, opening still returns at once
+    const handle = await open(path, constants.O_RDONLY | constants.O_NONBLOCK);
     try {
       const info = await handle.stat();
-      if (!info.isFile()) return fail(`"${path}" is not a file; give the path of a design document (.json).`);
+      if (!info.isFile()) return fail(`"${path}" is not a regular file (a pipe, a device or a socket); give the path of a design document (.json).`);
       if (info.size > MAX_DESIGN_BYTES) {
         return fail(`"${path}" is ${(info.size / 1024 / 1024).toFixed(1)} MB; a design document must be at most 1 MB.`);
       }
@@ -76,7 +82,10 @@ export async function readDesignFile(path: string): Promise<FileRead> {
     if (code === 'ENOENT') return fail(`cannot find "${path}"; check the path of the design file.`);
     if (code === 'EACCES' || code === 'EPERM') return fail(`cannot read "${path}": permission denied.`);
     if (code === 'EISDIR') return fail(`"${path}" is a folder; give the path of a design document (.json).`);
-    return fail(`cannot read "${path}" (${code ?? (error as Error).message}).`);
+    if (code === 'ENAMETOOLONG') return fail(`cannot read "${path}": the name is too long for the file system.`);
+    if (code === 'ENOTDIR') return fail(`cannot read "${path}": part of the path is a file, not a folder.`);
+    if (code === 'ELOOP') return fail(`cannot read "${path}": too many symbolic links in the path.`);
+    return fail(`cannot read "${path}"; check the path and that the file can be read.`);
   }
   if (text.length > MAX_DESIGN_BYTES) return fail(`"${path}" is larger than 1 MB; a design document must be at most 1 MB.`);
   const body = text.replace(/^\uFEFF/, '');

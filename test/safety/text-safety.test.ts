@@ -94,3 +94,34 @@ describe('Markdown, terminal and name keys', () => {
     expect(cleanName(' a \t b ')).toBe('a b');
   });
 });
+
+describe('where the text lands', () => {
+  it('build sheet Markdown: a newline and "#" in the name or notes never start a heading (CommonMark 4.2)', async () => {
+    const { parseDesign } = await import('../../generator/doc/schema.ts');
+    const { sizeDesign } = await import('../../generator/sizing/size-design.ts');
+    const { buildSheetMarkdown } = await import('../../generator/doc/build-sheet.ts');
+    const parsed = parseDesign({ name: 'tubs\n# injected name', notes: 'line one\n## injected notes\n| a | b |', supply: { headMax: '2.2 m' }, level: { target: '45 mm' } });
+    if (!parsed.ok) throw new Error(JSON.stringify(parsed.errors));
+    const sized = sizeDesign(parsed.inputs);
+    if (!sized.ok) throw new Error('no size');
+    const md = buildSheetMarkdown(sized, parsed.document);
+    expect(md).not.toMatch(/^#+ injected/m);
+    expect(md).not.toMatch(/^\| a \| b \|/m);
+    expect(md.split('\n')[0]).toBe('# tubs \\# injected name: build sheet');
+  });
+
+  it('the command line prints no control character from a name (ECMA-48 C0 / C1), in text or JSON', async () => {
+    const { mkdtempSync, writeFileSync } = await import('node:fs');
+    const { tmpdir } = await import('node:os');
+    const { join } = await import('node:path');
+    const { floatwright } = await import('./helpers.ts');
+    const dir = mkdtempSync(join(tmpdir(), 'fw-term-'));
+    const design = join(dir, 'd.json');
+    writeFileSync(design, JSON.stringify({ name: 'tub\u001b]0;owned\u0007\u001b[2J\u009b31m\u202e', supply: { headMax: '2.2 m' }, level: { target: '45 mm' } }));
+    for (const args of [['size', '--design', design], ['size', '--design', design, '--json'], ['size', '--design', design, '--level', '9\u001b[2J\u009bkm']]) {
+      const run = await floatwright(...args);
+      expect(run.stdout + run.stderr).toMatch(/tub|level/);
+      expect(run.stdout + run.stderr).not.toMatch(/[\u0000-\u0008\u000b-\u001f\u007f-\u009f\u202e]/);
+    }
+  }, 60_000);
+});
