@@ -210,7 +210,7 @@ export function formatFailureText(failure: SizingFailure): string {
   lines.push(...failure.reasons.map((r) => `  - ${wrap(r.message, 76)}`));
   lines.push('', 'Ways out');
   if (failure.waysOut.length === 0) lines.push('  - none found within the limits');
-  lines.push(...failure.waysOut.map((w) => `  - ${wrap(`${w.field} = ${w.value}: ${w.message}`, 76)}`));
+  lines.push(...failure.waysOut.map((w) => `  - ${wrap(`${[w, ...(w.also ?? [])].map((c) => `${c.field} = ${c.value}`).join(' and ')}: ${w.message}`, 76)}`));
   if (failure.warnings.length) lines.push('', 'Warnings', ...warningLines(failure.warnings));
   lines.push('', formatCautions());
   return lines.join('\n');

@@ -249,6 +249,8 @@ export interface WayOut {
   /** value that would make the design work, in the field's unit (as text with unit) */
   value: string;
   message: string;
+  /** other fields to set with it, for the document's rules to hold (e.g. supply.headMin with a lower supply.headMax) */
+  also?: { field: string; value: string }[];
 }
 
 export interface SizingFailure {

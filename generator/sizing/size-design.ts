@@ -13,6 +13,7 @@ import { leakToleranceMl } from './float/leak-tolerance-ml.ts';
 import type { Candidate } from './layout/evaluate-candidate.ts';
 import type { DesignInputs } from './inputs.ts';
 import type { SizingFailure, SizingResult, SizingSuccess, Warning, WayOut } from './result.ts';
+import { wayOutApplies } from './way-out-applies.ts';
 
 const fmt = (x: number, digits = 1) => Number(x.toFixed(digits)).toString();
 
@@ -134,7 +135,9 @@ function failure(b: DesignBasis, outcome: ReturnType<typeof searchSize>): Sizing
   if (works({ ...inp, headMaxM: 0.01, headMinM: 0.01 })) {
     const h = largestWorking(0.01, inp.headMaxM, (x) => works({ ...inp, headMaxM: x, headMinM: Math.min(inp.headMinM, x) }), 0.005);
     const v = Math.floor(h * 100) / 100;
-    waysOut.push({ field: 'supply.headMax', value: `${fmt(v, 2)} m`, message: `a tank no higher than ${fmt(v, 2)} m above the nozzle for this level` });
+    // the lowest head may not stay above the highest: lowered with it when it would
+    const also = v < inp.headMinM ? [{ field: 'supply.headMin', value: `${fmt(v, 2)} m` }] : undefined;
+    waysOut.push({ field: 'supply.headMax', value: `${fmt(v, 2)} m`, message: `a tank no higher than ${fmt(v, 2)} m above the nozzle for this level`, ...(also ? { also } : {}) });
   }
   if (!b.fromCalibration) {
     const line = inp.lineWidthM;
@@ -158,7 +161,13 @@ function failure(b: DesignBasis, outcome: ReturnType<typeof searchSize>): Sizing
     waysOut.push({ field: 'level.target', value: `${fmt(level)} mm`, message: both });
     waysOut.push({ field: 'limits.maxOuterDiameter', value: `${foot} mm`, message: both });
   }
-  return { ok: false, reasons, waysOut, warnings: [] };
+  return { ok: false, reasons, waysOut: applicable(inp, waysOut), warnings: [] };
+}
+
+/** The ways out the document accepts (wayOutApplies); a pair offered together (one message) goes when either part does. */
+function applicable(inp: DesignInputs, waysOut: WayOut[]): WayOut[] {
+  const refused = new Set(waysOut.filter((w) => !wayOutApplies(inp, w)).map((w) => w.message));
+  return waysOut.filter((w) => !refused.has(w.message));
 }
 
 /** The tight shut-off at full tank comes within 10 mm of the container's overflow: refused, with what works. */
@@ -177,7 +186,7 @@ function overflowFailure(inp: DesignInputs, shutOffMaxMm: number): SizingFailure
   }
   const higher = Math.ceil(shutOffMaxMm + marginMm);
   waysOut.push({ field: 'container.overflow', value: `${higher} mm`, message: `an overflow at least ${higher} mm above the container floor` });
-  return { ok: false, reasons, waysOut, warnings: [] };
+  return { ok: false, reasons, waysOut: applicable(inp, waysOut), warnings: [] };
 }
 
 function warningsFor(b: DesignBasis, c: Candidate, tiltGapMm: number, netWeightN: number, ballastG: number, lowFlow: boolean): Warning[] {
@@ -246,7 +255,7 @@ function warningsFor(b: DesignBasis, c: Candidate, tiltGapMm: number, netWeightN
 export function sizeDesign(inp: DesignInputs): SizingResult {
   const b = designBasis(inp);
   const early = basisProblems(b);
-  if (early.reasons.length) return { ok: false, reasons: early.reasons, waysOut: early.waysOut, warnings: [] };
+  if (early.reasons.length) return { ok: false, reasons: early.reasons, waysOut: applicable(inp, early.waysOut), warnings: [] };
 
   const rho = inp.liquidDensityKgM3;
   const qMax = flowAt(inp, inp.headMaxM);

@@ -254,7 +254,9 @@ export class FwApp extends LitElement {
   }
 
   private applyWayOut(e: CustomEvent<WayOut>): void {
-    this.replaceDoc(setAt(this.doc, e.detail.field, e.detail.value));
+    // a way out may set more than one field (a lower highest head takes the lowest head with it)
+    const changes = [e.detail, ...(e.detail.also ?? [])];
+    this.replaceDoc(changes.reduce((doc, c) => setAt(doc, c.field, c.value), this.doc));
   }
 
   private async exportRequest(e: CustomEvent<ExportRequest>): Promise<void> {

@@ -10,6 +10,7 @@ import { shared } from './shared-styles.ts';
 const FIELD_WORDS: Record<string, string> = {
   'level.target': 'water depth to hold',
   'supply.headMax': 'tank full height',
+  'supply.headMin': 'tank low height',
   'nozzle.sealDiameter': 'nozzle lip width',
   'nozzle.orifice': 'nozzle hole',
   'supply.tubeInnerDiameter': 'feed tube width',
@@ -134,7 +135,7 @@ export class FwResults extends LitElement {
             ${failure.waysOut.length
               ? html`<div class="ways"><p>Any one of these would work:</p>
                   ${failure.waysOut.map(
-                    (w) => html`<button data-way-out=${w.field} @click=${() => this.wayOut(w)}>Set ${FIELD_WORDS[w.field] ?? w.field} to ${w.value}: ${w.message}</button>`,
+                    (w) => html`<button data-way-out=${w.field} @click=${() => this.wayOut(w)}>Set ${[w, ...(w.also ?? [])].map((c) => `${FIELD_WORDS[c.field] ?? c.field} to ${c.value}`).join(' and ')}: ${w.message}</button>`,
                   )}</div>`
               : nothing}
             ${shown ? html`<p>Below: the last design that worked.</p>` : nothing}

@@ -1,0 +1,54 @@
+/**
+ * Whether a way out can be applied as offered: its value (with `also`, the
+ * values that go with it) lies inside the design document's range for the
+ * field, and the document's rules between fields still hold after it
+ * (the orifice narrower than the lip; the lowest head at most the highest).
+ * A way out the document would refuse (`nozzle.orifice = -0.8 mm`) is never
+ * offered. The ranges are the document's own (generator/doc FIELD_SPECS), read
+ * here rather than copied, so the two can never drift apart.
+ *
+ * Example: with a 2 mm orifice and a 5 mm lip, { field: 'nozzle.orifice', value: '0.3 mm' }
+ * does not apply (below 0.5 mm); { field: 'nozzle.sealDiameter', value: '1.8 mm' } does not
+ * (not wider than the orifice).
+ */
+import { FIELD_SPECS } from '../doc/schema.ts';
+import type { DesignInputs } from './inputs.ts';
+import type { WayOut } from './result.ts';
+
+/** The document fields ways out set, with their range (in the field's unit) and the unit's size in SI. */
+const SPEC_OF: Record<string, { spec: { min: number; max: number; minExclusive?: boolean }; si: number }> = {
+  'level.target': { spec: FIELD_SPECS.target, si: 1e-3 },
+  'supply.headMax': { spec: FIELD_SPECS.headMax, si: 1 },
+  'supply.headMin': { spec: FIELD_SPECS.headMin, si: 1 },
+  'supply.tubeInnerDiameter': { spec: FIELD_SPECS.tubeInnerDiameter, si: 1e-3 },
+  'nozzle.orifice': { spec: FIELD_SPECS.orifice, si: 1e-3 },
+  'nozzle.sealDiameter': { spec: FIELD_SPECS.sealDiameter, si: 1e-3 },
+  'limits.maxOuterDiameter': { spec: FIELD_SPECS.maxOuterDiameter, si: 1e-3 },
+  'seal.padThickness': { spec: FIELD_SPECS.padThickness, si: 1e-3 },
+  'container.overflow': { spec: FIELD_SPECS.overflow, si: 1e-3 },
+};
+
+/**
+ * The SI value a way out sets (its text is a number and the field's unit), NaN when it lies outside the
+ * field's range, undefined for a field whose value is a name (seal.pad: a table entry the sizing chose).
+ */
+function siValue(field: string, value: string): number | undefined {
+  const known = SPEC_OF[field];
+  if (!known) return undefined;
+  const x = Number.parseFloat(value);
+  if (!Number.isFinite(x)) return Number.NaN;
+  const { min, max, minExclusive } = known.spec;
+  if (x > max || x < min || (minExclusive && x === min)) return Number.NaN;
+  return x * known.si;
+}
+
+export function wayOutApplies(inp: DesignInputs, w: WayOut): boolean {
+  const changes = [{ field: w.field, value: w.value }, ...(w.also ?? [])];
+  const set = new Map(changes.map((c) => [c.field, siValue(c.field, c.value)]));
+  if ([...set.values()].some((v) => v !== undefined && Number.isNaN(v))) return false;
+  const orifice = set.get('nozzle.orifice') ?? inp.orificeM;
+  const lip = set.get('nozzle.sealDiameter') ?? inp.sealDiameterM;
+  const headMax = set.get('supply.headMax') ?? inp.headMaxM;
+  const headMin = set.get('supply.headMin') ?? inp.headMinM;
+  return orifice < lip && headMin <= headMax * (1 + 1e-12);
+}

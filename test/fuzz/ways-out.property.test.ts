@@ -1,0 +1,73 @@
+/**
+ * Ways out always apply (issue 11, item 8): every way out the sizing offers,
+ * applied as offered (with the fields it sets together: `also`, or the pair that
+ * shares one message), gives a document the schema accepts, and the sizing
+ * runs on it. Property-based testing with fast-check over the whole accepted
+ * input space, range edges included (generators in arbitraries.ts); the ranges
+ * and rules are the design document's (orifice 0.5-6 mm and narrower than the
+ * lip; lowest head at most the highest; DESIGN.md "Symbols and defaults").
+ * The share that makes the design size is counted and printed.
+ */
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { parseDesign } from '../../generator/doc/schema.ts';
+import type { WayOut } from '../../generator/sizing/result.ts';
+import { sizeDesign } from '../../generator/sizing/size-design.ts';
+import { designSpec, setPath, toDocument } from './arbitraries.ts';
+import { fuzzSeed, SIZING_RUNS } from './budget.ts';
+
+/** Ways out grouped as they are applied: one with its `also`, or the ones that share a message. */
+function groups(waysOut: WayOut[]): { field: string; value: string }[][] {
+  const byMessage = new Map<string, { field: string; value: string }[]>();
+  for (const w of waysOut) {
+    const list = byMessage.get(w.message) ?? [];
+    list.push({ field: w.field, value: w.value }, ...(w.also ?? []));
+    byMessage.set(w.message, list);
+  }
+  return [...byMessage.values()];
+}
+
+describe('every way out lies inside the document (fast-check)', () => {
+  it('known cases: a barb too thin for the bore, and a head too high for the level, offer only ways out the document accepts', () => {
+    // a 6 mm bore in a 1 mm tube's barb: no narrower bore of at least 0.5 mm can fit, so none is offered
+    const thin = parseDesign({ supply: { headMax: '1 m', tubeInnerDiameter: '1 mm' }, nozzle: { orifice: '6 mm', sealDiameter: '30 mm' }, level: { target: '45 mm' } });
+    if (!thin.ok) throw new Error(JSON.stringify(thin.errors));
+    const r = sizeDesign(thin.inputs);
+    expect(r.ok).toBe(false);
+    if (r.ok) return;
+    for (const w of r.waysOut) if (w.field === 'nozzle.orifice') expect(Number.parseFloat(w.value)).toBeGreaterThanOrEqual(0.5);
+    // a lower highest head below the given lowest head takes the lowest head with it
+    const high = parseDesign({ supply: { headMax: '3 m', headMin: '2.9 m' }, level: { target: '5 mm' }, limits: { maxOuterDiameter: '20 mm' } });
+    if (!high.ok) throw new Error(JSON.stringify(high.errors));
+    const h = sizeDesign(high.inputs);
+    if (!h.ok) {
+      for (const w of h.waysOut.filter((x) => x.field === 'supply.headMax')) {
+        if (Number.parseFloat(w.value) < 2.9) expect(w.also).toEqual([{ field: 'supply.headMin', value: w.value }]);
+      }
+    }
+  });
+
+  it(`${SIZING_RUNS} designs: each way out applied re-parses and re-sizes`, () => {
+    const tally = { infeasible: 0, waysOut: 0, sized: 0 };
+    fc.assert(
+      fc.property(designSpec(), (spec) => {
+        const doc = toDocument(spec);
+        const parsed = parseDesign(doc);
+        if (!parsed.ok) return; // scattered bench points may be refused: rejected.property.test.ts covers refusals
+        const result = sizeDesign(parsed.inputs);
+        if (result.ok) return;
+        tally.infeasible++;
+        for (const changes of groups(result.waysOut)) {
+          tally.waysOut++;
+          const applied = changes.reduce((d, c) => setPath(d, c.field, c.value), doc);
+          const again = parseDesign(applied);
+          if (!again.ok) throw new Error(`the way out ${JSON.stringify(changes)} is refused: ${JSON.stringify(again.errors)}\n${JSON.stringify(doc)}`);
+          if (sizeDesign(again.inputs).ok) tally.sized++;
+        }
+      }),
+      { numRuns: SIZING_RUNS, seed: fuzzSeed(), endOnFailure: true },
+    );
+    expect(tally.infeasible).toBeGreaterThan(0);
+    console.info(`[fuzz] ways out: ${JSON.stringify(tally)}`);
+  }, 300_000);
+});
