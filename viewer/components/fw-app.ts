@@ -8,6 +8,8 @@ import { ALL_FIELDS } from '../lib/form-fields.ts';
 import { presets, type Preset } from '../lib/presets.ts';
 import { decodeDesign, designFromHash, shareUrl } from '../lib/share-link.ts';
 import { loadSaved, save } from '../lib/storage.ts';
+import { inLabels, labelFor, problemsInLabels } from '../lib/field-label.ts';
+import { keepRecent, loadRecent, recentTitle, type RecentDesign } from '../lib/recent-designs.ts';
 import { convertDocument, type UnitSystem } from '../lib/units-system.ts';
 import type { BuiltReply, ExportFile } from '../worker/protocol.ts';
 import type { PartMeshes, PartTransforms } from '../worker/parts-contract.ts';
@@ -26,7 +28,7 @@ import './fw-cautions.ts';
 /** Wait after the last keystroke before sizing: short enough to feel live, long enough to skip half-typed numbers. */
 export const TYPING_PAUSE_MS = 40;
 
-type Notice = { kind: 'bad' | 'good'; text: string; link?: string } | null;
+type Notice = { kind: 'bad' | 'good'; text: string; link?: string; undo?: Doc } | null;
 
 /** Bench rows the grower has not finished (a box still empty) are not used yet, and are not errors. */
 export function withoutBlankPoints(doc: Doc): Doc {
@@ -48,8 +50,16 @@ function download(file: { name: string; mime: string; bytes: Uint8Array }): void
   setTimeout(() => URL.revokeObjectURL(url), 60_000);
 }
 
-function errorList(errors: { field: string; message: string }[]): string {
-  return errors.map((e) => `${e.field}: ${e.message}`).join(' ');
+const errorList = problemsInLabels;
+
+/** Why a saved design cannot be used (a damaged browser store), or null when it parses. */
+function savedProblem(doc: Doc): string | null {
+  try {
+    const parsed = parseDesign(withoutBlankPoints(doc));
+    return parsed.ok ? null : errorList(parsed.errors);
+  } catch {
+    return 'it is damaged.';
+  }
 }
 
 /** The workbench: holds the design, talks to the build worker, hands state down to the panels. */
@@ -80,6 +90,8 @@ export class FwApp extends LitElement {
       .notice input { flex: 1; font: inherit; min-width: 10rem; }
       .notice button { margin-left: auto; }
       .right { display: flex; flex-direction: column; gap: 0.6rem; }
+      .out-of-date { margin: 0; padding: 0.25rem 0.6rem; border-radius: 5px; background: var(--bad-soft); border: 1px solid var(--bad); font-size: 0.85rem; }
+      fw-valve-view.stale { opacity: 0.6; }
       @media (max-width: 900px) {
         :host { height: auto; }
         main { grid-template-columns: 1fr; overflow: visible; }
@@ -102,6 +114,8 @@ export class FwApp extends LitElement {
   @state() private busy = '';
   @state() private presetId = '';
   @state() private timing = '';
+  /** designs set aside when a link, a preset or a file replaced them (newest first) */
+  @state() private recent: RecentDesign[] = [];
 
   @query('fw-valve-view') private viewer!: FwValveView;
 
@@ -127,12 +141,22 @@ export class FwApp extends LitElement {
       this.workerFactory,
     );
     const saved = loadSaved(globalThis.localStorage);
-    if (saved) {
+    this.recent = loadRecent(globalThis.localStorage);
+    const problem = saved ? savedProblem(saved.doc) : null;
+    if (saved && !problem) {
       this.units = saved.units;
       this.doc = saved.doc;
     } else {
       this.doc = this.presetList[0].doc;
       this.presetId = this.presetList[0].id;
+    }
+    if (saved && problem) {
+      // a damaged store never leaves the screen waiting: say so, start from a preset, keep the damaged one to look at
+      this.recent = keepRecent(globalThis.localStorage, saved.doc, 'it was found damaged');
+      this.notice = {
+        kind: 'bad',
+        text: `Your saved design could not be opened: ${problem} The workbench starts from "${this.presetList[0].title}" instead; the saved one is kept under "Earlier designs".`,
+      };
     }
     this.evaluate();
     this.openFromHash();
@@ -160,13 +184,20 @@ export class FwApp extends LitElement {
       this.notice = { kind: 'bad', text: `The shared link holds a design with problems, so it was not opened. ${errorList(parsed.errors)} Your current design is unchanged.` };
       return;
     }
-    this.replaceDoc(decoded.doc as Doc, 'Opened the design from the link.');
+    this.replaceDoc(decoded.doc as Doc, 'Opened the design from the link.', 'a share link');
   }
 
-  private replaceDoc(doc: Doc, message?: string): void {
+  /**
+   * Put a whole design on screen. With `replacedBy` (a link, a preset, a file), the design it replaces is
+   * kept under "Earlier designs" and the notice offers to put it back.
+   */
+  private replaceDoc(doc: Doc, message?: string, replacedBy?: string): void {
+    const before = this.doc;
+    const kept = replacedBy !== undefined && JSON.stringify(before) !== JSON.stringify(doc);
+    if (kept) this.recent = keepRecent(globalThis.localStorage, before, replacedBy);
     this.doc = doc;
     this.presetId = '';
-    if (message) this.notice = { kind: 'good', text: message };
+    if (message) this.notice = { kind: 'good', text: kept ? `${message} Your previous design is kept under "Earlier designs".` : message, ...(kept ? { undo: before } : {}) };
     this.lastEditAt = performance.now();
     this.firstBuildAfterEdit = Infinity;
     this.evaluate();
@@ -249,8 +280,26 @@ export class FwApp extends LitElement {
   private choosePreset(id: string): void {
     const preset = this.presetList.find((p) => p.id === id);
     if (!preset) return;
-    this.replaceDoc(convertDocument(preset.doc, ALL_FIELDS, this.units));
+    this.replaceDoc(convertDocument(preset.doc, ALL_FIELDS, this.units), `Started from "${preset.title}".`, `the preset "${preset.title}"`);
     this.presetId = id;
+  }
+
+  private openRecent(index: number): void {
+    const r = this.recent[index];
+    if (r) this.replaceDoc(r.doc, 'Opened an earlier design.', 'an earlier design');
+  }
+
+  /**
+   * Why the files cannot be made from what is on screen now, or null: never a file of a design the
+   * screen does not show (a box in error, a change not sized yet, no valve fitting).
+   */
+  private exportBlock(): string | null {
+    if (Object.keys(this.errors).length) return 'Correct the boxes marked in red first: the files must match what is on screen.';
+    if (this.typingTimer !== null || this.docsById.size > 0) return 'Sizing your latest change: the files will be ready in a moment.';
+    if (this.result && !this.result.ok) return 'No valve fits these numbers, so there are no files to make.';
+    if (!this.lastGood || !this.lastGoodDoc) return 'Sizing…';
+    if (this.lastGoodDoc !== this.doc) return 'The files are out of date: the valve is being sized again.';
+    return null;
   }
 
   private applyWayOut(e: CustomEvent<WayOut>): void {
@@ -262,7 +311,11 @@ export class FwApp extends LitElement {
   private async exportRequest(e: CustomEvent<ExportRequest>): Promise<void> {
     const good = this.lastGood;
     const doc = this.lastGoodDoc;
-    if (!good || !doc) return;
+    const blocked = this.exportBlock();
+    if (blocked || !good || !doc) {
+      this.notice = { kind: 'bad', text: `No files were made. ${blocked ?? 'Sizing…'}` };
+      return;
+    }
     if (e.detail.kind === 'json') {
       download({ name: 'floatwright-design.json', mime: 'application/json', bytes: new TextEncoder().encode(JSON.stringify(doc, null, 2) + '\n') });
       return;
@@ -299,7 +352,7 @@ export class FwApp extends LitElement {
       this.notice = { kind: 'bad', text: `${file.name} was not opened: ${errorList(parsed.errors)} Your current design is unchanged.` };
       return;
     }
-    this.replaceDoc(doc as Doc, `Opened ${file.name}.`);
+    this.replaceDoc(doc as Doc, `Opened ${file.name}.`, `the file ${file.name}`);
   }
 
   private async shareLink(): Promise<void> {
@@ -325,6 +378,7 @@ export class FwApp extends LitElement {
     return html`<div class="notice ${n.kind}" role=${n.kind === 'bad' ? 'alert' : 'status'} data-notice=${n.kind}>
       <span>${n.text}</span>
       ${n.link ? html`<input readonly aria-label="Share link" .value=${n.link} @focus=${(e: FocusEvent) => (e.target as HTMLInputElement).select()} />` : nothing}
+      ${n.undo ? html`<button data-undo @click=${() => this.replaceDoc(n.undo!, 'Your previous design is back.', 'going back')}>Put back my previous design</button>` : nothing}
       <button @click=${() => (this.notice = null)}>Dismiss</button>
     </div>`;
   }
@@ -332,6 +386,8 @@ export class FwApp extends LitElement {
   override render() {
     const formErrors = Object.entries(this.errors).filter(([k]) => !ALL_FIELDS.some((f) => f.path === k) && !k.startsWith('seal.calibration') && !k.startsWith('print.material'));
     const good = this.lastGood;
+    const blocked = this.exportBlock();
+    const outOfDate = blocked !== null && good !== null;
     return html`
       <header>
         <h1>floatwright <small>float valve workbench</small></h1>
@@ -341,6 +397,18 @@ export class FwApp extends LitElement {
             ${this.presetList.map((p) => html`<option value=${p.id} ?selected=${p.id === this.presetId}>${p.title}</option>`)}
           </select>
         </label>
+        ${this.recent.length
+          ? html`<label>Earlier designs
+              <select aria-label="Open an earlier design" data-recent @change=${(e: Event) => {
+                const select = e.target as HTMLSelectElement;
+                if (select.value !== '') this.openRecent(Number(select.value));
+                select.value = '';
+              }}>
+                <option value="">(${this.recent.length} kept)</option>
+                ${this.recent.map((r, i) => html`<option value=${i}>${recentTitle(r)}</option>`)}
+              </select>
+            </label>`
+          : nothing}
         <fieldset>
           <legend>Units</legend>
           <label><input type="radio" name="units" value="metric" .checked=${this.units === 'metric'} @change=${() => this.setUnits('metric')} /> metric</label>
@@ -350,7 +418,7 @@ export class FwApp extends LitElement {
       </header>
       <div>
         ${this.renderNotice()}
-        ${formErrors.length ? html`<div class="notice bad" role="alert">${formErrors.map(([k, m]) => html`<div>${k}: ${m}</div>`)}</div>` : nothing}
+        ${formErrors.length ? html`<div class="notice bad" role="alert">${formErrors.map(([k, m]) => html`<div>${labelFor(k)}: ${inLabels(m)}</div>`)}</div>` : nothing}
       </div>
       <main>
         <div class="left">
@@ -368,12 +436,13 @@ export class FwApp extends LitElement {
             <label><input type="checkbox" name="water" .checked=${this.view.water} @change=${(e: Event) => this.setView({ water: (e.target as HTMLInputElement).checked })} /> water line</label>
             <button @click=${() => this.viewer?.resetView()}>Reset view</button>
           </div>
-          <fw-valve-view .meshes=${this.meshes} .transforms=${this.transforms} .sizing=${good} .options=${this.view} .buildId=${this.meshBuildId} @preview-rendered=${this.previewRendered}></fw-valve-view>
+          ${outOfDate ? html`<p class="out-of-date" role="status" data-out-of-date>Out of date: the picture and figures show the last design that worked, not the boxes as they are now.</p>` : nothing}
+          <fw-valve-view class=${outOfDate ? 'stale' : ''} .meshes=${this.meshes} .transforms=${this.transforms} .sizing=${good} .options=${this.view} .buildId=${this.meshBuildId} @preview-rendered=${this.previewRendered}></fw-valve-view>
           <fw-push-plot .sizing=${good} .units=${this.units}></fw-push-plot>
         </div>
         <div class="right">
-          <fw-results .result=${this.result} .lastGood=${good} .units=${this.units} .stale=${Object.keys(this.errors).length > 0} @apply-way-out=${this.applyWayOut}></fw-results>
-          <fw-file-bar .disabled=${!good} .busy=${this.busy} @export-request=${this.exportRequest} @import-file=${this.importFile} @share-link=${this.shareLink}></fw-file-bar>
+          <fw-results .result=${this.result} .lastGood=${good} .units=${this.units} .stale=${Object.keys(this.errors).length > 0 || outOfDate} @apply-way-out=${this.applyWayOut}></fw-results>
+          <fw-file-bar .disabled=${blocked !== null} .reason=${blocked ?? ''} .busy=${this.busy} @export-request=${this.exportRequest} @import-file=${this.importFile} @share-link=${this.shareLink}></fw-file-bar>
         </div>
       </main>
       <fw-cautions></fw-cautions>

@@ -1,4 +1,4 @@
-import { LitElement, css, html } from 'lit';
+import { LitElement, css, html, nothing } from 'lit';
 import { customElement, property } from 'lit/decorators.js';
 import type { ExportKind } from '../worker/protocol.ts';
 import { PART_NAMES, type PartName } from '../worker/parts-contract.ts';
@@ -11,7 +11,10 @@ export interface ExportRequest {
 
 const PART_WORDS: Record<PartName, string> = { housing: 'Housing', float: 'Float', nozzle: 'Nozzle', pin: 'Pin' };
 
-/** Downloads, opening a saved design, and the share link. Emits `export-request`, `import-file`, `share-link`. */
+/**
+ * Downloads, opening a saved design, and the share link. Emits `export-request`, `import-file`, `share-link`.
+ * While `disabled`, every file button (the design file too) is off and `reason` says why.
+ */
 @customElement('fw-file-bar')
 export class FwFileBar extends LitElement {
   static override styles = [
@@ -27,11 +30,14 @@ export class FwFileBar extends LitElement {
       label.file { position: relative; border: 1px solid var(--leaf); color: var(--leaf); border-radius: 6px; padding: 0.3rem 0.7rem; cursor: pointer; }
       label.file:focus-within { outline: 3px solid #e0a030; }
       .busy { color: var(--muted); font-size: 0.85rem; }
+      .why { margin: 0.2rem 0; font-size: 0.85rem; color: var(--bad, #a33); }
     `,
   ];
 
   @property({ type: Boolean }) disabled = false;
   @property() busy = '';
+  /** why the files cannot be made now (shown while disabled) */
+  @property() reason = '';
 
   private ask(kind: ExportRequest['kind'], part?: PartName) {
     this.dispatchEvent(new CustomEvent<ExportRequest>('export-request', { detail: { kind, part }, bubbles: true, composed: true }));
@@ -40,6 +46,7 @@ export class FwFileBar extends LitElement {
   override render() {
     const d = this.disabled || this.busy !== '';
     return html`<h2>Files for your printer</h2>
+      ${this.disabled && this.reason ? html`<p class="why" role="status" data-export-blocked>${this.reason}</p>` : nothing}
       <div class="row">
         <span>Everything</span>
         <button class="primary" ?disabled=${d} @click=${() => this.ask('zip')}>All parts (.zip)</button>
@@ -52,7 +59,7 @@ export class FwFileBar extends LitElement {
       </div>
       <div class="row">
         <span>Design</span>
-        <button ?disabled=${this.disabled} @click=${() => this.ask('json')}>Save design file</button>
+        <button ?disabled=${d} @click=${() => this.ask('json')}>Save design file</button>
         <label class="file">Open design file…<input type="file" accept=".json,application/json" @change=${(e: Event) => {
           const input = e.target as HTMLInputElement;
           const file = input.files?.[0];

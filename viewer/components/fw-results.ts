@@ -141,7 +141,7 @@ export class FwResults extends LitElement {
             ${shown ? html`<p>Below: the last design that worked.</p>` : nothing}
           </section>`
         : nothing}
-      <div class=${failure || this.stale ? 'stale' : ''}>${shown ? this.renderSuccess(shown) : html`<p>Sizing…</p>`}</div>
+      <div class=${failure || this.stale ? 'stale' : ''}>${shown ? this.renderSuccess(shown) : html`<p>${this.stale ? 'Nothing sized yet: correct the boxes marked in red.' : 'Sizing…'}</p>`}</div>
     `;
   }
 }
