@@ -191,6 +191,7 @@ export async function writeDesignFiles(
     for (const { target, backup } of backups) await rename(backup, target).catch(() => undefined);
     throw error;
   }
-  await Promise.all(backups.map(({ backup }) => rm(backup, { force: true })));
+  // the new set is complete: a backup that cannot be removed now is debris the next run clears, not a failure
+  await Promise.all(backups.map(({ backup }) => rm(backup, { force: true }).catch(() => undefined)));
   return { files: finals, parts };
 }

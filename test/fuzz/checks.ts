@@ -20,7 +20,10 @@
  */
 import { transformMesh } from '../../generator/solids/shapes/transform-mesh.ts';
 import type { DesignInputs } from '../../generator/sizing/inputs.ts';
-import type { SizingResult, SizingSuccess } from '../../generator/sizing/result.ts';
+import type { SizingResult, SizingSuccess, WayOut } from '../../generator/sizing/result.ts';
+import { parseDesign } from '../../generator/doc/schema.ts';
+import { sizeDesign } from '../../generator/sizing/size-design.ts';
+import { setPath } from './arbitraries.ts';
 import {
   countEdgeUses,
   intersect,
@@ -242,4 +245,34 @@ export function checkAssembly(
     }
   }
   return p;
+}
+
+/** Ways out grouped as they are applied: one with its `also`, or the ones that share a message (a pair). */
+export function wayOutGroups(waysOut: WayOut[]): { field: string; value: string }[][] {
+  const byMessage = new Map<string, { field: string; value: string }[]>();
+  for (const w of waysOut) {
+    const list = byMessage.get(w.message) ?? [];
+    list.push({ field: w.field, value: w.value }, ...(w.also ?? []));
+    byMessage.set(w.message, list);
+  }
+  return [...byMessage.values()];
+}
+
+/**
+ * Every way out applied to the document it came from gives a document the
+ * schema accepts (issue 11: never `nozzle.orifice = -0.8 mm`, never the highest
+ * head below the lowest). Returns the problems and how many applied ones size.
+ */
+export function wayOutProblems(doc: Record<string, unknown>, s: Exclude<SizingResult, SizingSuccess>): { problems: string[]; applied: number; sized: number } {
+  const problems: string[] = [];
+  let applied = 0;
+  let sized = 0;
+  for (const changes of wayOutGroups(s.waysOut)) {
+    applied++;
+    const moved = changes.reduce((d, c) => setPath(d, c.field, c.value), doc);
+    const again = parseDesign(moved);
+    if (!again.ok) problems.push(`the way out ${JSON.stringify(changes)} is refused: ${JSON.stringify(again.errors)}`);
+    else if (sizeDesign(again.inputs).ok) sized++;
+  }
+  return { problems, applied, sized };
 }

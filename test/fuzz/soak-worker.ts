@@ -15,7 +15,7 @@ import { assemblyTransforms, buildParts } from '../../generator/solids/index.ts'
 import { loadManifold, type IndexedMesh } from '../../generator/solids/mesh/index.ts';
 import { triangleBounds } from '../../generator/solids/part-caps.ts';
 import { designSpec, junkValue, outsideValue, setPath, toDocument, type Mutation } from './arbitraries.ts';
-import { checkAssembly, checkInfeasible, checkPartMeshes, checkSized, NON_FINITE_TEXT } from './checks.ts';
+import { checkAssembly, checkInfeasible, wayOutProblems, checkPartMeshes, checkSized, NON_FINITE_TEXT } from './checks.ts';
 
 /** Preview builds slower than this are reported (issue 6: at most 2 s at preview quality). */
 export const SLOW_BUILD_MS = 2000;
@@ -88,6 +88,7 @@ export async function runChunk(seed: number, count: number): Promise<ChunkResult
         if (!sizing.ok) {
           r.infeasible++;
           problems.push(...checkInfeasible(sizing));
+          problems.push(...wayOutProblems(doc, sizing).problems); // every way out applies (issue 11)
           const level = sizing.waysOut.find((w) => w.field === 'level.target');
           if (level && Number.parseFloat(level.value) <= 250) {
             const foot = /together/.test(level.message) ? sizing.waysOut.find((w) => w.field === 'limits.maxOuterDiameter') : undefined;

@@ -11,21 +11,10 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { parseDesign } from '../../generator/doc/schema.ts';
-import type { WayOut } from '../../generator/sizing/result.ts';
 import { sizeDesign } from '../../generator/sizing/size-design.ts';
-import { designSpec, setPath, toDocument } from './arbitraries.ts';
+import { designSpec, toDocument } from './arbitraries.ts';
+import { wayOutProblems } from './checks.ts';
 import { fuzzSeed, SIZING_RUNS } from './budget.ts';
-
-/** Ways out grouped as they are applied: one with its `also`, or the ones that share a message. */
-function groups(waysOut: WayOut[]): { field: string; value: string }[][] {
-  const byMessage = new Map<string, { field: string; value: string }[]>();
-  for (const w of waysOut) {
-    const list = byMessage.get(w.message) ?? [];
-    list.push({ field: w.field, value: w.value }, ...(w.also ?? []));
-    byMessage.set(w.message, list);
-  }
-  return [...byMessage.values()];
-}
 
 describe('every way out lies inside the document (fast-check)', () => {
   it('known cases: a barb too thin for the bore, and a head too high for the level, offer only ways out the document accepts', () => {
@@ -57,13 +46,10 @@ describe('every way out lies inside the document (fast-check)', () => {
         const result = sizeDesign(parsed.inputs);
         if (result.ok) return;
         tally.infeasible++;
-        for (const changes of groups(result.waysOut)) {
-          tally.waysOut++;
-          const applied = changes.reduce((d, c) => setPath(d, c.field, c.value), doc);
-          const again = parseDesign(applied);
-          if (!again.ok) throw new Error(`the way out ${JSON.stringify(changes)} is refused: ${JSON.stringify(again.errors)}\n${JSON.stringify(doc)}`);
-          if (sizeDesign(again.inputs).ok) tally.sized++;
-        }
+        const found = wayOutProblems(doc, result);
+        if (found.problems.length) throw new Error(`${found.problems.join('\n')}\n${JSON.stringify(doc)}`);
+        tally.waysOut += found.applied;
+        tally.sized += found.sized;
       }),
       { numRuns: SIZING_RUNS, seed: fuzzSeed(), endOnFailure: true },
     );

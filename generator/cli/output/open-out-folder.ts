@@ -117,8 +117,10 @@ export async function openOutFolder(out: string, options: OpenOutOptions): Promi
       created,
       listed: marker?.entries ?? null,
       finish: async (written, opts) => {
-        if (marker || created) await writeMarker(path, opts?.replaceListing ? written : [...(marker?.entries ?? []), ...written]);
-        await release();
+        // The files are in place: a marker that cannot be updated now only makes a later --force refuse them
+        // (the safe side), and a lock that cannot be removed is taken over once this process is gone.
+        if (marker || created) await writeMarker(path, opts?.replaceListing ? written : [...(marker?.entries ?? []), ...written]).catch(() => undefined);
+        await release().catch(() => undefined);
       },
       abandon,
     };

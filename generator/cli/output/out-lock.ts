@@ -4,10 +4,12 @@
  * process id. A lock whose process is gone (a killed run) is taken over; a
  * live one means busy. Source: POSIX open(2), O_CREAT | O_EXCL.
  */
-import { open, readFile, rm } from 'node:fs/promises';
+import { open, readFile, rm, stat } from 'node:fs/promises';
 import { join } from 'node:path';
 
 export const LOCK_FILE = '.floatwright-lock';
+/** An empty lock younger than this is a writer between creating it and writing its pid. */
+const EMPTY_LOCK_GRACE_MS = 5000;
 
 /** The folder is being written by another floatwright run. */
 export class FolderBusyError extends Error {
@@ -35,7 +37,8 @@ export async function lockHeld(folder: string): Promise<boolean> {
   const text = await readFile(join(folder, LOCK_FILE), 'utf8').catch(() => null);
   if (text === null) return false;
   const pid = Number.parseInt(text, 10);
-  return Number.isNaN(pid) || alive(pid);
+  if (!Number.isNaN(pid)) return alive(pid);
+  return Date.now() - ((await stat(join(folder, LOCK_FILE)).catch(() => null))?.mtimeMs ?? 0) < EMPTY_LOCK_GRACE_MS;
 }
 
 /** Take the folder's lock; returns its release. Throws FolderBusyError when a live run holds it. */
@@ -44,14 +47,22 @@ export async function takeLock(folder: string, shownAs: string): Promise<() => P
   for (let attempt = 0; attempt < 2; attempt++) {
     try {
       const handle = await open(path, 'wx');
-      await handle.writeFile(`${process.pid}\n`);
-      await handle.close();
+      try {
+        await handle.writeFile(`${process.pid}\n`);
+      } catch (error) {
+        await handle.close().catch(() => undefined);
+        await rm(path, { force: true }).catch(() => undefined);
+        throw error;
+      } finally {
+        await handle.close().catch(() => undefined);
+      }
       return async () => void (await rm(path, { force: true }));
     } catch (error) {
       if ((error as NodeJS.ErrnoException).code !== 'EEXIST') throw error;
       const pid = Number.parseInt(await readFile(path, 'utf8').catch(() => ''), 10);
-      // a lock still being written (no pid yet) counts as live; a dead process's lock is stale
-      if (Number.isNaN(pid) || alive(pid)) throw new FolderBusyError(shownAs, Number.isNaN(pid) ? null : pid);
+      // a lock without a pid is being written now, unless it is older than a few seconds (its writer died)
+      const young = Number.isNaN(pid) && Date.now() - ((await stat(path).catch(() => null))?.mtimeMs ?? 0) < EMPTY_LOCK_GRACE_MS;
+      if (young || (!Number.isNaN(pid) && alive(pid))) throw new FolderBusyError(shownAs, Number.isNaN(pid) ? null : pid);
       await rm(path, { force: true });
     }
   }
