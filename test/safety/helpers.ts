@@ -1,5 +1,5 @@
 import { execFile, spawn } from 'node:child_process';
-import { readdirSync, readFileSync, statSync, writeFileSync } from 'node:fs';
+import { existsSync, readdirSync, readFileSync, statSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 
@@ -50,17 +50,34 @@ export function floatwright(...args: string[]): Promise<{ status: number | null;
   });
 }
 
-/** Start the command line and send it a signal once its standard error or output shows `when` (or after ms). */
-export function floatwrightStopped(args: string[], signal: NodeJS.Signals, afterMs: number): Promise<{ status: number | null; stderr: string }> {
+/**
+ * Start the command line and send it a signal once `whenExists` exists (the run's lock: the run is under way
+ * and has its handlers), or after `fallbackMs` if it never appears. Status -1: ended by the signal itself.
+ */
+export function floatwrightStopped(args: string[], signal: NodeJS.Signals, whenExists: string, delayMs = 0, fallbackMs = 60_000): Promise<{ status: number | null; stderr: string; signalled: boolean }> {
   return new Promise((resolve) => {
     const child = spawn(process.execPath, [BIN, ...args], { cwd: ROOT, stdio: ['ignore', 'pipe', 'pipe'] });
     let stderr = '';
+    let signalled = false;
     child.stderr.on('data', (d) => (stderr += d));
     child.stdout.on('data', () => {});
-    const timer = setTimeout(() => child.kill(signal), afterMs);
+    const send = () => {
+      signalled = true;
+      child.kill(signal);
+    };
+    const started = Date.now();
+    const poll = setInterval(() => {
+      if (existsSync(whenExists)) {
+        clearInterval(poll);
+        setTimeout(send, delayMs);
+      } else if (Date.now() - started > fallbackMs) {
+        clearInterval(poll);
+        send();
+      }
+    }, 10);
     child.once('exit', (code, sig) => {
-      clearTimeout(timer);
-      resolve({ status: code ?? (sig ? -1 : null), stderr });
+      clearInterval(poll);
+      resolve({ status: code ?? (sig ? -1 : null), stderr, signalled });
     });
   });
 }

@@ -23,16 +23,19 @@ describe('a signal mid-run puts the earlier files back', () => {
     const out = join(work(), 'v');
     expect((await floatwright('build', ...BUILD, '--quality', 'preview', '--out', out)).status).toBe(0);
     const before = snapshot(out);
-    // export quality takes seconds: the signal lands during the build or the writing
-    for (const afterMs of [900, 1800]) {
-      const run = await floatwrightStopped(['build', '--head-max', '2.2m', '--level', '60mm', '--out', out], signal, afterMs);
+    // sent once the run holds the folder's lock (its handlers are in place): at once, and a little later
+    let stopped = 0;
+    for (const afterMs of [0, 300]) {
+      const run = await floatwrightStopped(['build', '--head-max', '2.2m', '--level', '60mm', '--out', out], signal, join(out, '.floatwright-lock'), afterMs);
       const names = readdirSync(out);
       expect(names.filter((n) => n.endsWith('.tmp') || n.endsWith('.bak') || n === '.floatwright-lock')).toEqual([]);
       if (run.status === 0) continue; // finished before the signal: a complete new set (checked by the other tests)
       expect(run.status).toBe(status);
+      stopped++;
       expect(run.stderr).toMatch(new RegExp(`stopped by ${signal}; nothing new was written`));
       expect(snapshot(out)).toEqual(before);
     }
+    expect(stopped).toBeGreaterThan(0); // sent as soon as the lock is taken, a signal lands before an export build is done
   }, 120_000);
 
   it('plan stopped by SIGTERM: exit 143, the earlier plan folder intact, nothing left beside it', async () => {
@@ -41,7 +44,7 @@ describe('a signal mid-run puts the earlier files back', () => {
     const out = join(dir, 'bench');
     expect((await floatwright('plan', plan, '--out', out, '--quality', 'preview')).status).toBe(0);
     const before = snapshot(out);
-    const run = await floatwrightStopped(['plan', plan, '--out', out, '--force'], 'SIGTERM', 2500);
+    const run = await floatwrightStopped(['plan', plan, '--out', out, '--force'], 'SIGTERM', join(out, '.floatwright-lock'), 200);
     if (run.status !== 0) {
       expect(run.status).toBe(143);
       expect(snapshot(out)).toEqual(before);
