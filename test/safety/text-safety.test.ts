@@ -125,3 +125,31 @@ describe('where the text lands', () => {
     }
   }, 60_000);
 });
+
+describe('plan plates', () => {
+  it('a container named with control characters gives plate 3MF files and design 3MFs that saxes reads (XML 1.0, 2.2)', async () => {
+    const { mkdtempSync, readdirSync, readFileSync, writeFileSync } = await import('node:fs');
+    const { tmpdir } = await import('node:os');
+    const { join } = await import('node:path');
+    const { runCli } = await import('../../generator/cli/main.ts');
+    const dir = mkdtempSync(join(tmpdir(), 'fw-plates-'));
+    const plan = join(dir, 'plan.json');
+    writeFileSync(plan, JSON.stringify({
+      name: 'bench \u0001\u001b[2J\uffff',
+      tank: { fullSurfaceElevation: '2.2 m', lowSurfaceElevation: '1.8 m' },
+      main: { innerDiameter: '8 mm' },
+      containers: [{ name: 'tub \u0000\u0007 <a>', floorElevation: '0.3 m', level: '45 mm' }],
+    }));
+    const out = join(dir, 'bench');
+    const io = { out: () => {}, err: () => {} };
+    expect(await runCli(['plan', plan, '--out', out, '--quality', 'preview'], io)).toBe(0);
+    const threeMfs = [
+      ...readdirSync(join(out, 'plates')).map((f) => join(out, 'plates', f)),
+      ...readdirSync(out).filter((d) => d.startsWith('d1-')).flatMap((d) => readdirSync(join(out, d)).map((f) => join(out, d, f))),
+    ].filter((f) => f.endsWith('.3mf'));
+    expect(threeMfs.length).toBeGreaterThanOrEqual(2);
+    for (const f of threeMfs) {
+      for (const [part, bytes] of Object.entries(unzipSync(readFileSync(f)))) expect(xmlError(strFromU8(bytes)), `${f} ${part}`).toBeNull();
+    }
+  }, 60_000);
+});
