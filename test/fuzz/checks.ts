@@ -23,7 +23,7 @@ import type { DesignInputs } from '../../generator/sizing/inputs.ts';
 import type { SizingResult, SizingSuccess, WayOut } from '../../generator/sizing/result.ts';
 import { parseDesign } from '../../generator/doc/schema.ts';
 import { sizeDesign } from '../../generator/sizing/size-design.ts';
-import { setPath } from './arbitraries.ts';
+import { setPath, type DesignSpec } from './arbitraries.ts';
 import {
   countEdgeUses,
   intersect,
@@ -275,4 +275,15 @@ export function wayOutProblems(doc: Record<string, unknown>, s: Exclude<SizingRe
     else if (sizeDesign(again.inputs).ok) sized++;
   }
   return { problems, applied, sized };
+}
+
+/**
+ * Whether a drawn design's bench points may be refused: scattered or random points may fall with head,
+ * and one head alone may too, since its fit holds the pad's own seating force, which the drawn line's
+ * intercept need not reach (heads counted as written: points off the scale are never weighed).
+ */
+export function calibrationMayBeRefused(spec: DesignSpec, doc: unknown): boolean {
+  if (!spec.calibration) return false;
+  const written = ((doc as { seal?: { calibration?: { head: unknown }[] } }).seal?.calibration ?? []).map((p) => p.head);
+  return spec.calibration.line === null || spec.calibration.line.scatter > 0 || new Set(written).size <= 1;
 }

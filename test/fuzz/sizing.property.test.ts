@@ -19,7 +19,7 @@ import { parseDesign } from '../../generator/doc/schema.ts';
 import { sizeDesign } from '../../generator/sizing/size-design.ts';
 import type { SizingResult } from '../../generator/sizing/result.ts';
 import { designSpec, setPath, toDocument, type DesignSpec } from './arbitraries.ts';
-import { checkInfeasible, checkSized } from './checks.ts';
+import { calibrationMayBeRefused, checkInfeasible, checkSized } from './checks.ts';
 import { fuzzSeed, SIZING_RUNS } from './budget.ts';
 
 /** Counts per run, shown at the end (designs sized, sized ok, retargeted). */
@@ -28,12 +28,8 @@ const tally = { designs: 0, sized: 0, infeasible: 0, retargeted: 0, retargetedSi
 function sizeOrThrow(doc: unknown, spec: DesignSpec): { result: SizingResult; inputs: ReturnType<typeof parseDesign> } | null {
   const parsed = parseDesign(doc);
   if (!parsed.ok) {
-    // scattered or random bench points may fall with head: that one refusal is allowed, and must say so on seal.calibration
-    // and so may one head alone: its fit holds the pad's own seating force, which the line's intercept need not reach
-    // (counted on the points as written: those off the scale are never weighed)
-    const written = ((doc as { seal?: { calibration?: { head: unknown }[] } }).seal?.calibration ?? []).map((p) => p.head);
-    const singleHead = spec.calibration && new Set(written).size <= 1;
-    const scattered = spec.calibration && (spec.calibration.line === null || spec.calibration.line.scatter > 0 || singleHead);
+    // bench points that may be refused (calibrationMayBeRefused): that one refusal is allowed, and must say so on seal.calibration
+    const scattered = calibrationMayBeRefused(spec, doc);
     const onlyCalibration = parsed.errors.every((e) => e.field === 'seal.calibration');
     if (scattered && onlyCalibration) return null;
     throw new Error(`accepted document refused: ${JSON.stringify(parsed.errors)}\n${JSON.stringify(doc)}`);
