@@ -69,3 +69,23 @@ export const AUTO_PAD_STRAIN = 0.2;
 
 /** Least height of the container's overflow above the tight shut-off at full tank, m (DESIGN second part). */
 export const OVERFLOW_MARGIN_M = 0.01;
+
+/**
+ * Least angle between any self-supporting surface and the print bed, degrees. Slicers add
+ * automatic supports under faces flatter than their threshold, 45 degrees by default
+ * (common practice); 5 degrees of margin keeps faceting and rounding off it, so a slicer
+ * with supports on adds nothing (no support trapped in the float's sealed cavity).
+ */
+export const OVERHANG_MIN_DEG = 50;
+/** Rise over run of a 50-degree surface, tan 50deg = 1.19175. */
+export const OVERHANG_RISE = Math.tan((OVERHANG_MIN_DEG * Math.PI) / 180);
+
+/**
+ * Running gap of the float's guide on top of the print clearance, per side, mm: enough for
+ * the collar to slide in its sleeve when both are printed a little fat (common practice).
+ * The guide's play is PRINT_CLEARANCE_MM + GUIDE_RUNNING_GAP_MM.
+ */
+export const GUIDE_RUNNING_GAP_MM = 0.25;
+
+/** Least length of the float's collar inside its sleeve, even at rest on the pin, mm (common practice: about four layers of 0.5 mm). */
+export const GUIDE_MIN_OVERLAP_MM = 2;

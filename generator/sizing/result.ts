@@ -12,22 +12,26 @@ export interface Warning {
   message: string;
 }
 
-/** Float: closed hollow shell, flat bottom, 45-degree cone, plateau with pad pocket. Mounted z up, bottom at 0. */
+/** Float: closed hollow shell, flat bottom, 50-degree cone, guide collar whose top is the plateau with the pad pocket. Mounted z up, bottom at 0. */
 export interface FloatSpec {
   outerDiameterMm: number;
   /** cylindrical part's height (h_c) */
   cylinderHeightMm: number;
-  /** 45-degree cone height (h_k = D_f/2 - plateau radius) */
+  /** 50-degree cone height (h_k = (D_f/2 - collar radius) tan 50deg) */
   coneHeightMm: number;
-  /** total printed height h_f = h_c + h_k (pad not included) */
+  /** the guide collar's height above the cone (a vertical cylinder of plateauRadiusMm) */
+  collarHeightMm: number;
+  /** total printed height h_f = h_c + h_k + collar (pad not included) */
   heightMm: number;
+  /** radius of the guide collar, whose top is the plateau */
   plateauRadiusMm: number;
   /** shell wall (side, bottom and cone normal thickness) */
   shellMm: number;
-  /** cavity: inner cylinder radius, bottom z, z where the inner cone starts, roof z, roof radius */
+  /** cavity: inner cylinder radius, bottom z, z where the inner cone starts and where it reaches the collar's inner radius, roof z, roof radius */
   cavityRadiusMm: number;
   cavityBottomZMm: number;
   cavityConeStartZMm: number;
+  cavityConeTopZMm: number;
   cavityRoofZMm: number;
   cavityRoofRadiusMm: number;
   /** pad pocket cut into the plateau top */
@@ -58,7 +62,20 @@ export interface HousingSpec {
   drainNotches: { count: number; widthMm: number; heightMm: number; angleOffsetDeg: number };
   /** two opposed horizontal teardrop holes for the retainer pin (axis along x); the teardrop tip points down when mounted (up in print) */
   pinHoles: { diameterMm: number; centerZMm: number };
-  /** foot: flat flange from z = 0, then a 45-degree flare back to the tube */
+  /**
+   * The float's guide (mounted z): the boss (bossOuterDiameterMm) goes on down as a sleeve of
+   * bore boreMm to its mouth at mouthZMm; inside it, a stop ring of bore stopBoreMm reaches
+   * down to stopZMm, where the float's collar top lands at the pad's hard-stop indentation.
+   * Air slots (width, count, from the mouth up to riseMm into the boss) keep the sleeve vented.
+   */
+  guide: {
+    boreMm: number;
+    mouthZMm: number;
+    stopZMm: number;
+    stopBoreMm: number;
+    slots: { count: number; widthMm: number; riseMm: number; angleOffsetDeg: number };
+  };
+  /** foot: flat flange from z = 0, then a 50-degree flare back to the tube */
   foot: {
     outerDiameterMm: number;
     flangeThicknessMm: number;
@@ -73,14 +90,14 @@ export interface NozzleSpec {
   /** lip: flat sealing ring, outer diameter d_s */
   lipDiameterMm: number;
   lipHeightMm: number;
-  /** 45-degree flare from the lip out to the shoulder */
+  /** 50-degree flare from the lip out to the shoulder */
   shoulderDiameterMm: number;
   shoulderHeightMm: number;
   /** collar pressed into the seat; crush ribs stand proud of it */
   collarDiameterMm: number;
   collarLengthMm: number;
   crushRibs: { count: number; heightMm: number; baseWidthMm: number };
-  /** barb for the supply tube: a short stem then `count` teeth (45-degree step out, long taper in) */
+  /** barb for the supply tube: a short stem then `count` teeth (50-degree step out, long taper in) */
   barb: { stemLengthMm: number; rootDiameterMm: number; crestDiameterMm: number; taperLengthMm: number; count: number };
   /** how far the sealing face sits below the deck underside */
   protrusionMm: number;
@@ -90,7 +107,7 @@ export interface NozzleSpec {
 /** Retainer pin: a round bar with a flat along its length (printed on the flat) and a tab head. Axis along x. */
 export interface PinSpec {
   diameterMm: number;
-  /** distance from the axis to the flat (r cos 45deg keeps every overhang at 45 degrees or steeper) */
+  /** distance from the axis to the flat (r cos 50deg keeps every overhang at 50 degrees or steeper) */
   flatOffsetMm: number;
   lengthMm: number;
   head: { lengthMm: number; widthMm: number; heightMm: number };
@@ -231,7 +248,27 @@ export interface SizingSuccess {
     neededN: number;
     ballastSteelG: number;
   };
-  tilt: { maxAngleDeg: number; lipGapMm: number };
+  /** the float pressed on the lip, tipped as far as its bore and guide allow (DESIGN "Tilt, guide and stability") */
+  tilt: {
+    /** worst tilt, pivot at the pad */
+    maxAngleDeg: number;
+    /** the lip's far-side gap at that tilt, d_s tan(theta) */
+    lipGapMm: number;
+    /** the pad centre's largest offset from the lip centre */
+    padOffsetMm: number;
+    /** pad radius minus lip radius */
+    padMarginMm: number;
+    /** what guides the float: its top collar sliding in a sleeve under the deck */
+    guide: 'collar-in-sleeve';
+    /** the collar's radial play in the sleeve: print clearance + running gap */
+    guidePlayMm: number;
+    /** side load on the guide at the worst tilt with the closing force at H_max (0 when the float stands up alone) */
+    guideSideLoadN: number;
+    /** whether the float, pressed on the lip with the closing force at H_max, would stand up without the guide */
+    stableWithoutGuide: boolean;
+    /** pad indentation at which the collar lands on the stop ring */
+    hardStopIndentationMm: number;
+  };
   mass: {
     totalG: number;
     filamentM: number;

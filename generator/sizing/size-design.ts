@@ -4,11 +4,13 @@ import { circleArea } from './hydrostatics/circle-area.ts';
 import { pressurePa } from './hydrostatics/pressure-pa.ts';
 import { drainAreaRequiredM2, fillTimeS, supplyFlow } from './hydraulics/index.ts';
 import { designBasis, type DesignBasis } from './layout/design-basis.ts';
+import { floatTilt } from './layout/evaluate-candidate.ts';
+import { PADS } from './seal/pads.ts';
+import { tippingStiffnessNmPerRad } from './float/tipping-stiffness.ts';
 import { CONSTRAINT_TEXT } from './layout/constraint-text.ts';
 import { searchSize } from './layout/search-size.ts';
 import { nozzleThinnestWallMm } from './parts/nozzle-spec.ts';
 import { landStrain } from './seal/land-strain.ts';
-import { PADS } from './seal/pads.ts';
 import { leakToleranceMl } from './float/leak-tolerance-ml.ts';
 import type { Candidate } from './layout/evaluate-candidate.ts';
 import type { DesignInputs } from './inputs.ts';
@@ -148,6 +150,11 @@ function failure(b: DesignBasis, outcome: ReturnType<typeof searchSize>): Sizing
       waysOut.push({ field: 'nozzle.sealDiameter', value: `${fmt(v)} mm`, message: `a nozzle lip of at most ${fmt(v)} mm across` });
     }
   }
+  if (outcome.rejections.has('tilt-gap') || outcome.rejections.has('tilt-offset')) {
+    // a pad pressed deeper at the seal tolerates a wider far-side gap: the first pad in the table that works
+    const pad = PADS.find((p) => p.name !== inp.padName && works({ ...inp, padName: p.name }));
+    if (pad) waysOut.push({ field: 'seal.pad', value: pad.name, message: `a ${pad.name} pad, pressed deep enough that a tipped float still closes the lip all round` });
+  }
   if (Number.isFinite(outcome.smallestWorkingFootMm) && outcome.smallestWorkingFootMm > inp.maxOuterDiameterM * 1e3) {
     const v = Math.ceil(outcome.smallestWorkingFootMm);
     waysOut.push({ field: 'limits.maxOuterDiameter', value: `${v} mm`, message: `allow a housing foot of ${v} mm across` });
@@ -189,16 +196,9 @@ function overflowFailure(inp: DesignInputs, shutOffMaxMm: number): SizingFailure
   return { ok: false, reasons, waysOut: applicable(inp, waysOut), warnings: [] };
 }
 
-function warningsFor(b: DesignBasis, c: Candidate, tiltGapMm: number, netWeightN: number, ballastG: number, lowFlow: boolean): Warning[] {
+function warningsFor(b: DesignBasis, c: Candidate, netWeightN: number, ballastG: number, lowFlow: boolean): Warning[] {
   const inp = b.inputs;
   const w: Warning[] = [];
-  const deltaMm = b.indentationMm;
-  if (tiltGapMm > deltaMm / 2) {
-    w.push({
-      code: 'tilt-gap',
-      message: `A tilted float can meet the lip with a ${fmt(tiltGapMm, 2)} mm gap on one side, more than half the pad indentation (${fmt(deltaMm, 2)} mm): use a softer or thicker pad, a deeper indentation, or a taller float.`,
-    });
-  }
   const wallMm = inp.wallM * 1e3;
   const line = inp.lineWidthM * 1e3;
   const lines = wallMm / line;
@@ -298,9 +298,21 @@ export function sizeDesign(inp: DesignInputs): SizingResult {
   const neededN = Math.max(0, HOLD_DOWN_FACTOR * upliftN - netWeightN);
   const ballastG = (neededN / ((1 - rho / STEEL_DENSITY) * STANDARD_GRAVITY)) * 1e3;
 
-  // Tilt (DESIGN): only the cylinder touches the bore, theta = atan(2c / h_c); lip gap d_s tan(theta).
-  const tiltRad = Math.atan((2 * b.radialGapMm) / f.cylinderHeightMm);
-  const lipGapMm = inp.sealDiameterM * 1e3 * Math.tan(tiltRad);
+  // Tilt (DESIGN "Tilt, guide and stability"): worst tilt in the bore and the guide, pivot at the pad.
+  const tilt = floatTilt(b, f);
+  const sealDepthMm = depthAt(b.forceAtHeadMaxN);
+  const stiffness = tippingStiffnessNmPerRad({
+    float: f,
+    shellMassKg: c.massKg - b.padMassKg,
+    padMassKg: b.padMassKg,
+    depthMm: sealDepthMm,
+    pivotZMm: tilt.pivotZMm,
+    densityKgM3: rho,
+  });
+  // At the worst tilt an unstable float leans on the bore at its bottom rim and on the guide at the
+  // collar's top: with the pad free to slide, the two side loads are equal, M / (collar top - rim).
+  const overturningNm = Math.max(0, -stiffness) * ((tilt.maxAngleDeg * Math.PI) / 180);
+  const guideSideLoadN = overturningNm / (f.heightMm * 1e-3);
 
   const fill = (q: number) =>
     inp.reservoirAreaM2 !== null && inp.reservoirRiseM !== null
@@ -401,14 +413,24 @@ export function sizeDesign(inp: DesignInputs): SizingResult {
     },
     vents: { count: vents.count, diameterMm: vents.diameterMm, areaMm2: vents.count * circleArea(vents.diameterMm) },
     holdDown: { upliftN, netWeightN, neededN, ballastSteelG: ballastG },
-    tilt: { maxAngleDeg: (tiltRad * 180) / Math.PI, lipGapMm },
+    tilt: {
+      maxAngleDeg: tilt.maxAngleDeg,
+      lipGapMm: tilt.lipGapMm,
+      padOffsetMm: tilt.padOffsetMm,
+      padMarginMm: tilt.padMarginMm,
+      guide: 'collar-in-sleeve',
+      guidePlayMm: b.guide.playMm,
+      guideSideLoadN,
+      stableWithoutGuide: stiffness > 0,
+      hardStopIndentationMm: b.padStopIndentationMm,
+    },
     mass: {
       totalG: housingG + nozzleG + pinG + floatPlasticG + padG,
       filamentM: plasticMm3 / circleArea(FILAMENT_DIAMETER_MM) / 1e3,
       byPart: { housing: housingG, float: floatPlasticG, nozzle: nozzleG, pin: pinG, pad: padG },
     },
     boundBy: outcome.boundBy,
-    warnings: warningsFor(b, c, lipGapMm, netWeightN, ballastG, qMin.flowLph < 1),
+    warnings: warningsFor(b, c, netWeightN, ballastG, qMin.flowLph < 1),
     parts: {
       printClearanceMm: PRINT_CLEARANCE_MM,
       housing: c.housing,

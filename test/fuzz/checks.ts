@@ -99,11 +99,11 @@ export function checkSized(inp: DesignInputs, s: SizingSuccess): string[] {
   expect(Math.abs(leak - s.float.leakToleranceMl) <= 1e-9 * Math.max(1, leak), `leak tolerance ${s.float.leakToleranceMl} mL vs ${leak} mL`);
   expect(s.closingForce.atHeadMaxN > 0, `closing force ${s.closingForce.atHeadMaxN} N is not positive`);
 
-  // float envelope volume, cylinder plus frustum (geometry), against the sizing's
+  // float envelope volume, cylinder plus frustum plus collar cylinder (geometry), against the sizing's
   const fs = s.parts.float;
   const R = fs.outerDiameterMm / 2;
-  const vf = Math.PI * R * R * fs.cylinderHeightMm + frustumMm3(fs.coneHeightMm, R, fs.plateauRadiusMm);
-  expect(Math.abs(vf - s.float.volumeMm3) <= 1e-6 * vf, `float volume ${s.float.volumeMm3} mm3 vs cylinder + frustum ${vf} mm3`);
+  const vf = Math.PI * R * R * fs.cylinderHeightMm + frustumMm3(fs.coneHeightMm, R, fs.plateauRadiusMm) + Math.PI * fs.plateauRadiusMm ** 2 * fs.collarHeightMm;
+  expect(Math.abs(vf - s.float.volumeMm3) <= 1e-6 * vf, `float volume ${s.float.volumeMm3} mm3 vs cylinder + frustum + collar ${vf} mm3`);
   // Archimedes: lift at full submersion, and the reserve over the force needed at H_max
   const lift = (rho * vf * 1e-9 - s.float.massG * 1e-3) * G;
   expect(Math.abs(lift - s.float.availableForceN) <= 1e-6 * Math.max(1, Math.abs(lift)), `lift ${s.float.availableForceN} N vs Archimedes ${lift} N`);

@@ -98,7 +98,8 @@ describe('regressions found by applying the ways out (sizing.property.test.ts)',
     // 21.87 kPa of a 1200 kg/m3 liquid on a 26.9 mm lip: a big float whose housing, lifted by a higher target, outgrew 250 mm
     const doc = {
       supply: { headMax: '21.87 kPa' }, level: { target: '5 mm' }, liquid: { density: '1200 kg/m3' },
-      nozzle: { orifice: '2 mm', sealDiameter: '26.9 mm' }, seal: { indentation: 0.05, padDensity: '0.25 g/cm3' },
+      // indentation 0.5 mm (was 0.05: a 26.9 mm lip under a pad pressed 0.05 mm is now refused by the tilt rule first)
+      nozzle: { orifice: '2 mm', sealDiameter: '26.9 mm' }, seal: { indentation: 0.5, padDensity: '0.25 g/cm3' },
       print: { wall: '0.9 mm' }, reserve: 1.85,
     };
     const parsed = parseDesign(doc);

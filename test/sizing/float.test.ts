@@ -14,7 +14,11 @@ const shape = floatShape({
   padProudMm: 1,
   clearanceMm: 0.25,
   rimMm: 1.35,
+  collarMinRadiusMm: 6.15,
+  collarHeightMm: 6.5,
 }) as FloatSpec;
+/** Self-supporting surfaces at 50 degrees from the bed (5 degrees past slicers' common 45-degree support threshold, common practice). */
+const K = Math.tan((50 * Math.PI) / 180);
 
 /** Independent check: volume of a solid of revolution by disc integration (Simpson), V = integral of pi r(z)^2 dz. */
 function revolve(radius: (z: number) => number, z0: number, z1: number, n = 2000): number {
@@ -30,22 +34,33 @@ describe('float geometry (elementary geometry: cylinder, frustum; disc integrati
     expect(frustumVolume(10, 3, 3)).toBeCloseTo(cylinderVolume(3, 10), 9);
     expect(frustumVolume(9, 2, 0)).toBeCloseTo((Math.PI * 4 * 9) / 3, 12);
   });
-  it('the float shape has a 45-degree cone up to the plateau', () => {
-    expect(shape.coneHeightMm).toBeCloseTo(27 - shape.plateauRadiusMm, 12);
-    expect(shape.heightMm).toBeCloseTo(35 + shape.coneHeightMm, 12);
+  it('the float shape has a 50-degree cone up to the collar, then the collar', () => {
+    // collar radius: pocket (4.5 + 0.25) + rim 1.35 = 6.1, raised to the asked least 6.15
+    expect(shape.plateauRadiusMm).toBeCloseTo(6.15, 12);
+    expect(shape.coneHeightMm).toBeCloseTo((27 - 6.15) * K, 12);
+    expect(shape.heightMm).toBeCloseTo(35 + shape.coneHeightMm + 6.5, 12);
     // the cavity's cone is the outer cone moved in by the shell thickness along its normal:
-    // the lines r + z = c_outer and r + z = c_inner lie |c_outer - c_inner| / sqrt(2) apart
-    const cOuter = 27 + shape.cylinderHeightMm;
-    const cInner = shape.cavityRadiusMm + shape.cavityConeStartZMm;
-    expect((cOuter - cInner) / Math.SQRT2).toBeCloseTo(shape.shellMm, 12);
-    expect(shape.cavityRoofRadiusMm + shape.cavityRoofZMm).toBeCloseTo(cInner, 12);
+    // the lines K r + z = c_outer and K r + z = c_inner lie |c_outer - c_inner| / sqrt(1 + K^2) apart
+    const cOuter = K * 27 + shape.cylinderHeightMm;
+    const cInner = K * shape.cavityRadiusMm + shape.cavityConeStartZMm;
+    expect((cOuter - cInner) / Math.hypot(1, K)).toBeCloseTo(shape.shellMm, 12);
+    expect(K * shape.cavityRoofRadiusMm + shape.cavityConeTopZMm).toBeCloseTo(cInner, 12);
+    expect(shape.cavityRoofRadiusMm).toBeCloseTo(6.15 - 1.35, 12);
   });
   it('outer and cavity volumes agree with disc integration of the profile', () => {
     const R = 27;
-    const outer = revolve((z) => (z <= shape.cylinderHeightMm ? R : R - (z - shape.cylinderHeightMm)), 0, shape.heightMm);
+    const zk = shape.cylinderHeightMm + shape.coneHeightMm;
+    const outer = revolve(
+      (z) => (z <= shape.cylinderHeightMm ? R : z <= zk ? R - (z - shape.cylinderHeightMm) / K : shape.plateauRadiusMm),
+      0,
+      shape.heightMm,
+    );
     expect(floatOuterVolumeMm3(shape)).toBeCloseTo(outer, 0);
     const cav = revolve(
-      (z) => (z <= shape.cavityConeStartZMm ? shape.cavityRadiusMm : shape.cavityRadiusMm - (z - shape.cavityConeStartZMm)),
+      (z) =>
+        z <= shape.cavityConeStartZMm
+          ? shape.cavityRadiusMm
+          : Math.max(shape.cavityRoofRadiusMm, shape.cavityRadiusMm - (z - shape.cavityConeStartZMm) / K),
       shape.cavityBottomZMm,
       shape.cavityRoofZMm,
     );
@@ -60,7 +75,7 @@ describe('float geometry (elementary geometry: cylinder, frustum; disc integrati
     expect(submergedVolumeMm3(shape, 1e6)).toBeCloseTo(floatOuterVolumeMm3(shape), 6);
   });
   it('depth for a volume inverts the submerged volume, in the cylinder and in the cone', () => {
-    for (const z of [3, 20, 35, 40, 50]) {
+    for (const z of [3, 20, 35, 40, 50, 62]) {
       expect(depthForVolumeMm(shape, submergedVolumeMm3(shape, z))).toBeCloseTo(z, 6);
     }
     expect(depthForVolumeMm(shape, floatOuterVolumeMm3(shape) * 1.01)).toBe(Infinity);

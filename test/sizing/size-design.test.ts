@@ -65,11 +65,37 @@ describe('sized design invariants', () => {
         const steelG = (need / ((1 - inp.liquidDensityKgM3 / 7850) * 9.80665)) * 1000;
         expect(r.holdDown.ballastSteelG).toBeCloseTo(steelG, 9);
       });
-      it('tilt angle is atan(2c/h_c) and the lip gap d_s tan(theta)', () => {
+      it('worst tilt: bottom rim on the bore and collar top in its sleeve, H sin t - (R + r_c)(1 - cos t) = c + g (or the stop ring first); lip gap d_s tan t', () => {
+        // Elementary plane geometry of a rigid body between vertical walls, solved here by Newton's method:
+        // pivot at the pad, the bottom rim (radius R, height 0) meets the bore (play c) on one side while
+        // the collar's top corner (radius r_c, height H) meets its sleeve (play g) on the other.
         const c = FLOAT_GAP_MM + PRINT_CLEARANCE_MM;
-        const theta = Math.atan((2 * c) / r.float.cylinderHeightMm);
-        expect(r.tilt.maxAngleDeg).toBeCloseTo((theta * 180) / Math.PI, 12);
-        expect(r.tilt.lipGapMm).toBeCloseTo(inp.sealDiameterM * 1000 * Math.tan(theta), 12);
+        const g = PRINT_CLEARANCE_MM + 0.25; // the guide's play: print clearance + 0.25 mm running gap (common practice)
+        const f = r.parts.float;
+        const R = f.outerDiameterMm / 2;
+        const rc = f.plateauRadiusMm;
+        const H = f.heightMm;
+        const delta = r.seal.indentationMm;
+        const hp = H + f.padProudMm - delta;
+        const newton = (fn: (t: number) => number, d: (t: number) => number) => {
+          let t = 0.02;
+          for (let i = 0; i < 50; i++) t -= fn(t) / d(t);
+          return t;
+        };
+        const walls = newton((t) => H * Math.sin(t) - (R + rc) * (1 - Math.cos(t)) - (c + g), (t) => H * Math.cos(t) - (R + rc) * Math.sin(t));
+        // the collar top rising on one side into the stop ring, stopGap above it at seal
+        const gap = r.tilt.hardStopIndentationMm - delta;
+        const stop = newton((t) => rc * Math.sin(t) - (hp - H) * (1 - Math.cos(t)) - gap, (t) => rc * Math.cos(t) - (hp - H) * Math.sin(t));
+        const theta = Math.min(walls, stop);
+        expect(r.tilt.maxAngleDeg).toBeCloseTo((theta * 180) / Math.PI, 6);
+        expect(r.tilt.lipGapMm).toBeCloseTo(inp.sealDiameterM * 1000 * Math.tan(theta), 6);
+        expect(r.tilt.guidePlayMm).toBeCloseTo(g, 12);
+        // accepted only when the pad stays on the lip and the lip's far side stays shut
+        expect(r.tilt.padMarginMm).toBeCloseTo(f.padDiameterMm / 2 - inp.sealDiameterM * 500, 12);
+        expect(r.tilt.padOffsetMm).toBeGreaterThanOrEqual(g - 1e-9); // sliding across the sleeve's play, untilted
+        expect(r.tilt.padOffsetMm).toBeLessThanOrEqual(r.tilt.padMarginMm);
+        expect(r.tilt.lipGapMm).toBeLessThanOrEqual(delta / 2);
+        expect(r.warnings.map((w) => w.code)).not.toContain('tilt-gap');
       });
       it('mass adds up and filament length is volume over the 1.75 mm filament section', () => {
         const p = r.mass.byPart;

@@ -1,3 +1,4 @@
+import { OVERHANG_RISE } from '../constants.ts';
 import { cylinderVolume, frustumVolume } from './frustum-volume.ts';
 import type { FloatSpec } from '../result.ts';
 
@@ -6,7 +7,7 @@ export interface FloatShapeOptions {
   outerDiameterMm: number;
   /** cylindrical height h_c, mm */
   cylinderHeightMm: number;
-  /** shell thickness (side, bottom, cone normal), mm: three line widths by default */
+  /** shell thickness (side, bottom, cone normal, collar), mm: four line widths by default */
   shellMm: number;
   /** seal pad disc diameter and thickness, mm */
   padDiameterMm: number;
@@ -17,46 +18,58 @@ export interface FloatShapeOptions {
   clearanceMm: number;
   /** plastic ring around the pocket, mm */
   rimMm: number;
+  /** the guide collar: least radius (its top must land on the hard stop), mm; default 0 (pocket + rim) */
+  collarMinRadiusMm?: number;
+  /** the guide collar's height above the cone, mm; default 0 (no collar: the cone ends at the plateau) */
+  collarHeightMm?: number;
 }
 
 /**
  * The float's whole shape from its outer diameter and cylinder height.
  *
- * Outer: cylinder of radius R = D_f/2 and height h_c, then a 45-degree cone up to
- * a plateau of radius r_p = pocket radius + rim, so h_k = R - r_p.
- * Cavity: inner cylinder of radius R - t from z = t; its 45-degree roof is the
- * outer cone moved inward by t along the normal, i.e. by t*sqrt(2) in radius, so it
- * starts at z1 = h_c - t (sqrt(2) - 1); the cavity stops under the plateau, which is
- * solid for the pocket depth plus t. That flat roof (radius r_roof) is the one
- * bridge of the print, short by construction. Returns null if the shape does not
- * close (float too small for its plateau and walls).
+ * Outer: cylinder of radius R = D_f/2 and height h_c, then a cone at 50 degrees
+ * (OVERHANG_MIN_DEG) up to the collar radius r_c = max(pocket radius + rim,
+ * collarMinRadius), so h_k = (R - r_c) tan 50deg; then the guide collar, a
+ * vertical cylinder r_c high collarHeight, whose top is the plateau with the pad
+ * pocket. Cavity: inner cylinder of radius R - t from z = t; its roof cone is the
+ * outer cone moved inward by t along the normal, i.e. down by t / cos 50deg, so it
+ * starts at z1 = h_c - t (1 - sin 50deg) / cos 50deg; it rises to radius r_c - t
+ * and goes on up inside the collar to a flat roof under the pocket (the one bridge
+ * of the print, 2 (r_c - t) across). Returns null if the shape does not close.
  */
 export function floatShape(o: FloatShapeOptions): FloatSpec | null {
   const R = o.outerDiameterMm / 2;
   const t = o.shellMm;
+  const k = OVERHANG_RISE;
+  const cosA = 1 / Math.sqrt(1 + k * k);
+  const sinA = k * cosA;
   const pocketDepth = Math.max(0, o.padThicknessMm - o.padProudMm);
   const pocketRadius = o.padDiameterMm / 2 + o.clearanceMm;
-  const plateauRadius = pocketRadius + o.rimMm;
-  const coneHeight = R - plateauRadius;
-  const height = o.cylinderHeightMm + coneHeight;
+  const collarRadius = Math.max(pocketRadius + o.rimMm, o.collarMinRadiusMm ?? 0);
+  const collarHeight = o.collarHeightMm ?? 0;
+  const coneHeight = (R - collarRadius) * k;
+  const height = o.cylinderHeightMm + coneHeight + collarHeight;
   const cavityRadius = R - t;
   const cavityBottom = t;
-  const coneStart = o.cylinderHeightMm - t * (Math.SQRT2 - 1);
+  const coneStart = o.cylinderHeightMm - (t * (1 - sinA)) / cosA;
+  const roofRadius = collarRadius - t;
+  const coneTop = coneStart + (cavityRadius - roofRadius) * k;
   const roofZ = height - pocketDepth - t;
-  const roofRadius = cavityRadius - (roofZ - coneStart);
-  if (coneHeight <= 0 || cavityRadius <= 0 || coneStart <= cavityBottom || roofZ <= coneStart || roofRadius <= 0) {
+  if (coneHeight <= 0 || cavityRadius <= 0 || coneStart <= cavityBottom || roofZ < coneTop || roofRadius <= 0) {
     return null;
   }
   return {
     outerDiameterMm: o.outerDiameterMm,
     cylinderHeightMm: o.cylinderHeightMm,
     coneHeightMm: coneHeight,
+    collarHeightMm: collarHeight,
     heightMm: height,
-    plateauRadiusMm: plateauRadius,
+    plateauRadiusMm: collarRadius,
     shellMm: t,
     cavityRadiusMm: cavityRadius,
     cavityBottomZMm: cavityBottom,
     cavityConeStartZMm: coneStart,
+    cavityConeTopZMm: coneTop,
     cavityRoofZMm: roofZ,
     cavityRoofRadiusMm: roofRadius,
     pocketRadiusMm: pocketRadius,
@@ -67,17 +80,22 @@ export function floatShape(o: FloatShapeOptions): FloatSpec | null {
   };
 }
 
-/** Outer envelope volume V_f = pi R^2 h_c + frustum(h_k, R, r_p), mm3 (pocket counted as filled by the pad). */
+/** Outer envelope volume V_f = pi R^2 h_c + frustum(h_k, R, r_c) + pi r_c^2 h_collar, mm3 (pocket counted as filled by the pad). */
 export function floatOuterVolumeMm3(f: FloatSpec): number {
   const R = f.outerDiameterMm / 2;
-  return cylinderVolume(R, f.cylinderHeightMm) + frustumVolume(f.coneHeightMm, R, f.plateauRadiusMm);
+  return (
+    cylinderVolume(R, f.cylinderHeightMm) +
+    frustumVolume(f.coneHeightMm, R, f.plateauRadiusMm) +
+    cylinderVolume(f.plateauRadiusMm, f.collarHeightMm)
+  );
 }
 
-/** Sealed cavity volume, mm3: inner cylinder plus the inner frustum under the plateau. */
+/** Sealed cavity volume, mm3: inner cylinder, the inner frustum, then the cylinder inside the collar up to the roof. */
 export function floatCavityVolumeMm3(f: FloatSpec): number {
   return (
     cylinderVolume(f.cavityRadiusMm, f.cavityConeStartZMm - f.cavityBottomZMm) +
-    frustumVolume(f.cavityRoofZMm - f.cavityConeStartZMm, f.cavityRadiusMm, f.cavityRoofRadiusMm)
+    frustumVolume(f.cavityConeTopZMm - f.cavityConeStartZMm, f.cavityRadiusMm, f.cavityRoofRadiusMm) +
+    cylinderVolume(f.cavityRoofRadiusMm, f.cavityRoofZMm - f.cavityConeTopZMm)
   );
 }
 

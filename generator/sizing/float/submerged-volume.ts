@@ -1,3 +1,4 @@
+import { OVERHANG_RISE } from '../constants.ts';
 import { cylinderVolume, frustumVolume } from './frustum-volume.ts';
 import type { FloatSpec } from '../result.ts';
 
@@ -5,8 +6,8 @@ import type { FloatSpec } from '../result.ts';
  * Volume of the float's outer envelope below a water line at depth z above its bottom, mm3.
  *
  *   z <= h_c:        V = pi R^2 z
- *   h_c < z <= h_f:  V = pi R^2 h_c + frustum(z - h_c, R, R - (z - h_c))   (45-degree cone)
- *   z > h_f:         V = V_f
+ *   h_c < z <= h_c + h_k:  V = pi R^2 h_c + frustum(u, R, R - u / tan 50deg), u = z - h_c   (50-degree cone)
+ *   above:           V = pi R^2 h_c + frustum(h_k, R, r_c) + pi r_c^2 (z - h_c - h_k)   (collar), at most V_f
  *
  * Example: R = 27, h_c = 35, z = 10 gives 22 902 mm3. Source: elementary geometry.
  */
@@ -14,8 +15,9 @@ export function submergedVolumeMm3(f: FloatSpec, depthMm: number): number {
   const R = f.outerDiameterMm / 2;
   const z = Math.min(Math.max(depthMm, 0), f.heightMm);
   if (z <= f.cylinderHeightMm) return cylinderVolume(R, z);
-  const u = z - f.cylinderHeightMm;
-  return cylinderVolume(R, f.cylinderHeightMm) + frustumVolume(u, R, R - u);
+  const u = Math.min(z - f.cylinderHeightMm, f.coneHeightMm);
+  const cone = cylinderVolume(R, f.cylinderHeightMm) + frustumVolume(u, R, R - u / OVERHANG_RISE);
+  return cone + cylinderVolume(f.plateauRadiusMm, Math.max(0, z - f.cylinderHeightMm - f.coneHeightMm));
 }
 
 /**

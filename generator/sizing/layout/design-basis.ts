@@ -1,4 +1,4 @@
-import { FLOAT_GAP_MM, PRINT_CLEARANCE_MM } from '../constants.ts';
+import { FLOAT_GAP_MM, GUIDE_MIN_OVERLAP_MM, GUIDE_RUNNING_GAP_MM, PRINT_CLEARANCE_MM } from '../constants.ts';
 import { circleArea, diameterForArea } from '../hydrostatics/circle-area.ts';
 import { nozzleSpec } from '../parts/nozzle-spec.ts';
 import { chooseSeal } from '../seal/choose-seal.ts';
@@ -52,6 +52,23 @@ export interface DesignBasis {
   minimumTravelMm: number;
   /** travel aimed for when the target leaves room: twice the minimum, at least 4 mm */
   preferredTravelMm: number;
+  /**
+   * The guide near the pad (DESIGN "Tilt, guide and stability"): a collar on the float's
+   * top slides in a sleeve hanging from the deck; a ring inside the sleeve is the pad's
+   * hard stop, met by the collar's top when the pad is indented padStopIndentationMm.
+   */
+  guide: {
+    /** radial play of the collar in its sleeve: print clearance + running gap, mm */
+    playMm: number;
+    /** the collar's least radius: the stop ring's inner radius plus a 1 mm land, mm */
+    collarMinRadiusMm: number;
+    /** collar height: preferred travel + least overlap + stop gap + print clearance, mm */
+    collarHeightMm: number;
+    /** the stop ring's inner radius: clears the nozzle shoulder by the print clearance, mm */
+    stopInnerRadiusMm: number;
+    /** how far the float rises past the tight seal before the stop, mm */
+    stopGapMm: number;
+  };
 }
 
 /** Collar engagement in the seat, mm: at least 6 mm or one collar diameter (common practice for press fits). */
@@ -75,17 +92,22 @@ export function designBasis(inp: DesignInputs): DesignBasis {
   const deck = Math.max(wallMm, 2);
   const collarGuess = Math.max(inp.tubeInnerDiameterM * 1e3 * 1.15, sealMm) + 4 * lineMm;
   const seatLength = Math.max(MIN_SEAT_LENGTH_MM, collarGuess);
+  const stopMm = seal.stopIndentationMm;
   const nozzle = nozzleSpec({
     orificeMm: inp.orificeM * 1e3,
     sealDiameterMm: sealMm,
     tubeInnerDiameterMm: inp.tubeInnerDiameterM * 1e3,
-    indentationMm,
+    // the lip stands taller than the deepest the pad is ever pressed (the hard stop)
+    indentationMm: Math.max(indentationMm, stopMm),
     lineWidthMm: lineMm,
     seatLengthMm: seatLength,
     printClearanceMm: PRINT_CLEARANCE_MM,
   });
   // DESIGN: s >= max(d_o / 2, 1.5 mm), so the curtain pi d_o s is at least twice the orifice area.
   const minimumTravel = Math.max((inp.orificeM * 1e3) / 2, 1.5);
+  const preferredTravel = Math.max(2 * minimumTravel, 4);
+  const stopGap = Math.max(0, stopMm - indentationMm);
+  const stopInner = nozzle.shoulderDiameterMm / 2 + PRINT_CLEARANCE_MM;
   return {
     inputs: inp,
     sealAreaM2: seal.modelAreaM2,
@@ -117,6 +139,13 @@ export function designBasis(inp: DesignInputs): DesignBasis {
     bossHeightMm: seatLength - deck,
     nozzle,
     minimumTravelMm: minimumTravel,
-    preferredTravelMm: Math.max(2 * minimumTravel, 4),
+    preferredTravelMm: preferredTravel,
+    guide: {
+      playMm: PRINT_CLEARANCE_MM + GUIDE_RUNNING_GAP_MM,
+      collarMinRadiusMm: stopInner + 1,
+      collarHeightMm: preferredTravel + GUIDE_MIN_OVERLAP_MM + stopGap + PRINT_CLEARANCE_MM,
+      stopInnerRadiusMm: stopInner,
+      stopGapMm: stopGap,
+    },
   };
 }

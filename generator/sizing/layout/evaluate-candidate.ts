@@ -6,6 +6,7 @@ import { housingOuterRadiusAtMm, housingVolumeMm3, nozzleVolumeMm3, pinVolumeMm3
 import { PIN_DIAMETER_MM, pinSpec } from '../parts/pin-spec.ts';
 import type { FloatSpec, HousingSpec, PinSpec } from '../result.ts';
 import type { DesignBasis } from './design-basis.ts';
+import { guidedTilt, type GuidedTilt } from './guided-tilt.ts';
 
 /** Why a candidate size fails; the codes appear in `boundBy` and in failure reasons. */
 export type ConstraintCode =
@@ -15,7 +16,9 @@ export type ConstraintCode =
   | 'travel'
   | 'outer-diameter-limit'
   | 'part-size'
-  | 'vent-room';
+  | 'vent-room'
+  | 'tilt-offset'
+  | 'tilt-gap';
 
 export interface FloatSizing {
   float: FloatSpec;
@@ -39,6 +42,8 @@ export function sizeFloat(b: DesignBasis, outerDiameterMm: number, cylinderHeigh
     padProudMm: b.padProudMm,
     clearanceMm: PRINT_CLEARANCE_MM,
     rimMm: b.floatShellMm,
+    collarMinRadiusMm: b.guide.collarMinRadiusMm,
+    collarHeightMm: b.guide.collarHeightMm,
   });
   if (!float) return null;
   const shell = floatShellVolumeMm3(float);
@@ -57,12 +62,41 @@ export function sizeFloat(b: DesignBasis, outerDiameterMm: number, cylinderHeigh
   };
 }
 
-/** The float constraints that its cylinder height settles (both ease as the float grows taller). */
+/** Float-frame heights of the guide at the tight seal: the sleeve's mouth (print clearance above the collar's foot when the stop holds). */
+export function guideMouthInFloatMm(b: DesignBasis, f: FloatSpec): number {
+  return f.cylinderHeightMm + f.coneHeightMm + b.guide.stopGapMm + PRINT_CLEARANCE_MM;
+}
+
+/** Worst tilt of this float at the tight seal, in its bore and guide (guidedTilt), and the pad's margin on the lip. */
+export function floatTilt(b: DesignBasis, f: FloatSpec): GuidedTilt & { padMarginMm: number; pivotZMm: number } {
+  const R = f.outerDiameterMm / 2;
+  const pivotZ = f.heightMm + f.padProudMm - b.indentationMm;
+  const tilt = guidedTilt({
+    floatRadiusMm: R,
+    boreRadiusMm: R + b.radialGapMm,
+    cylinderHeightMm: f.cylinderHeightMm,
+    guide: {
+      collarRadiusMm: f.plateauRadiusMm,
+      sleeveRadiusMm: f.plateauRadiusMm + b.guide.playMm,
+      collarTopZMm: f.heightMm,
+      sleeveMouthZMm: guideMouthInFloatMm(b, f),
+      stopGapMm: b.guide.stopGapMm,
+    },
+    pivotZMm: pivotZ,
+    lipDiameterMm: b.inputs.sealDiameterM * 1e3,
+  });
+  return { ...tilt, padMarginMm: b.padDiameterMm / 2 - (b.inputs.sealDiameterM * 1e3) / 2, pivotZMm: pivotZ };
+}
+
+/** The float constraints that its cylinder height settles (all ease as the float grows taller). */
 export function floatViolations(b: DesignBasis, f: FloatSizing | null): ConstraintCode[] {
   if (!f) return ['float-shape'];
   const v: ConstraintCode[] = [];
   if (f.reserve < b.inputs.reserve) v.push('reserve');
   if (!(f.sealDepthMm <= f.float.cylinderHeightMm)) v.push('seal-in-cylinder');
+  const tilt = floatTilt(b, f.float);
+  if (tilt.padOffsetMm > tilt.padMarginMm + 1e-9) v.push('tilt-offset');
+  if (tilt.lipGapMm > b.indentationMm / 2 + 1e-9) v.push('tilt-gap');
   return v;
 }
 
@@ -115,11 +149,19 @@ export function layoutCandidate(b: DesignBasis, f: FloatSizing, drainAreaMm2: nu
     // the loaded pin rests in the teardrop's point, c sqrt(2) below the hole centre
     pinHoleCenterZMm: pinTop - PIN_DIAMETER_MM / 2 + pinDropBelowHoleCentreMm(PRINT_CLEARANCE_MM),
     printClearanceMm: PRINT_CLEARANCE_MM,
+    guide: {
+      boreMm: 2 * (f.float.plateauRadiusMm + b.guide.playMm),
+      outerDiameterMm: 2 * (f.float.plateauRadiusMm + b.guide.playMm + wallMm),
+      mouthZMm: sealBottom + guideMouthInFloatMm(b, f.float),
+      stopZMm: sealBottom + f.float.heightMm + b.guide.stopGapMm,
+      stopBoreMm: 2 * b.guide.stopInnerRadiusMm,
+    },
   });
   // the pin must cross the housing where it is widest along its section: at its flat
-  // (lowest, so deepest in the 45-degree flare), r cos 45deg below its axis
+  // (lowest, so deepest in the 50-degree flare), flatOffset below its axis
   const pinAxisZ = pinTop - PIN_DIAMETER_MM / 2;
-  const span = 2 * housingOuterRadiusAtMm(housing, pinAxisZ - (PIN_DIAMETER_MM / 2) * Math.SQRT1_2);
+  const flatOffset = pinSpec(0, 0).flatOffsetMm;
+  const span = 2 * housingOuterRadiusAtMm(housing, pinAxisZ - flatOffset);
   const pin = pinSpec(span, housing.pinHoles.diameterMm);
   const volumes = {
     housingMm3: housingVolumeMm3(housing),

@@ -82,8 +82,12 @@ export function searchSize(b: DesignBasis, drainAreaMm2: number): SearchOutcome 
     if (d > PART_SIZE_CAP_MM) break;
     const c = candidateAt(b, drainAreaMm2, d);
     results.push(c);
-    // a diameter with no workable cylinder at all is just too small; it explains nothing
-    if (Array.isArray(c)) continue;
+    // a diameter with no workable cylinder at all is just too small; it explains nothing,
+    // unless the tilt rules refuse even the tallest float (a lip too wide for the pad's indentation)
+    if (Array.isArray(c)) {
+      for (const code of c) if (code === 'tilt-gap' || code === 'tilt-offset') rejections.set(code, (rejections.get(code) ?? 0) + 1);
+      continue;
+    }
     for (const code of c.violations) rejections.set(code, (rejections.get(code) ?? 0) + 1);
     const others = c.violations.filter((v) => v !== 'travel');
     // a higher target lifts the nozzle and the deck by as much: the housing must still be within the size cap there

@@ -1,3 +1,4 @@
+import { OVERHANG_RISE } from '../constants.ts';
 import type { HousingSpec } from '../result.ts';
 
 export interface HousingSpecOptions {
@@ -16,11 +17,18 @@ export interface HousingSpecOptions {
   pinDiameterMm: number;
   pinHoleCenterZMm: number;
   printClearanceMm: number;
+  /** the float's guide: sleeve bore and outer diameter, its mouth and the stop ring's face (mounted z), the stop ring's bore */
+  guide: { boreMm: number; outerDiameterMm: number; mouthZMm: number; stopZMm: number; stopBoreMm: number };
 }
 
 /** Vent holes through the deck (DESIGN: at least two of 3 mm); three so one blocked vent is harmless. */
 export const VENT_COUNT = 3;
 export const VENT_DIAMETER_MM = 3;
+/** Slots through the guide sleeve, from its mouth up past the boss's underside, so the air above the collar reaches the vents (common practice: a trapped pocket pushes back). */
+export const GUIDE_SLOT_COUNT = 3;
+export const GUIDE_SLOT_WIDTH_MM = 2;
+/** The slots reach this far into the boss above its underside, mm, so no air is left above their tops. */
+export const GUIDE_SLOT_RISE_MM = 0.5;
 /** Drain notches: six around the rim, at least 4 x 4 mm (common practice: roots and grit pass). */
 export const NOTCH_COUNT = 6;
 export const NOTCH_MIN_MM = 4;
@@ -42,31 +50,34 @@ export function drainNotchSize(boreMm: number, drainAreaMm2: number): { widthMm:
 
 /**
  * Where the loaded pin sits in its hole. The hole is a teardrop of radius
- * R = r + c whose 45-degree point faces down when mounted (up in the deck-down
- * print). The pin settles into that V: a circle of radius r touching both
- * 45-degree sides has its centre r sqrt(2) above the point, and the point is
- * R sqrt(2) below the hole centre, so the pin's centre sits c sqrt(2) below the
- * hole centre. (The pin's flat, at r cos 45deg, ends exactly at those two
- * touching points, so it sits the same either way up.) Elementary geometry.
+ * R = r + c whose point (sides at a = 50 degrees from the horizontal) faces down
+ * when mounted (up in the deck-down print). The pin settles into that V: a circle
+ * of radius r touching both sides has its centre r / cos a above the point, and
+ * the point is R / cos a below the hole centre, so the pin's centre sits
+ * c / cos a below the hole centre. (The pin's flat, at r cos a, ends exactly at
+ * those two touching points, so it sits the same either way up.) Elementary geometry.
  */
 export function pinDropBelowHoleCentreMm(printClearanceMm: number): number {
-  return printClearanceMm * Math.SQRT2;
+  return printClearanceMm * Math.hypot(1, OVERHANG_RISE);
 }
 
 /**
  * Lowest the retainer pin's top can sit, mm: notch height, one wall of plastic
  * between the notch and the teardrop's point, then the teardrop (its point
- * (r + c) sqrt(2) below its centre), less the pin's drop into the point:
- * notch + wall + r (1 + sqrt(2)).
+ * (r + c) / cos 50deg below its centre), less the pin's drop into the point:
+ * notch + wall + r (1 + 1 / cos 50deg).
  */
 export function pinTopMinimumMm(notchHeightMm: number, wallMm: number, pinDiameterMm: number): number {
-  return notchHeightMm + wallMm + (pinDiameterMm / 2) * (1 + Math.SQRT2);
+  return notchHeightMm + wallMm + (pinDiameterMm / 2) * (1 + Math.hypot(1, OVERHANG_RISE));
 }
 
 /**
  * The housing's dimensions (mounted, z up from the base). The foot is a flange
- * carrying the anchor holes under a 45-degree flare that reaches the flange's
- * edge, so printed deck-down nothing overhangs past 45 degrees.
+ * carrying the anchor holes under a 50-degree flare that reaches the flange's
+ * edge, so printed deck-down nothing overhangs flatter than 50 degrees. The boss
+ * under the deck widens into the float's guide: a sleeve (guide.boreMm) hanging
+ * to guide.mouthZMm, with a stop ring inside it (guide.stopBoreMm) down to
+ * guide.stopZMm, cut by GUIDE_SLOT_COUNT air slots.
  */
 export function housingSpec(o: HousingSpecOptions): HousingSpec {
   const t = o.wallMm;
@@ -76,7 +87,7 @@ export function housingSpec(o: HousingSpecOptions): HousingSpec {
   const flange = Math.max(t, 2);
   const anchorRadius = outer / 2 + 2 * t + ANCHOR_DIAMETER_MM / 2;
   const footOuter = 2 * (anchorRadius + ANCHOR_DIAMETER_MM / 2 + t);
-  const bossOuter = o.seatBoreMm + 2 * t;
+  const bossOuter = o.guide.outerDiameterMm;
   return {
     boreMm: o.boreMm,
     wallMm: t,
@@ -90,6 +101,13 @@ export function housingSpec(o: HousingSpecOptions): HousingSpec {
     vents: { count: VENT_COUNT, diameterMm: VENT_DIAMETER_MM, circleRadiusMm: (bossOuter / 2 + o.boreMm / 2) / 2 },
     drainNotches: { count: NOTCH_COUNT, widthMm: notch.widthMm, heightMm: notch.heightMm, angleOffsetDeg: 0 },
     pinHoles: { diameterMm: holeDiameter, centerZMm: o.pinHoleCenterZMm },
+    guide: {
+      boreMm: o.guide.boreMm,
+      mouthZMm: o.guide.mouthZMm,
+      stopZMm: o.guide.stopZMm,
+      stopBoreMm: o.guide.stopBoreMm,
+      slots: { count: GUIDE_SLOT_COUNT, widthMm: GUIDE_SLOT_WIDTH_MM, riseMm: GUIDE_SLOT_RISE_MM, angleOffsetDeg: 60 },
+    },
     foot: {
       outerDiameterMm: footOuter,
       flangeThicknessMm: flange,

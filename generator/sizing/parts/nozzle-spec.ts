@@ -1,3 +1,4 @@
+import { OVERHANG_RISE } from '../constants.ts';
 import type { NozzleSpec } from '../result.ts';
 
 export interface NozzleSpecOptions {
@@ -31,10 +32,10 @@ const RIB_BASE_MM = 1.0;
 /**
  * The nozzle insert's dimensions, mounted z up with the sealing face at z = 0.
  * From the face up: lip (d_s, a little taller than the pad indentation), a
- * 45-degree flare out to the shoulder, the shoulder (seats under the housing
+ * 50-degree flare out to the shoulder, the shoulder (seats under the housing
  * boss), the collar (its crush ribs stand 2 x clearance proud, so they bite one
  * clearance into the seat bore), then the barb stem and teeth. The bore d_o runs
- * through. Printed tip down, every step out is at 45 degrees.
+ * through. Printed tip down, every step out rises at 50 degrees (OVERHANG_MIN_DEG).
  */
 export function nozzleSpec(o: NozzleSpecOptions): NozzleSpec {
   const lipHeight = Math.max(1.0, o.indentationMm + 0.5);
@@ -42,10 +43,10 @@ export function nozzleSpec(o: NozzleSpecOptions): NozzleSpec {
   const crest = root * (1 + BARB_OVERSIZE);
   const collar = Math.max(crest, o.sealDiameterMm) + 4 * o.lineWidthMm;
   const shoulder = collar + 2 * SHOULDER_LEDGE_MM;
-  const flareHeight = (shoulder - o.sealDiameterMm) / 2;
+  const flareHeight = ((shoulder - o.sealDiameterMm) / 2) * OVERHANG_RISE;
   const protrusion = lipHeight + flareHeight + SHOULDER_HEIGHT_MM;
   const toothStep = (crest - root) / 2;
-  const total = protrusion + o.seatLengthMm + BARB_STEM_MM + BARB_TEETH * (toothStep + BARB_TAPER_MM);
+  const total = protrusion + o.seatLengthMm + BARB_STEM_MM + BARB_TEETH * (toothStep * OVERHANG_RISE + BARB_TAPER_MM);
   return {
     orificeMm: o.orificeMm,
     lipDiameterMm: o.sealDiameterMm,

@@ -1,3 +1,4 @@
+import { OVERHANG_RISE } from '../constants.ts';
 import { cylinderVolume, frustumVolume } from '../float/frustum-volume.ts';
 import type { HousingSpec, NozzleSpec, PinSpec } from '../result.ts';
 
@@ -7,9 +8,14 @@ import type { HousingSpec, NozzleSpec, PinSpec } from '../result.ts';
  * Every formula is elementary geometry (cylinder, frustum, circular segment).
  */
 
-/** Area of a teardrop: circle of radius r plus a 45-degree point, A = r^2 (3 pi / 4 + 1). */
+/**
+ * Area of a teardrop: circle of radius r plus a point whose sides are tangent at a = 50 degrees
+ * from the horizontal: A = pi r^2 + r^2 tan a - a r^2 (the kite centre-tangents-point, r^2 tan a,
+ * less the circle's sector of 2a between the tangent points). a = 45deg gives r^2 (3 pi / 4 + 1).
+ */
 export function teardropAreaMm2(r: number): number {
-  return r * r * ((3 * Math.PI) / 4 + 1);
+  const a = Math.atan(OVERHANG_RISE);
+  return r * r * (Math.PI + OVERHANG_RISE - a);
 }
 
 /** Integral over y in [-a, a] of sqrt(R^2 - y^2): the area of a circle's slab half, mm2. */
@@ -18,13 +24,18 @@ function slabHalfArea(R: number, a: number): number {
   return h * Math.sqrt(R * R - h * h) + R * R * Math.asin(h / R);
 }
 
-/** Outer radius of the housing at height z, mm (flange, 45-degree flare, then tube). */
+/** Outer radius of the housing at height z, mm (flange, 50-degree flare, then tube). */
 export function housingOuterRadiusAtMm(h: HousingSpec, z: number): number {
   const Ro = h.outerDiameterMm / 2;
   const Rf = h.foot.outerDiameterMm / 2;
   if (z <= h.foot.flangeThicknessMm) return Rf;
   const u = z - h.foot.flangeThicknessMm;
-  return Math.max(Ro, Rf - u);
+  return Math.max(Ro, Rf - u / OVERHANG_RISE);
+}
+
+/** Height of the 50-degree flare over the flange, mm: (R_f - R_o) tan 50deg. */
+export function housingFlareHeightMm(h: HousingSpec): number {
+  return ((h.foot.outerDiameterMm - h.outerDiameterMm) / 2) * OVERHANG_RISE;
 }
 
 /** Volume one drain notch removes: slab of the notch width through the wall and foot, z from 0 to its height (Simpson's rule in z). */
@@ -33,7 +44,8 @@ function notchVolumeMm3(h: HousingSpec): number {
   const Rb = h.boreMm / 2;
   const area = (z: number) => slabHalfArea(housingOuterRadiusAtMm(h, z), a) - slabHalfArea(Rb, a);
   // split at the flange top so Simpson sees smooth pieces
-  const breaks = [0, Math.min(h.foot.flangeThicknessMm, h.drainNotches.heightMm), h.drainNotches.heightMm];
+  const flareTop = h.foot.flangeThicknessMm + housingFlareHeightMm(h);
+  const breaks = [0, Math.min(h.foot.flangeThicknessMm, h.drainNotches.heightMm), Math.min(flareTop, h.drainNotches.heightMm), h.drainNotches.heightMm];
   let v = 0;
   for (let k = 0; k + 1 < breaks.length; k++) {
     const [z0, z1] = [breaks[k], breaks[k + 1]];
@@ -58,16 +70,30 @@ export function housingVolumeMm3(h: HousingSpec): number {
   const deck = cylinderVolume(Ro, h.deckThicknessMm) - cylinderVolume(rSeat, h.deckThicknessMm);
   const vents = h.vents.count * cylinderVolume(h.vents.diameterMm / 2, h.deckThicknessMm);
   const boss = Math.PI * (rBoss * rBoss - rSeat * rSeat) * h.bossHeightMm;
+  // the guide: sleeve below the boss to its mouth, stop ring inside it, less the air slots
+  const gd = h.guide;
+  const rGuide = gd.boreMm / 2;
+  const rStop = gd.stopBoreMm / 2;
+  const bossBottom = h.deckBottomZMm - h.bossHeightMm;
+  const sleeveLength = bossBottom - gd.mouthZMm;
+  const stopLength = bossBottom - gd.stopZMm;
+  const sleeve = Math.PI * (rBoss * rBoss - rGuide * rGuide) * sleeveLength + Math.PI * (rGuide * rGuide - rStop * rStop) * stopLength;
+  const a = gd.slots.widthMm / 2;
+  const slot =
+    (slabHalfArea(rBoss, a) - slabHalfArea(rGuide, a)) * sleeveLength +
+    (slabHalfArea(rGuide, a) - slabHalfArea(rStop, a)) * stopLength +
+    (slabHalfArea(rBoss, a) - slabHalfArea(rStop - 1, a)) * gd.slots.riseMm;
+  const guide = sleeve - gd.slots.count * slot;
   const flange = Math.PI * (Rf * Rf - Ro * Ro) * h.foot.flangeThicknessMm;
-  // ring between R_o and a radius shrinking from R_f to R_o over height w: pi (R_o w^2 + w^3/3)
-  const flare = Math.PI * (Ro * w * w + (w * w * w) / 3);
+  // ring between R_o and a radius shrinking from R_f to R_o over height w tan a: pi tan a (R_o w^2 + w^3/3)
+  const flare = Math.PI * OVERHANG_RISE * (Ro * w * w + (w * w * w) / 3);
   const ah = h.foot.anchorHoles;
-  const anchorDepth = h.foot.flangeThicknessMm + Math.max(0, Rf - ah.circleRadiusMm);
+  const anchorDepth = h.foot.flangeThicknessMm + Math.max(0, Rf - ah.circleRadiusMm) * OVERHANG_RISE;
   const anchors = ah.count * cylinderVolume(ah.diameterMm / 2, anchorDepth);
   const notches = h.drainNotches.count * notchVolumeMm3(h);
   const rHole = h.pinHoles.diameterMm / 2;
   const pinHoles = 2 * teardropAreaMm2(rHole) * (housingOuterRadiusAtMm(h, h.pinHoles.centerZMm) - Rb);
-  return tube + deck - vents + boss + flange + flare - anchors - notches - pinHoles;
+  return tube + deck - vents + boss + guide + flange + flare - anchors - notches - pinHoles;
 }
 
 export function nozzleVolumeMm3(n: NozzleSpec): number {
@@ -80,16 +106,16 @@ export function nozzleVolumeMm3(n: NozzleSpec): number {
   const ribs = n.crushRibs.count * 0.5 * n.crushRibs.baseWidthMm * n.crushRibs.heightMm * n.collarLengthMm;
   const outer =
     cylinderVolume(rs, n.lipHeightMm) +
-    frustumVolume(rsh - rs, rs, rsh) +
+    frustumVolume((rsh - rs) * OVERHANG_RISE, rs, rsh) +
     cylinderVolume(rsh, n.shoulderHeightMm) +
     cylinderVolume(rc, n.collarLengthMm) +
     ribs +
     cylinderVolume(root, n.barb.stemLengthMm) +
-    n.barb.count * (frustumVolume(step, root, crest) + frustumVolume(n.barb.taperLengthMm, crest, root));
+    n.barb.count * (frustumVolume(step * OVERHANG_RISE, root, crest) + frustumVolume(n.barb.taperLengthMm, crest, root));
   return outer - cylinderVolume(n.orificeMm / 2, n.totalLengthMm);
 }
 
-/** Cross-section of the pin: circle less the segment below the flat at r cos 45deg: pi r^2 - (r^2/2)(pi/2 - 1). */
+/** Cross-section of the pin: circle less the segment below the flat at flatOffset f = r cos 50deg: pi r^2 - (r^2/2)(theta - sin theta), theta = 2 acos(f / r). */
 export function pinSectionAreaMm2(p: PinSpec): number {
   const r = p.diameterMm / 2;
   const theta = 2 * Math.acos(p.flatOffsetMm / r);

@@ -1,3 +1,4 @@
+import { OVERHANG_RISE } from '../constants.ts';
 import type { PinSpec } from '../result.ts';
 
 /** Retainer pin diameter, mm (common practice: stiff enough across a 100 mm bore in PETG). */
@@ -6,13 +7,14 @@ export const PIN_DIAMETER_MM = 4;
 const PIN_STICK_OUT_MM = 3;
 
 /**
- * Retainer pin: round bar with a flat at r cos 45deg below the axis (printed on
- * the flat, every overhang then at 45 degrees), long enough to cross the housing
+ * Retainer pin: round bar with a flat at r cos 50deg below the axis (printed on
+ * the flat, every overhang then at 50 degrees or steeper: the circle's tangent where
+ * it meets the flat is 50 degrees from the bed), long enough to cross the housing
  * at the hole height, with a tab head wider than the hole.
  */
 export function pinSpec(spanMm: number, holeDiameterMm: number): PinSpec {
   const r = PIN_DIAMETER_MM / 2;
-  const flat = r * Math.SQRT1_2;
+  const flat = r / Math.hypot(1, OVERHANG_RISE);
   return {
     diameterMm: PIN_DIAMETER_MM,
     flatOffsetMm: flat,

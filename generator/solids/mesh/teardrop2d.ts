@@ -1,10 +1,10 @@
 /**
  * Outline of a horizontal hole that prints without support: a circle with a
- * pointed roof whose two sides rise at 45 degrees and meet at the tip, on +y
- * (turn it so +y is the print's up direction).
+ * pointed roof whose two sides rise at 50 degrees (OVERHANG_MIN_DEG) and meet
+ * at the tip, on +y (turn it so +y is the print's up direction).
  *
- * The roof lines are tangent to the circle at 45 and 135 degrees and meet at
- * (0, r sqrt 2). The arc below is faceted with the circle's own vertices
+ * The roof lines are tangent to the circle at 40 and 140 degrees and meet at
+ * (0, r / cos 50deg). The arc below is faceted with the circle's own vertices
  * (angles 2 pi k / N from +x, so with N a multiple of 4 the bottom and sides
  * are vertices); the tangent points are added as exact corners.
  * Counter-clockwise, centred on the origin.
@@ -14,6 +14,7 @@
  */
 import { jscad, type Geom2 } from './jscad.ts';
 import { requireInteger, requirePositive } from './validate.ts';
+import { OVERHANG_MIN_DEG } from '../../sizing/constants.ts';
 
 export interface TeardropOptions {
   radiusMm: number;
@@ -27,14 +28,16 @@ export function teardrop2d(options: TeardropOptions): Geom2 {
     const [c, s] = unitCircle(k, n);
     return [r * c, r * s];
   };
-  const tangent = r / Math.SQRT2;
-  const points: [number, number][] = [[-tangent, tangent]]; // 135 degrees
-  // Vertex k sits at 360 k / n degrees; keep those outside the roof (45..135
-  // degrees): 8k > 3n is past 135, 8k < n is before 45.
-  for (let k = 0; k < n; k++) if (8 * k > 3 * n) points.push(point(k));
-  for (let k = 0; k < n; k++) if (8 * k < n) points.push(point(k));
-  points.push([tangent, tangent]); // 45 degrees
-  points.push([0, r * Math.SQRT2]); // tip
+  const a = ((90 - OVERHANG_MIN_DEG) * Math.PI) / 180; // tangent point's angle from +x
+  const [tx, ty] = [r * Math.cos(a), r * Math.sin(a)];
+  const points: [number, number][] = [[-tx, ty]]; // 140 degrees
+  // Vertex k sits at 360 k / n degrees; keep those outside the roof (40..140 degrees).
+  const deg = (k: number) => (360 * k) / n;
+  const eps = 1e-9;
+  for (let k = 0; k < n; k++) if (deg(k) > 180 - (90 - OVERHANG_MIN_DEG) + eps) points.push(point(k));
+  for (let k = 0; k < n; k++) if (deg(k) < 90 - OVERHANG_MIN_DEG - eps) points.push(point(k));
+  points.push([tx, ty]); // 40 degrees
+  points.push([0, r / Math.cos((OVERHANG_MIN_DEG * Math.PI) / 180)]); // tip
   return jscad.geometries.geom2.fromPoints(points);
 }
 

@@ -3,10 +3,11 @@
  *
  * One solid of revolution, no booleans: the profile is the shell's half
  * section, the sealed cavity and the pad pocket are notches in it that reach
- * the axis. Outer: cylinder R to h_c, 45-degree cone to the plateau r_p at
- * h_f, pocket (r_pocket, depth) cut into the plateau. Cavity: r_cav from the
- * bottom shell t up to the inner cone start, 45-degree roof in to r_roof at
- * roof z, flat roof (the one short bridge). Every dimension is FloatSpec's.
+ * the axis. Outer: cylinder R to h_c, 50-degree cone in to the guide collar
+ * r_c, the collar up to the plateau at h_f, pocket (r_pocket, depth) cut into
+ * the plateau. Cavity: r_cav from the bottom shell t up to the inner cone
+ * start, 50-degree roof in to r_c - t, up inside the collar to the flat roof
+ * (the one short bridge). Every dimension is FloatSpec's.
  *
  * Facets: one count for the whole float, from its outer radius at the asked
  * quality, so every section is the same N-gon and the volume is exactly
@@ -15,6 +16,7 @@
 import { geom3ToMesh, segmentsFor, type IndexedMesh, type Quality } from '../mesh/index.ts';
 import type { FloatSpec } from '../../sizing/result.ts';
 import { revolveProfile } from '../shapes/revolve-profile.ts';
+import { dedupe } from '../shapes/dedupe-corners.ts';
 
 /** Profile corners [r, z], counter-clockwise. */
 export function floatProfile(f: FloatSpec): [number, number][] {
@@ -25,6 +27,7 @@ export function floatProfile(f: FloatSpec): [number, number][] {
     [0, 0],
     [R, 0],
     [R, f.cylinderHeightMm],
+    [f.plateauRadiusMm, f.cylinderHeightMm + f.coneHeightMm],
     [f.plateauRadiusMm, H],
   ];
   const pocket: [number, number][] =
@@ -38,6 +41,7 @@ export function floatProfile(f: FloatSpec): [number, number][] {
   const cavity: [number, number][] = [
     [0, f.cavityRoofZMm],
     [f.cavityRoofRadiusMm, f.cavityRoofZMm],
+    [f.cavityRoofRadiusMm, f.cavityConeTopZMm],
     [f.cavityRadiusMm, f.cavityConeStartZMm],
     [f.cavityRadiusMm, f.cavityBottomZMm],
     [0, f.cavityBottomZMm],
@@ -50,5 +54,5 @@ export function floatSegments(f: FloatSpec, quality: Quality): number {
 }
 
 export function buildFloatMesh(f: FloatSpec, quality: Quality): IndexedMesh {
-  return geom3ToMesh(revolveProfile(floatProfile(f), floatSegments(f, quality)));
+  return geom3ToMesh(revolveProfile(dedupe(floatProfile(f)), floatSegments(f, quality)));
 }

@@ -1,14 +1,15 @@
 /**
  * The housing. Built mounted (z up from the base), then turned deck-down for
- * printing: the deck is the first layer, the boss stands up from it, the
- * flare under the flange rises at 45 degrees and the pin holes' teardrop
- * tips point up.
+ * printing: the deck is the first layer, the boss and the float's guide
+ * sleeve stand up from it, the flare under the flange rises at 50 degrees and
+ * the pin holes' teardrop tips point up.
  *
- * Body: one solid of revolution (HousingSpec): flange from z = 0, 45-degree
+ * Body: one solid of revolution (HousingSpec): flange from z = 0, 50-degree
  * flare back to the tube, tube to the deck, deck on top, seat bore through
- * deck and boss, boss hanging under the deck inside the tube.
- * Cuts: vents, anchor holes, drain notches and the two pin holes, all joined
- * and taken away in one manifold-3d subtraction.
+ * deck and boss, boss hanging under the deck inside the tube, going on down as
+ * the guide sleeve with the stop ring inside it.
+ * Cuts: vents, anchor holes, drain notches, the sleeve's air slots and the two
+ * pin holes, all joined and taken away in one manifold-3d subtraction.
  *
  * Fits: the bore and every hole are drawn with their flats on the nominal
  * circle (holePolygonRadiusMm), so the float, the nozzle collar, the pin and
@@ -33,6 +34,8 @@ import { prism } from '../shapes/prism.ts';
 import { revolveProfile } from '../shapes/revolve-profile.ts';
 import { asMat4, fromRows, transformMesh, translation } from '../shapes/transform-mesh.ts';
 import { circlePoints } from '../shapes/polygon-section.ts';
+import { housingFlareHeightMm } from '../../sizing/parts/part-volumes.ts';
+import { OVERHANG_RISE } from '../../sizing/constants.ts';
 
 /** Cutters reach this far past the faces they cut, mm, so no cut ends flush with a face. */
 const CUT_OVERRUN_MM = 1;
@@ -45,10 +48,11 @@ export function housingSegments(h: HousingSpec, quality: Quality): number {
 export function housingProfile(h: HousingSpec, segments: number): [number, number][] {
   const Ro = h.outerDiameterMm / 2;
   const Rf = h.foot.outerDiameterMm / 2;
-  const w = Rf - Ro;
   const tf = h.foot.flangeThicknessMm;
   const rb = holePolygonRadiusMm(h.boreMm / 2, segments);
   const rs = holePolygonRadiusMm(h.seatBoreMm / 2, segments);
+  const rg = holePolygonRadiusMm(h.guide.boreMm / 2, segments);
+  const rStop = holePolygonRadiusMm(h.guide.stopBoreMm / 2, segments);
   const rBoss = h.bossOuterDiameterMm / 2;
   const top = h.deckBottomZMm + h.deckThicknessMm;
   const bossBottom = h.deckBottomZMm - h.bossHeightMm;
@@ -56,11 +60,15 @@ export function housingProfile(h: HousingSpec, segments: number): [number, numbe
     [rb, 0],
     [Rf, 0],
     [Rf, tf],
-    [Ro, tf + w],
+    [Ro, tf + housingFlareHeightMm(h)],
     [Ro, top],
     [rs, top],
     [rs, bossBottom],
-    [rBoss, bossBottom],
+    [rStop, bossBottom],
+    [rStop, h.guide.stopZMm],
+    [rg, h.guide.stopZMm],
+    [rg, h.guide.mouthZMm],
+    [rBoss, h.guide.mouthZMm],
     [rBoss, h.deckBottomZMm],
     [rb, h.deckBottomZMm],
   ]);
@@ -90,7 +98,7 @@ export function housingCutters(h: HousingSpec, quality: Quality): Geom3[] {
 
   const ah = h.foot.anchorHoles;
   // through the flange and the flare above the hole's inner edge
-  const anchorTop = h.foot.flangeThicknessMm + Math.max(0, Rf - (ah.circleRadiusMm - ah.diameterMm / 2)) + CUT_OVERRUN_MM;
+  const anchorTop = h.foot.flangeThicknessMm + Math.max(0, Rf - (ah.circleRadiusMm - ah.diameterMm / 2)) * OVERHANG_RISE + CUT_OVERRUN_MM;
   for (let k = 0; k < ah.count; k++) {
     const a = (ah.angleOffsetDeg + (k * 360) / ah.count) * deg;
     cutters.push(verticalHole(ah.diameterMm / 2, quality, ah.circleRadiusMm * Math.cos(a), ah.circleRadiusMm * Math.sin(a), -CUT_OVERRUN_MM, anchorTop));
@@ -110,6 +118,25 @@ export function housingCutters(h: HousingSpec, quality: Quality): Geom3[] {
     const c = Math.cos(a);
     const s = Math.sin(a);
     cutters.push(prism(slot, dn.heightMm + CUT_OVERRUN_MM, fromRows([c, -s, 0], [s, c, 0], [0, 0, 1], [0, 0, -CUT_OVERRUN_MM])));
+  }
+
+  // Air slots through the guide sleeve and its stop ring, from below the mouth to a little into the boss
+  const gs = h.guide.slots;
+  const slotIn = h.guide.stopBoreMm / 2 - 1;
+  const slotOut = h.bossOuterDiameterMm / 2 + CUT_OVERRUN_MM;
+  const slotSection: [number, number][] = [
+    [slotIn, -gs.widthMm / 2],
+    [slotOut, -gs.widthMm / 2],
+    [slotOut, gs.widthMm / 2],
+    [slotIn, gs.widthMm / 2],
+  ];
+  const slotBottom = h.guide.mouthZMm - CUT_OVERRUN_MM;
+  const slotTop = h.deckBottomZMm - h.bossHeightMm + gs.riseMm;
+  for (let k = 0; k < gs.count; k++) {
+    const a = (gs.angleOffsetDeg + (k * 360) / gs.count) * deg;
+    const c = Math.cos(a);
+    const s = Math.sin(a);
+    cutters.push(prism(slotSection, slotTop - slotBottom, fromRows([c, -s, 0], [s, c, 0], [0, 0, 1], [0, 0, slotBottom])));
   }
 
   // Pin holes: one teardrop prism across the whole housing along x. teardrop2d

@@ -2,8 +2,8 @@
  * The nozzle insert, in print pose = mounted pose: sealing face on z = 0
  * (the first layer, the flattest face a printer makes), tip down.
  *
- * Body: one solid of revolution (NozzleSpec from the face up: lip, 45-degree
- * flare to the shoulder, shoulder, collar, barb stem, teeth with a 45-degree
+ * Body: one solid of revolution (NozzleSpec from the face up: lip, 50-degree
+ * flare to the shoulder, shoulder, collar, barb stem, teeth with a 50-degree
  * step out and a taper back in), the orifice as the profile's inner edge.
  * Crush ribs: `count` triangular prisms (base width at the collar surface,
  * apex heightMm out) running the collar's length, joined to the body in one
@@ -25,6 +25,7 @@ import { fromRows } from '../shapes/transform-mesh.ts';
 import { prism } from '../shapes/prism.ts';
 import { revolveProfile } from '../shapes/revolve-profile.ts';
 import { dedupe } from '../shapes/dedupe-corners.ts';
+import { OVERHANG_RISE } from '../../sizing/constants.ts';
 
 /** Outer profile corners [r, z] from the face up, then the orifice back down; counter-clockwise. */
 export function nozzleProfile(n: NozzleSpec): [number, number][] {
@@ -35,7 +36,7 @@ export function nozzleProfile(n: NozzleSpec): [number, number][] {
   const root = n.barb.rootDiameterMm / 2;
   const crest = n.barb.crestDiameterMm / 2;
   const pts: [number, number][] = [[ro, 0], [rs, 0], [rs, n.lipHeightMm]];
-  let z = n.lipHeightMm + (rsh - rs); // 45-degree flare
+  let z = n.lipHeightMm + (rsh - rs) * OVERHANG_RISE; // 50-degree flare
   pts.push([rsh, z]);
   z += n.shoulderHeightMm;
   pts.push([rsh, z], [rc, z]);
@@ -44,7 +45,7 @@ export function nozzleProfile(n: NozzleSpec): [number, number][] {
   z += n.barb.stemLengthMm;
   pts.push([root, z]);
   for (let i = 0; i < n.barb.count; i++) {
-    z += crest - root; // 45-degree step out
+    z += (crest - root) * OVERHANG_RISE; // 50-degree step out
     pts.push([crest, z]);
     z += n.barb.taperLengthMm;
     pts.push([root, z]);
@@ -55,7 +56,7 @@ export function nozzleProfile(n: NozzleSpec): [number, number][] {
 
 /** Height of the shoulder's top face (where the collar and its ribs start), mm above the face. */
 export function nozzleCollarBottomZMm(n: NozzleSpec): number {
-  return n.lipHeightMm + (n.shoulderDiameterMm - n.lipDiameterMm) / 2 + n.shoulderHeightMm;
+  return n.lipHeightMm + ((n.shoulderDiameterMm - n.lipDiameterMm) / 2) * OVERHANG_RISE + n.shoulderHeightMm;
 }
 
 export function nozzleSegments(n: NozzleSpec, quality: Quality): number {

@@ -3,7 +3,7 @@
  * (a box, flat on the bed too) at x from -head.length to 0, the round bar
  * from the head's face (x = 0) to x = lengthMm. Section: circle of
  * diameterMm with the part below flatOffsetMm under the axis cut away, so the
- * axis is at z = flatOffsetMm and every overhang of the round is at 45 degrees
+ * axis is at z = flatOffsetMm and every overhang of the round is at 50 degrees
  * or steeper (PinSpec). The bar is extruded from inside the head, so the head
  * and bar overlap and join cleanly in one manifold-3d union.
  */
