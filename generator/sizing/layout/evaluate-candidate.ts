@@ -158,7 +158,7 @@ export function layoutCandidate(b: DesignBasis, f: FloatSizing, drainAreaMm2: nu
     },
   });
   // the pin must cross the housing where it is widest along its section: at its flat
-  // (lowest, so deepest in the 50-degree flare), flatOffset below its axis
+  // (lowest, so deepest in the flare), flatOffset below its axis
   const pinAxisZ = pinTop - PIN_DIAMETER_MM / 2;
   const flatOffset = pinSpec(0, 0).flatOffsetMm;
   const span = 2 * housingOuterRadiusAtMm(housing, pinAxisZ - flatOffset);

@@ -1,4 +1,3 @@
-import { OVERHANG_RISE } from '../constants.ts';
 import type { HousingSpec } from '../result.ts';
 
 export interface HousingSpecOptions {
@@ -29,6 +28,23 @@ export const GUIDE_SLOT_COUNT = 3;
 export const GUIDE_SLOT_WIDTH_MM = 2;
 /** The slots reach this far into the boss above its underside, mm, so no air is left above their tops. */
 export const GUIDE_SLOT_RISE_MM = 0.5;
+/**
+ * The pin holes' teardrop roof, degrees from the horizontal. Where the hole leaves the
+ * foot's flare, the roof and the flare meet in an edge that slopes at
+ * atan(1 / sqrt(cot^2 roof + cot^2 flare)): 40 degrees for a 50-degree roof in a 50-degree flare, which a
+ * slicer would support; a 65-degree roof in the 55-degree flare lifts it to 50 (elementary geometry).
+ */
+export const PIN_HOLE_ROOF_DEG = 65;
+/**
+ * The foot's flare, degrees from the bed once printed deck-down. Steeper than the 50 of
+ * every other face because the pin holes pass through it: a hole's roof (65 degrees) and
+ * the flare meet in an edge where each printed layer of height h steps out by h cot 65deg
+ * and h cot a at once; at 55 degrees that is h sqrt(cot^2 65deg + cot^2 55deg) = 0.84 h,
+ * under the h cot 45deg = h a slicer allows at a 45-degree threshold (elementary geometry;
+ * measured with PrusaSlicer at 0.3 mm layers: a 50-degree flare got support under the pin holes).
+ */
+export const FOOT_FLARE_DEG = 55;
+export const FOOT_FLARE_RISE = Math.tan((FOOT_FLARE_DEG * Math.PI) / 180);
 /** Drain notches: six around the rim, at least 4 x 4 mm (common practice: roots and grit pass). */
 export const NOTCH_COUNT = 6;
 export const NOTCH_MIN_MM = 4;
@@ -50,30 +66,30 @@ export function drainNotchSize(boreMm: number, drainAreaMm2: number): { widthMm:
 
 /**
  * Where the loaded pin sits in its hole. The hole is a teardrop of radius
- * R = r + c whose point (sides at a = 50 degrees from the horizontal) faces down
+ * R = r + c whose point (sides at a = PIN_HOLE_ROOF_DEG from the horizontal) faces down
  * when mounted (up in the deck-down print). The pin settles into that V: a circle
  * of radius r touching both sides has its centre r / cos a above the point, and
  * the point is R / cos a below the hole centre, so the pin's centre sits
- * c / cos a below the hole centre. (The pin's flat, at r cos a, ends exactly at
+ * c / cos a below the hole centre. (The pin's flat, at r cos 50deg, ends below
  * those two touching points, so it sits the same either way up.) Elementary geometry.
  */
 export function pinDropBelowHoleCentreMm(printClearanceMm: number): number {
-  return printClearanceMm * Math.hypot(1, OVERHANG_RISE);
+  return printClearanceMm / Math.cos((PIN_HOLE_ROOF_DEG * Math.PI) / 180);
 }
 
 /**
  * Lowest the retainer pin's top can sit, mm: notch height, one wall of plastic
  * between the notch and the teardrop's point, then the teardrop (its point
- * (r + c) / cos 50deg below its centre), less the pin's drop into the point:
- * notch + wall + r (1 + 1 / cos 50deg).
+ * (r + c) / cos a below its centre), less the pin's drop into the point:
+ * notch + wall + r (1 + 1 / cos a), a = PIN_HOLE_ROOF_DEG.
  */
 export function pinTopMinimumMm(notchHeightMm: number, wallMm: number, pinDiameterMm: number): number {
-  return notchHeightMm + wallMm + (pinDiameterMm / 2) * (1 + Math.hypot(1, OVERHANG_RISE));
+  return notchHeightMm + wallMm + (pinDiameterMm / 2) * (1 + 1 / Math.cos((PIN_HOLE_ROOF_DEG * Math.PI) / 180));
 }
 
 /**
  * The housing's dimensions (mounted, z up from the base). The foot is a flange
- * carrying the anchor holes under a 50-degree flare that reaches the flange's
+ * carrying the anchor holes under a flare (FOOT_FLARE_DEG) that reaches the flange's
  * edge, so printed deck-down nothing overhangs flatter than 50 degrees. The boss
  * under the deck widens into the float's guide: a sleeve (guide.boreMm) hanging
  * to guide.mouthZMm, with a stop ring inside it (guide.stopBoreMm) down to

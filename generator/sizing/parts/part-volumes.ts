@@ -1,6 +1,8 @@
-import { OVERHANG_RISE } from '../constants.ts';
+import { OVERHANG_MIN_DEG, OVERHANG_RISE } from '../constants.ts';
+import { FOOT_FLARE_RISE } from './housing-spec.ts';
 import { cylinderVolume, frustumVolume } from '../float/frustum-volume.ts';
 import type { HousingSpec, NozzleSpec, PinSpec } from '../result.ts';
+import { PIN_HOLE_ROOF_DEG } from './housing-spec.ts';
 
 /**
  * Analytic solid volumes of the printed parts, mm3, for true circles.
@@ -13,10 +15,17 @@ import type { HousingSpec, NozzleSpec, PinSpec } from '../result.ts';
  * from the horizontal: A = pi r^2 + r^2 tan a - a r^2 (the kite centre-tangents-point, r^2 tan a,
  * less the circle's sector of 2a between the tangent points). a = 45deg gives r^2 (3 pi / 4 + 1).
  */
-export function teardropAreaMm2(r: number): number {
-  const a = Math.atan(OVERHANG_RISE);
-  return r * r * (Math.PI + OVERHANG_RISE - a);
+export function teardropAreaMm2(r: number, roofDeg = OVERHANG_MIN_DEG): number {
+  const a = (roofDeg * Math.PI) / 180;
+  return r * r * (Math.PI + Math.tan(a) - a);
 }
+
+/**
+ * Anchor holes are teardrops in plan, point outward, roof at this angle: where a hole
+ * leaves the foot's 50-degree flare, each printed layer closes the point by less than
+ * a slicer's overhang allowance (common practice: a hole bridged at its end needs support).
+ */
+export const ANCHOR_ROOF_DEG = 60;
 
 /** Integral over y in [-a, a] of sqrt(R^2 - y^2): the area of a circle's slab half, mm2. */
 function slabHalfArea(R: number, a: number): number {
@@ -24,18 +33,18 @@ function slabHalfArea(R: number, a: number): number {
   return h * Math.sqrt(R * R - h * h) + R * R * Math.asin(h / R);
 }
 
-/** Outer radius of the housing at height z, mm (flange, 50-degree flare, then tube). */
+/** Outer radius of the housing at height z, mm (flange, flare at FOOT_FLARE_DEG, then tube). */
 export function housingOuterRadiusAtMm(h: HousingSpec, z: number): number {
   const Ro = h.outerDiameterMm / 2;
   const Rf = h.foot.outerDiameterMm / 2;
   if (z <= h.foot.flangeThicknessMm) return Rf;
   const u = z - h.foot.flangeThicknessMm;
-  return Math.max(Ro, Rf - u / OVERHANG_RISE);
+  return Math.max(Ro, Rf - u / FOOT_FLARE_RISE);
 }
 
-/** Height of the 50-degree flare over the flange, mm: (R_f - R_o) tan 50deg. */
+/** Height of the flare over the flange, mm: (R_f - R_o) tan FOOT_FLARE_DEG. */
 export function housingFlareHeightMm(h: HousingSpec): number {
-  return ((h.foot.outerDiameterMm - h.outerDiameterMm) / 2) * OVERHANG_RISE;
+  return ((h.foot.outerDiameterMm - h.outerDiameterMm) / 2) * FOOT_FLARE_RISE;
 }
 
 /** Volume one drain notch removes: slab of the notch width through the wall and foot, z from 0 to its height (Simpson's rule in z). */
@@ -85,14 +94,14 @@ export function housingVolumeMm3(h: HousingSpec): number {
     (slabHalfArea(rBoss, a) - slabHalfArea(rStop - 1, a)) * gd.slots.riseMm;
   const guide = sleeve - gd.slots.count * slot;
   const flange = Math.PI * (Rf * Rf - Ro * Ro) * h.foot.flangeThicknessMm;
-  // ring between R_o and a radius shrinking from R_f to R_o over height w tan a: pi tan a (R_o w^2 + w^3/3)
-  const flare = Math.PI * OVERHANG_RISE * (Ro * w * w + (w * w * w) / 3);
+  // ring between R_o and a radius shrinking from R_f to R_o over height w tan a: pi tan a (R_o w^2 + w^3/3), a = FOOT_FLARE_DEG
+  const flare = Math.PI * FOOT_FLARE_RISE * (Ro * w * w + (w * w * w) / 3);
   const ah = h.foot.anchorHoles;
-  const anchorDepth = h.foot.flangeThicknessMm + Math.max(0, Rf - ah.circleRadiusMm) * OVERHANG_RISE;
-  const anchors = ah.count * cylinderVolume(ah.diameterMm / 2, anchorDepth);
+  const anchorDepth = h.foot.flangeThicknessMm + Math.max(0, Rf - ah.circleRadiusMm) * FOOT_FLARE_RISE;
+  const anchors = ah.count * teardropAreaMm2(ah.diameterMm / 2, ANCHOR_ROOF_DEG) * anchorDepth;
   const notches = h.drainNotches.count * notchVolumeMm3(h);
   const rHole = h.pinHoles.diameterMm / 2;
-  const pinHoles = 2 * teardropAreaMm2(rHole) * (housingOuterRadiusAtMm(h, h.pinHoles.centerZMm) - Rb);
+  const pinHoles = 2 * teardropAreaMm2(rHole, PIN_HOLE_ROOF_DEG) * (housingOuterRadiusAtMm(h, h.pinHoles.centerZMm) - Rb);
   return tube + deck - vents + boss + guide + flange + flare - anchors - notches - pinHoles;
 }
 

@@ -10,7 +10,8 @@
  * Counter-clockwise, centred on the origin.
  *
  * Options: radiusMm (required, > 0); segments of the whole circle (required,
- * whole number >= 4; segmentsFor gives one).
+ * whole number >= 4; segmentsFor gives one); roofDeg, the roof sides' angle
+ * from the x axis (default OVERHANG_MIN_DEG, 50; between 30 and 80).
  */
 import { jscad, type Geom2 } from './jscad.ts';
 import { requireInteger, requirePositive } from './validate.ts';
@@ -19,25 +20,28 @@ import { OVERHANG_MIN_DEG } from '../../sizing/constants.ts';
 export interface TeardropOptions {
   radiusMm: number;
   segments: number;
+  roofDeg?: number;
 }
 
 export function teardrop2d(options: TeardropOptions): Geom2 {
   const r = requirePositive('teardrop2d.radiusMm', options?.radiusMm, 'mm');
   const n = requireInteger('teardrop2d.segments', options?.segments, 4, 4096);
+  const roof = options.roofDeg ?? OVERHANG_MIN_DEG;
+  if (!(roof >= 30 && roof <= 80)) throw new RangeError(`teardrop2d.roofDeg = ${roof}; allowed: 30 to 80 degrees`);
   const point = (k: number): [number, number] => {
     const [c, s] = unitCircle(k, n);
     return [r * c, r * s];
   };
-  const a = ((90 - OVERHANG_MIN_DEG) * Math.PI) / 180; // tangent point's angle from +x
+  const a = ((90 - roof) * Math.PI) / 180; // tangent point's angle from +x
   const [tx, ty] = [r * Math.cos(a), r * Math.sin(a)];
-  const points: [number, number][] = [[-tx, ty]]; // 140 degrees
+  const points: [number, number][] = [[-tx, ty]]; // 90 + roof degrees
   // Vertex k sits at 360 k / n degrees; keep those outside the roof (40..140 degrees).
   const deg = (k: number) => (360 * k) / n;
   const eps = 1e-9;
-  for (let k = 0; k < n; k++) if (deg(k) > 180 - (90 - OVERHANG_MIN_DEG) + eps) points.push(point(k));
-  for (let k = 0; k < n; k++) if (deg(k) < 90 - OVERHANG_MIN_DEG - eps) points.push(point(k));
-  points.push([tx, ty]); // 40 degrees
-  points.push([0, r / Math.cos((OVERHANG_MIN_DEG * Math.PI) / 180)]); // tip
+  for (let k = 0; k < n; k++) if (deg(k) > 90 + roof + eps) points.push(point(k));
+  for (let k = 0; k < n; k++) if (deg(k) < 90 - roof - eps) points.push(point(k));
+  points.push([tx, ty]); // 90 - roof degrees
+  points.push([0, r / Math.cos((roof * Math.PI) / 180)]); // tip
   return jscad.geometries.geom2.fromPoints(points);
 }
 

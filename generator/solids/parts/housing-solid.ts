@@ -1,10 +1,10 @@
 /**
  * The housing. Built mounted (z up from the base), then turned deck-down for
  * printing: the deck is the first layer, the boss and the float's guide
- * sleeve stand up from it, the flare under the flange rises at 50 degrees and
+ * sleeve stand up from it, the flare under the flange rises at 55 degrees and
  * the pin holes' teardrop tips point up.
  *
- * Body: one solid of revolution (HousingSpec): flange from z = 0, 50-degree
+ * Body: one solid of revolution (HousingSpec): flange from z = 0, 55-degree
  * flare back to the tube, tube to the deck, deck on top, seat bore through
  * deck and boss, boss hanging under the deck inside the tube, going on down as
  * the guide sleeve with the stop ring inside it.
@@ -34,8 +34,8 @@ import { prism } from '../shapes/prism.ts';
 import { revolveProfile } from '../shapes/revolve-profile.ts';
 import { asMat4, fromRows, transformMesh, translation } from '../shapes/transform-mesh.ts';
 import { circlePoints } from '../shapes/polygon-section.ts';
-import { housingFlareHeightMm } from '../../sizing/parts/part-volumes.ts';
-import { OVERHANG_RISE } from '../../sizing/constants.ts';
+import { ANCHOR_ROOF_DEG, housingFlareHeightMm } from '../../sizing/parts/part-volumes.ts';
+import { FOOT_FLARE_RISE, PIN_HOLE_ROOF_DEG } from '../../sizing/parts/housing-spec.ts';
 
 /** Cutters reach this far past the faces they cut, mm, so no cut ends flush with a face. */
 const CUT_OVERRUN_MM = 1;
@@ -98,10 +98,21 @@ export function housingCutters(h: HousingSpec, quality: Quality): Geom3[] {
 
   const ah = h.foot.anchorHoles;
   // through the flange and the flare above the hole's inner edge
-  const anchorTop = h.foot.flangeThicknessMm + Math.max(0, Rf - (ah.circleRadiusMm - ah.diameterMm / 2)) * OVERHANG_RISE + CUT_OVERRUN_MM;
+  const anchorTop = h.foot.flangeThicknessMm + Math.max(0, Rf - (ah.circleRadiusMm - ah.diameterMm / 2)) * FOOT_FLARE_RISE + CUT_OVERRUN_MM;
+  const ra = ah.diameterMm / 2;
+  const na = segmentsFor(ra, quality);
+  const anchorOutline = teardrop2d({ radiusMm: holePolygonRadiusMm(ra, na), segments: na, roofDeg: ANCHOR_ROOF_DEG });
+  const anchorPrism = jscad.extrusions.extrudeLinear({ height: anchorTop + CUT_OVERRUN_MM }, anchorOutline);
+  // half a facet round from the pattern's angle, so the teardrop's point never lies on one of the
+  // body's meridian edges (a cut through an edge leaves float32-degenerate slivers)
+  const halfFacet = 180 / housingSegments(h, quality);
   for (let k = 0; k < ah.count; k++) {
-    const a = (ah.angleOffsetDeg + (k * 360) / ah.count) * deg;
-    cutters.push(verticalHole(ah.diameterMm / 2, quality, ah.circleRadiusMm * Math.cos(a), ah.circleRadiusMm * Math.sin(a), -CUT_OVERRUN_MM, anchorTop));
+    const a = (ah.angleOffsetDeg + halfFacet + (k * 360) / ah.count) * deg;
+    // teardrop2d points at +y: turn it to point outward, at angle a
+    const c = Math.sin(a);
+    const s = -Math.cos(a);
+    const place = fromRows([c, -s, 0], [s, c, 0], [0, 0, 1], [ah.circleRadiusMm * Math.cos(a), ah.circleRadiusMm * Math.sin(a), -CUT_OVERRUN_MM]);
+    cutters.push(jscad.transforms.transform(asMat4(place), anchorPrism));
   }
 
   const dn = h.drainNotches;
@@ -144,7 +155,7 @@ export function housingCutters(h: HousingSpec, quality: Quality): Geom3[] {
   // the tip down (mounted), which is up once the housing is turned deck-down.
   const r = h.pinHoles.diameterMm / 2;
   const n = segmentsFor(r, quality);
-  const outline = teardrop2d({ radiusMm: holePolygonRadiusMm(r, n), segments: n });
+  const outline = teardrop2d({ radiusMm: holePolygonRadiusMm(r, n), segments: n, roofDeg: PIN_HOLE_ROOF_DEG });
   const length = 2 * (Rf + CUT_OVERRUN_MM);
   const drop = jscad.extrusions.extrudeLinear({ height: length }, outline);
   cutters.push(jscad.transforms.transform(asMat4(fromRows([0, 0, 1], [-1, 0, 0], [0, -1, 0], [-length / 2, 0, h.pinHoles.centerZMm])), drop));
