@@ -51,6 +51,8 @@ interface Sheet {
   warnings: string[];
   bom: Table;
   print: Table;
+  /** said before anything else in the print settings */
+  printFirst: string;
   printNotes: string[];
   steps: string[];
   cautions: { title: string; text: string }[];
@@ -122,7 +124,7 @@ function sheetContent(s: SizingSuccess, doc: NormalizedDoc, files: BuildSheetFil
         `${wall.count} lines (${f2(P.housing.wallMm)} mm wall at ${f2(lineMm)} mm)`,
         '100 %',
         `${LAYER_HEIGHT_MM} mm`,
-        'none: the foot flares at 45 degrees, pin holes are teardrops, drain notches open at the rim',
+        'none: the foot flares at 55 degrees, pin holes are teardrops with a 65-degree roof, anchor holes point out of the flare, drain notches and the guide\'s air slots open at the print\'s top',
       ],
       [
         'Float',
@@ -130,7 +132,7 @@ function sheetContent(s: SizingSuccess, doc: NormalizedDoc, files: BuildSheetFil
         `${shell.count} lines; ${shellLayers} top and bottom layers`,
         'any: the shell is modelled solid and the cavity hollow, so the mass does not depend on infill',
         `${LAYER_HEIGHT_MM} mm`,
-        `none: the cavity roof is a 45-degree cone with a ${f1(2 * P.float.cavityRoofRadiusMm)} mm bridge at the top`,
+        `none: the cavity roof is a 50-degree cone with a ${f1(2 * P.float.cavityRoofRadiusMm)} mm bridge at the top`,
       ],
       [
         'Nozzle insert',
@@ -145,6 +147,10 @@ function sheetContent(s: SizingSuccess, doc: NormalizedDoc, files: BuildSheetFil
     ],
   };
 
+  const printFirst =
+    'Supports: off. The float is sealed: any support the slicer put inside it could never come out and would weigh the float down ' +
+    'for good. Nothing needs it: every overhang of every part is 50 degrees or steeper from the bed (the foot 55), and the ' +
+    `one bridge, ${f1(2 * P.float.cavityRoofRadiusMm)} mm under the float's pad, prints without.`;
   const printNotes = [
     `Material: ${material} (${f2(inp.materialDensityKgM3 / 1000)} g/cm3). The masses assume solid plastic.`,
     `Every fit has the same clearance, ${f2(P.printClearanceMm)} mm per side; the nozzle's crush ribs take up the printer's spread in the seat.`,
@@ -166,7 +172,7 @@ function sheetContent(s: SizingSuccess, doc: NormalizedDoc, files: BuildSheetFil
       `(${f1(s.float.dryMassG * (1 - DRY_MASS_TOLERANCE))} to ${f1(s.float.dryMassG * (1 + DRY_MASS_TOLERANCE))} g). Hold it fully under water for a day, ` +
       `dry the outside and weigh it again: reject it if it gained more than ${f1(SOAK_GAIN_LIMIT_G)} g. ` +
       `(It can take in ${f1(s.float.leakToleranceMl)} mL before it no longer shuts at full tank; every mL raises the shut-off by ${f2(s.float.levelRisePerMlMm)} mm.)`,
-    'Slide the float into the housing from below, flat bottom down, pad up.',
+    'Slide the float into the housing from below, flat bottom down, pad up, until its top collar slides into the sleeve under the deck (it should move freely there: the sleeve guides it and stops it).',
     `Slide the retainer pin through the two holes near the base, flat side down, head outside. The float now rests on it, ${f1(P.mount.pinTopZMm)} mm above the base, and cannot fall out.`,
     'Push the supply tube over the barb on the deck.',
     s.holdDown.neededN > 0
@@ -187,6 +193,7 @@ function sheetContent(s: SizingSuccess, doc: NormalizedDoc, files: BuildSheetFil
     warnings: s.warnings.map((w) => w.message),
     bom,
     print,
+    printFirst,
     printNotes,
     steps,
     cautions: CAUTIONS.map((c) => ({ title: c.title, text: c.text })),
@@ -212,7 +219,7 @@ export function buildSheetMarkdown(sizing: SizingSuccess, document: NormalizedDo
   out.push('Bound by:', '', ...c.boundBy.map((b) => `- ${m(b)}`), '');
   out.push('Warnings:', '', ...(c.warnings.length ? c.warnings.map((w) => `- ${m(w)}`) : ['- none']), '');
   out.push(`## ${m(c.bom.title)}`, '', ...mdTable(c.bom.head, c.bom.rows), '');
-  out.push(`## ${m(c.print.title)}`, '', ...mdTable(c.print.head, c.print.rows), '', ...c.printNotes.map((n) => `- ${m(n)}`), '');
+  out.push(`## ${m(c.print.title)}`, '', `**${m(c.printFirst)}**`, '', ...mdTable(c.print.head, c.print.rows), '', ...c.printNotes.map((n) => `- ${m(n)}`), '');
   out.push('## Assembly', '', ...c.steps.map((step, i) => `${i + 1}. ${m(step)}`), '');
   return out.join('\n');
 }
@@ -256,6 +263,7 @@ export function buildSheetHtml(sizing: SizingSuccess, document: NormalizedDoc, f
     `<h2>${esc(c.bom.title)}</h2>`,
     htmlTable(c.bom.head, c.bom.rows),
     `<h2>${esc(c.print.title)}</h2>`,
+    `<p><strong>${esc(c.printFirst)}</strong></p>`,
     htmlTable(c.print.head, c.print.rows),
     `<ul>${c.printNotes.map((n) => `<li>${esc(n)}</li>`).join('')}</ul>`,
     '<h2>Assembly</h2><ol>',

@@ -131,7 +131,12 @@ describe('writeDesignFiles', () => {
     expect(md).toMatch(/\| outer diameter \| [\d.]+ \| mm \|/);
     expect(md).toContain('Seal pad');
     expect(md).toContain('deck down');
+    // "supports off" is the first thing the print settings say, with its reason (issue 9)
+    const settings = md.slice(md.indexOf('## Print settings') + '## Print settings'.length).trim();
+    expect(settings.startsWith('**Supports: off.')).toBe(true);
+    expect(settings.split('\n')[0]).toMatch(/sealed.*never come out/);
     const html = buildSheetHtml(sizing, document);
+    expect(html).toMatch(/<h2>Print settings<\/h2>\s*<p><strong>Supports: off\./);
     expect(html.startsWith('<!doctype html>')).toBe(true);
     for (const c of CAUTIONS) expect(html).toContain(c.title);
   });
