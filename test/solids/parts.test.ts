@@ -20,6 +20,7 @@ import {
   type IndexedMesh,
   type ManifoldToplevel,
 } from '../../generator/solids/mesh/index.ts';
+import { overhangFaces } from './overhang-faces.ts';
 import { cornersOn, facetedHousingMm3, facetedNozzleMm3, facetedPinMm3, presetFiles, SCALE_EXAMPLE, sizeDoc, sizePreset } from './helpers.ts';
 
 let wasm: ManifoldToplevel;
@@ -129,7 +130,6 @@ describe('print poses', () => {
     // threshold, 45 degrees by default (common practice); every face here is 50 degrees or steeper.
     const { sizing: s } = sizePreset(file);
     const parts = await buildParts(s, { quality: 'preview' });
-    const limit = Math.cos((50 * Math.PI) / 180); // cosine of the angle between a face's normal and straight down
     const bridges: Record<string, number> = {
       // the float's cavity roof (a disc of cavityRoofRadius) is the one stated bridge
       float: s.parts.float.cavityRoofRadiusMm,
@@ -139,22 +139,12 @@ describe('print poses', () => {
       pin: 0,
     };
     for (const [name, mesh] of Object.entries(parts)) {
-      const p = mesh.positions;
-      const idx = mesh.indices;
-      for (let t = 0; t < idx.length; t += 3) {
-        const [a, b, c] = [3 * idx[t], 3 * idx[t + 1], 3 * idx[t + 2]];
-        const ux = p[b] - p[a], uy = p[b + 1] - p[a + 1], uz = p[b + 2] - p[a + 2];
-        const vx = p[c] - p[a], vy = p[c + 1] - p[a + 1], vz = p[c + 2] - p[a + 2];
-        const nx = uy * vz - uz * vy, ny = uz * vx - ux * vz, nz = ux * vy - uy * vx;
-        const len = Math.hypot(nx, ny, nz);
-        if (len === 0) continue;
-        const down = -nz / len; // cosine of the angle to straight down
-        const zMax = Math.max(p[a + 2], p[b + 2], p[c + 2]);
-        if (down <= limit + 1e-4 || zMax === 0) continue; // 50 degrees or steeper, or on the bed
+      for (const face of overhangFaces(mesh, 50)) {
         // a flat downward face: allowed only as the float's stated bridge, level
-        const r = Math.max(...[a, b, c].map((v) => Math.hypot(p[v], p[v + 1])));
-        expect(r, `${name}: downward face at z ${zMax.toFixed(2)} r ${r.toFixed(2)}, ${((Math.acos(down) * 180) / Math.PI).toFixed(1)} deg from the bed`).toBeLessThanOrEqual(bridges[name] + 1e-4);
-        expect(down, `${name}: the bridge is level`).toBeGreaterThan(1 - 1e-6);
+        const r = Math.max(...face.corners.map(([x, y]) => Math.hypot(x, y)));
+        const level = face.corners.every(([, , z]) => Math.abs(z - face.zMinMm) < 1e-4);
+        expect(r, `${name}: downward face at z ${face.zMinMm.toFixed(2)} r ${r.toFixed(2)}`).toBeLessThanOrEqual(bridges[name] + 1e-4);
+        expect(level, `${name}: the bridge at z ${face.zMinMm.toFixed(2)} is level`).toBe(true);
       }
     }
   });

@@ -35,7 +35,8 @@ export interface FloatShapeOptions {
  * outer cone moved inward by t along the normal, i.e. down by t / cos 50deg, so it
  * starts at z1 = h_c - t (1 - sin 50deg) / cos 50deg; it rises to radius r_c - t
  * and goes on up inside the collar to a flat roof under the pocket (the one bridge
- * of the print, 2 (r_c - t) across). Returns null if the shape does not close.
+ * of the print, 2 (r_c - t) across); with no collar (the lever's float) the cone
+ * stops at the roof, t under the pocket. Returns null if the shape does not close.
  */
 export function floatShape(o: FloatShapeOptions): FloatSpec | null {
   const R = o.outerDiameterMm / 2;
@@ -52,10 +53,12 @@ export function floatShape(o: FloatShapeOptions): FloatSpec | null {
   const cavityRadius = R - t;
   const cavityBottom = t;
   const coneStart = o.cylinderHeightMm - (t * (1 - sinA)) / cosA;
-  const roofRadius = collarRadius - t;
-  const coneTop = coneStart + (cavityRadius - roofRadius) * k;
   const roofZ = height - pocketDepth - t;
-  if (coneHeight <= 0 || cavityRadius <= 0 || coneStart <= cavityBottom || roofZ < coneTop || roofRadius <= 0) {
+  // the inner cone rises to the collar's inner radius, or, with little or no collar, only to the roof
+  const collarConeTop = coneStart + (cavityRadius - (collarRadius - t)) * k;
+  const coneTop = Math.min(collarConeTop, roofZ);
+  const roofRadius = cavityRadius - (coneTop - coneStart) / k;
+  if (coneHeight <= 0 || cavityRadius <= 0 || coneStart <= cavityBottom || roofZ <= coneStart || roofRadius <= 0) {
     return null;
   }
   return {
