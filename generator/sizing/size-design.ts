@@ -6,6 +6,7 @@ import { drainAreaRequiredM2, fillTimeS, supplyFlow } from './hydraulics/index.t
 import { designBasis, type DesignBasis } from './layout/design-basis.ts';
 import { floatTilt } from './layout/evaluate-candidate.ts';
 import { PADS } from './seal/pads.ts';
+import { printBedMm } from './parts/print-bed.ts';
 import { tippingStiffnessNmPerRad } from './float/tipping-stiffness.ts';
 import { CONSTRAINT_TEXT } from './layout/constraint-text.ts';
 import { searchSize } from './layout/search-size.ts';
@@ -154,6 +155,16 @@ function failure(b: DesignBasis, outcome: ReturnType<typeof searchSize>): Sizing
     // a pad pressed deeper at the seal tolerates a wider far-side gap: the first pad in the table that works
     const pad = PADS.find((p) => p.name !== inp.padName && works({ ...inp, padName: p.name }));
     if (pad) waysOut.push({ field: 'seal.pad', value: pad.name, message: `a ${pad.name} pad, pressed deep enough that a tipped float still closes the lip all round` });
+  }
+  const bed = printBedMm(inp);
+  if (outcome.rejections.has('bed-size') && bed.given) {
+    // a larger bed, square, to the millimetre (the document's print.bed takes "W x D mm")
+    const at = (mm: number) => works({ ...inp, bedWidthM: mm / 1e3, bedDepthM: mm / 1e3 } as DesignInputs);
+    const from = Math.max(bed.widthMm, bed.depthMm);
+    if (at(1000)) {
+      const v = Math.ceil(largestWorking(from, 1000, (x) => !at(x), 0.5) + 0.5);
+      waysOut.push({ field: 'print.bed', value: `${v} x ${v} mm`, message: `a printer bed of at least ${v} x ${v} mm` });
+    }
   }
   if (Number.isFinite(outcome.smallestWorkingFootMm) && outcome.smallestWorkingFootMm > inp.maxOuterDiameterM * 1e3) {
     const v = Math.ceil(outcome.smallestWorkingFootMm);

@@ -23,12 +23,14 @@ import { join } from 'node:path';
 import { buildSheetHtml, buildSheetMarkdown } from '../doc/build-sheet.ts';
 import type { NormalizedDoc } from '../doc/schema.ts';
 import type { SizingSuccess } from '../sizing/result.ts';
+import { printBedMm } from '../sizing/parts/print-bed.ts';
 import { PART_NAMES, type PartName } from './assembly.ts';
 import { buildParts, PartBuildError } from './build-parts.ts';
 import {
   countEdgeUses,
   meshBounds,
   meshVolumeMm3,
+  packPlates,
   triangleCount,
   write3mf,
   writeStlBinary,
@@ -61,8 +63,7 @@ export interface WrittenDesign {
   parts: WrittenPart[];
 }
 
-/** Build plate for the 3MF, mm: a common 256 mm bed; doubled until the parts fit (a slicer re-arranges them anyway). */
-const PLATE_MM = 256;
+/** Gap between parts on a plate, mm. The plate is the design's bed (print.bed, 220 x 220 mm by default). */
 const PLATE_SPACING_MM = 10;
 const BASE_NAME_PATTERN = /^[A-Za-z0-9][A-Za-z0-9._-]{0,79}$/;
 
@@ -78,16 +79,17 @@ export function baseNameFor(document: NormalizedDoc): string {
   return slug || 'float-valve';
 }
 
-function plate3mf(meshes: { name: string; mesh: IndexedMesh }[], title: string): Uint8Array {
-  let size = PLATE_MM;
-  for (;;) {
-    try {
-      return write3mf(meshes, { plateWidthMm: size, plateDepthMm: size, spacingMm: PLATE_SPACING_MM, title });
-    } catch (error) {
-      if (!(error instanceof RangeError) || !/too small/.test(error.message) || size >= 4 * PLATE_MM) throw error;
-      size *= 2;
-    }
-  }
+/** The parts on plates no larger than the bed (packPlates): one 3MF per plate. */
+function plates3mf(meshes: { name: string; mesh: IndexedMesh }[], title: string, bed: { widthMm: number; depthMm: number }): Uint8Array[] {
+  const plate = { plateWidthMm: bed.widthMm, plateDepthMm: bed.depthMm, spacingMm: PLATE_SPACING_MM };
+  const footprints = meshes.map(({ name, mesh }) => {
+    const b = meshBounds(mesh);
+    return { name, widthMm: b.max[0] - b.min[0], depthMm: b.max[1] - b.min[1] };
+  });
+  const groups = packPlates(footprints, plate);
+  return groups.map((g, k) =>
+    write3mf(g.map((i) => meshes[i]), { ...plate, title: groups.length > 1 ? `${title}, plate ${k + 1} of ${groups.length}` : title }),
+  );
 }
 
 export async function writeDesignFiles(
@@ -136,11 +138,18 @@ export async function writeDesignFiles(
       bounds: meshBounds(mesh),
     });
   }
-  const plateFile = `${base}-plate.3mf`;
+  let plateFile = `${base}-plate.3mf`;
   try {
     const objects = names.map((name) => ({ name: `${base} ${name}`, mesh: built[name] as IndexedMesh }));
-    contents.push({ file: plateFile, bytes: plate3mf(objects, `${document.name ?? base} (${quality})`), what: '3MF plate' });
+    const plates = plates3mf(objects, `${document.name ?? base} (${quality})`, printBedMm(sizing.inputs));
+    // one plate keeps its plain name; more are numbered
+    plates.forEach((bytes, k) => {
+      const file = plates.length === 1 ? plateFile : `${base}-plate-${k + 1}.3mf`;
+      contents.push({ file, bytes, what: '3MF plate' });
+    });
+    if (plates.length > 1) plateFile = `${base}-plate-1.3mf`;
   } catch (error) {
+    if (error instanceof RangeError && error.message.startsWith('print.bed')) throw error;
     throw new Error(`3MF plate: ${error instanceof Error ? error.message : String(error)}`, { cause: error });
   }
   const sheetFiles = { stl: stlNames, plate3mf: plateFile, withPad: options.withPad };

@@ -2,12 +2,15 @@
 import { strToU8, zipSync } from 'fflate';
 import { writeStlBinary } from '../../generator/solids/mesh/write-stl-binary.ts';
 import { write3mf } from '../../generator/solids/mesh/write3mf.ts';
+import { meshBounds } from '../../generator/solids/mesh/mesh-bounds.ts';
+import { packPlates } from '../../generator/solids/mesh/pack-plates.ts';
+import { printBedMm } from '../../generator/sizing/parts/print-bed.ts';
 import type { SizingSuccess } from '../../generator/sizing/result.ts';
 import { buildSheet } from './sheet-source.ts';
 import { PART_NAMES, type PartMeshes, type PartName } from './parts-contract.ts';
 import type { ExportFile, ExportKind } from './protocol.ts';
 
-/** Print bed assumed for the 3MF plate: 220 x 220 mm fits most hobby printers (common practice). */
+/** The 3MF plate: the design's bed (print.bed, 220 x 220 mm by default, common practice), 8 mm between parts. */
 export const PLATE = { plateWidthMm: 220, plateDepthMm: 220, spacingMm: 8 };
 
 export function baseName(document: unknown): string {
@@ -30,7 +33,7 @@ export function exportFiles(kind: ExportKind, sizing: SizingSuccess, document: u
     case 'stl':
       return [stlFile(base, part ?? 'housing', need())];
     case '3mf':
-      return [plate(base, need(), document)];
+      return plates(base, need(), document, sizing);
     case 'sheet':
       return [{ name: `${base}-build-sheet.html`, mime: 'text/html', bytes: strToU8(buildSheet(sizing, document, base)) }];
     case 'zip': {
@@ -40,8 +43,7 @@ export function exportFiles(kind: ExportKind, sizing: SizingSuccess, document: u
         const f = stlFile(base, p, m);
         entries[f.name] = f.bytes;
       }
-      const p = plate(base, m, document);
-      entries[p.name] = p.bytes;
+      for (const p of plates(base, m, document, sizing)) entries[p.name] = p.bytes;
       entries[`${base}-build-sheet.html`] = strToU8(buildSheet(sizing, document, base));
       entries[`${base}.json`] = strToU8(JSON.stringify(document, null, 2) + '\n');
       return [{ name: `${base}.zip`, mime: 'application/zip', bytes: zipSync(entries, { level: 6 }) }];
@@ -49,8 +51,19 @@ export function exportFiles(kind: ExportKind, sizing: SizingSuccess, document: u
   }
 }
 
-function plate(base: string, meshes: PartMeshes, document: unknown): ExportFile {
+/** The parts on plates no larger than the design's bed: one 3MF, or numbered ones when they need more than one. */
+function plates(base: string, meshes: PartMeshes, document: unknown, sizing: SizingSuccess): ExportFile[] {
   const title = document && typeof document === 'object' && typeof (document as { name?: unknown }).name === 'string' ? (document as { name: string }).name : 'floatwright valve';
-  const bytes = write3mf(PART_NAMES.map((name) => ({ name, mesh: meshes[name] })), { ...PLATE, title });
-  return { name: `${base}-plate.3mf`, mime: 'model/3mf', bytes };
+  const bed = printBedMm(sizing.inputs);
+  const plate = { ...PLATE, plateWidthMm: bed.widthMm, plateDepthMm: bed.depthMm };
+  const footprints = PART_NAMES.map((name) => {
+    const b = meshBounds(meshes[name]);
+    return { name, widthMm: b.max[0] - b.min[0], depthMm: b.max[1] - b.min[1] };
+  });
+  const groups = packPlates(footprints, plate);
+  return groups.map((g, k) => ({
+    name: groups.length === 1 ? `${base}-plate.3mf` : `${base}-plate-${k + 1}.3mf`,
+    mime: 'model/3mf',
+    bytes: write3mf(g.map((i) => ({ name: PART_NAMES[i], mesh: meshes[PART_NAMES[i]] })), { ...plate, title }),
+  }));
 }

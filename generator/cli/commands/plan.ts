@@ -5,6 +5,7 @@
  * design plus the plan report. Files are written into a temporary folder next
  * to DIR and renamed into place only when everything is written.
  */
+import { printBedMm } from '../../sizing/parts/print-bed.ts';
 import { mkdtemp, readdir, rename, rm, writeFile } from 'node:fs/promises';
 import { availableParallelism } from 'node:os';
 import { basename, dirname, join } from 'node:path';
@@ -152,6 +153,11 @@ export async function writePlanFolder(opts: WritePlanOptions): Promise<{ files: 
         quantity: j.quantity,
         stl: Object.fromEntries(built.files[j.id]!.filter((f) => f.endsWith('.stl')).map((f) => [f.slice(f.lastIndexOf(`${j.id}-`) + j.id.length + 1, -4), f])),
       })),
+      // the plan's plates on the smallest bed of its designs (print.bed, 220 x 220 mm by default)
+      result.designs.reduce<{ widthMm: number; depthMm: number } | undefined>((bed, d) => {
+        const b = printBedMm(d.sizing.inputs);
+        return !bed || b.widthMm * b.depthMm < bed.widthMm * bed.depthMm ? { widthMm: b.widthMm, depthMm: b.depthMm } : bed;
+      }, undefined),
     );
     const report = planReport(result, built.files, plates);
     await writeFile(join(temp, 'plan-report.md'), planMarkdown(report));

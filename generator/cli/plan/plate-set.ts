@@ -8,7 +8,7 @@
  */
 import { mkdir, readFile, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
-import { layoutOnPlate, meshBounds, write3mf, type IndexedMesh } from '../../solids/mesh/index.ts';
+import { meshBounds, packPlates, write3mf, type IndexedMesh } from '../../solids/mesh/index.ts';
 
 /** A 256 mm square bed (common practice for a mid-size printer), 10 mm between parts. */
 export const PLATE = { plateWidthMm: 256, plateDepthMm: 256, spacingMm: 10 } as const;
@@ -47,8 +47,8 @@ export interface PlateSetDesign {
   stl: Record<string, string>;
 }
 
-/** Writes root/plates/plate-NN.3mf and returns their paths relative to root. */
-export async function writePlateSet(root: string, designs: readonly PlateSetDesign[]): Promise<string[]> {
+/** Writes root/plates/plate-NN.3mf, none larger than the bed (default PLATE), and returns their paths relative to root. */
+export async function writePlateSet(root: string, designs: readonly PlateSetDesign[], bed?: { widthMm: number; depthMm: number }): Promise<string[]> {
   const items: { name: string; mesh: IndexedMesh; widthMm: number; depthMm: number }[] = [];
   for (const d of designs) {
     for (const [part, file] of Object.entries(d.stl)) {
@@ -59,23 +59,14 @@ export async function writePlateSet(root: string, designs: readonly PlateSetDesi
       }
     }
   }
-  // Greedy: add parts to the current plate while the shelf packing still fits.
-  const plates: (typeof items)[] = [];
-  let current: typeof items = [];
-  for (const item of items) {
-    const trial = [...current, item];
-    if (current.length > 0 && !layoutOnPlate(trial, PLATE).fits) {
-      plates.push(current);
-      current = [item];
-    } else current = trial;
-  }
-  if (current.length) plates.push(current);
+  const bedPlate = { ...PLATE, ...(bed ? { plateWidthMm: bed.widthMm, plateDepthMm: bed.depthMm } : {}) };
+  const plates = packPlates(items, bedPlate).map((g) => g.map((i) => items[i]));
 
   await mkdir(join(root, 'plates'), { recursive: true });
   const written: string[] = [];
   for (const [n, plate] of plates.entries()) {
     const file = `plates/plate-${String(n + 1).padStart(2, '0')}.3mf`;
-    const bytes = write3mf(plate.map(({ name, mesh }) => ({ name, mesh })), { ...PLATE, title: `floatwright plan, plate ${n + 1} of ${plates.length}` });
+    const bytes = write3mf(plate.map(({ name, mesh }) => ({ name, mesh })), { ...bedPlate, title: `floatwright plan, plate ${n + 1} of ${plates.length}` });
     await writeFile(join(root, file), bytes);
     written.push(file);
   }

@@ -11,6 +11,7 @@ export const CONSTRAINT_TEXT: Record<ConstraintCode | 'least-mass' | 'barb-wall'
   'vent-room': 'the deck needs room for its vents between the nozzle seat and the wall',
   'tilt-offset': 'tipped as far as its bore and guide allow, the float must keep the pad centred on the lip within the pad margin',
   'tilt-gap': "tipped as far as its bore and guide allow, the float must leave the lip's far side no more than half the pad indentation open",
+  'bed-size': "every part must fit the printer's bed (print.bed) in its print pose",
   'least-mass': 'a wider or narrower float would use more plastic',
   'barb-wall': 'the nozzle bore must leave the barb a wall of at least two print lines',
   'lip-wall': 'the nozzle lip must leave a sealing ring of at least two print lines around the bore',

@@ -4,6 +4,7 @@ import { floatOuterVolumeMm3, floatShape, floatShellVolumeMm3 } from '../float/f
 import { drainNotchSize, housingSpec, pinDropBelowHoleCentreMm, pinTopMinimumMm, VENT_DIAMETER_MM } from '../parts/housing-spec.ts';
 import { housingOuterRadiusAtMm, housingVolumeMm3, nozzleVolumeMm3, pinVolumeMm3 } from '../parts/part-volumes.ts';
 import { PIN_DIAMETER_MM, pinSpec } from '../parts/pin-spec.ts';
+import { fitsBed, printBedMm } from '../parts/print-bed.ts';
 import type { FloatSpec, HousingSpec, PinSpec } from '../result.ts';
 import type { DesignBasis } from './design-basis.ts';
 import { guidedTilt, type GuidedTilt } from './guided-tilt.ts';
@@ -18,7 +19,8 @@ export type ConstraintCode =
   | 'part-size'
   | 'vent-room'
   | 'tilt-offset'
-  | 'tilt-gap';
+  | 'tilt-gap'
+  | 'bed-size';
 
 export interface FloatSizing {
   float: FloatSpec;
@@ -177,6 +179,14 @@ export function layoutCandidate(b: DesignBasis, f: FloatSizing, drainAreaMm2: nu
     violations.push('part-size');
   }
   if (bore / 2 - housing.bossOuterDiameterMm / 2 < VENT_DIAMETER_MM + 2) violations.push('vent-room');
+  // every part must fit the printer's bed in its print pose, when the document names the bed
+  const bed = printBedMm(inp);
+  if (bed.given) {
+    const foot = housing.foot.outerDiameterMm;
+    const d = f.float.outerDiameterMm;
+    const footprints: [number, number][] = [[foot, foot], [d, d], [pin.lengthMm + pin.head.lengthMm, pin.head.widthMm]];
+    if (!footprints.every(([w, dd]) => fitsBed(w, dd, bed))) violations.push('bed-size');
+  }
   return {
     ...f,
     housing,

@@ -44,6 +44,7 @@ export { triangleCount } from './triangle-count.ts';
 export { writeStlBinary, type StlOptions } from './write-stl-binary.ts';
 export { write3mf, type ThreeMfObject, type ThreeMfOptions } from './write3mf.ts';
 export { layoutOnPlate, type Footprint, type PlateLayout, type PlateOptions } from './layout-on-plate.ts';
+export { packPlates } from './pack-plates.ts';
 export { formatFloat32 } from './format-float32.ts';
 
 export { MAX_SEGMENTS, segmentsForChordError } from './segments-for-chord-error.ts';
