@@ -92,7 +92,7 @@ function lowestClear(rig: Rig, part: Manifold, u: [number, number], theta: numbe
   let lo = -3;
   let hi = 3;
   if (!touches(rig, part, u, theta, lo)) return lo;
-  for (let i = 0; i < 13; i++) {
+  for (let i = 0; i < 12; i++) {
     const mid = (lo + hi) / 2;
     if (touches(rig, part, u, theta, mid)) lo = mid;
     else hi = mid;
@@ -105,7 +105,7 @@ function highestClear(rig: Rig, part: Manifold, u: [number, number], theta: numb
   let lo = -3;
   let hi = 3;
   if (!touches(rig, part, u, theta, hi)) return hi;
-  for (let i = 0; i < 13; i++) {
+  for (let i = 0; i < 12; i++) {
     const mid = (lo + hi) / 2;
     if (touches(rig, part, u, theta, mid)) hi = mid;
     else lo = mid;
