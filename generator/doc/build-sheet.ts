@@ -9,6 +9,8 @@
  * Print settings are common practice for a 0.4 mm nozzle (0.2 mm layers);
  * wall counts follow from the design's wall and line width.
  */
+import { OVERHANG_MIN_DEG } from '../sizing/constants.ts';
+import { FOOT_FLARE_DEG, PIN_HOLE_ROOF_DEG } from '../sizing/parts/housing-spec.ts';
 import { CAUTIONS } from './cautions.ts';
 import { markdownText } from './safe-text/markdown-text.ts';
 import type { NormalizedDoc } from './schema.ts';
@@ -124,7 +126,7 @@ function sheetContent(s: SizingSuccess, doc: NormalizedDoc, files: BuildSheetFil
         `${wall.count} lines (${f2(P.housing.wallMm)} mm wall at ${f2(lineMm)} mm)`,
         '100 %',
         `${LAYER_HEIGHT_MM} mm`,
-        'none: the foot flares at 55 degrees, pin holes are teardrops with a 65-degree roof, anchor holes point out of the flare, drain notches and the guide\'s air slots open at the print\'s top',
+        `none: the foot flares at ${FOOT_FLARE_DEG} degrees, pin holes are teardrops with a ${PIN_HOLE_ROOF_DEG}-degree roof, anchor holes point out of the flare, drain notches and the guide's air slots open at the print's top`,
       ],
       [
         'Float',
@@ -149,7 +151,7 @@ function sheetContent(s: SizingSuccess, doc: NormalizedDoc, files: BuildSheetFil
 
   const printFirst =
     'Supports: off. The float is sealed: any support the slicer put inside it could never come out and would weigh the float down ' +
-    'for good. Nothing needs it: every overhang of every part is 50 degrees or steeper from the bed (the foot 55), and the ' +
+    `for good. Nothing needs it: every overhang of every part is ${OVERHANG_MIN_DEG} degrees or steeper from the bed (the foot ${FOOT_FLARE_DEG}), and the ` +
     `one bridge, ${f1(2 * P.float.cavityRoofRadiusMm)} mm under the float's pad, prints without.`;
   const printNotes = [
     `Material: ${material} (${f2(inp.materialDensityKgM3 / 1000)} g/cm3). The masses assume solid plastic.`,

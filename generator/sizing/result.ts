@@ -75,7 +75,7 @@ export interface HousingSpec {
     stopBoreMm: number;
     slots: { count: number; widthMm: number; riseMm: number; angleOffsetDeg: number };
   };
-  /** foot: flat flange from z = 0, then a flare at 55 degrees (FOOT_FLARE_DEG) back to the tube */
+  /** foot: flat flange from z = 0, then a flare at FOOT_FLARE_DEG (60 degrees) back to the tube */
   foot: {
     outerDiameterMm: number;
     flangeThicknessMm: number;

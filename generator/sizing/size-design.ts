@@ -157,9 +157,9 @@ function failure(b: DesignBasis, outcome: ReturnType<typeof searchSize>): Sizing
     if (pad) waysOut.push({ field: 'seal.pad', value: pad.name, message: `a ${pad.name} pad, pressed deep enough that a tipped float still closes the lip all round` });
   }
   const bed = printBedMm(inp);
-  if (outcome.rejections.has('bed-size') && bed.given) {
+  if (outcome.rejections.has('bed-size')) {
     // a larger bed, square, to the millimetre (the document's print.bed takes "W x D mm")
-    const at = (mm: number) => works({ ...inp, bedWidthM: mm / 1e3, bedDepthM: mm / 1e3 } as DesignInputs);
+    const at = (mm: number) => works({ ...inp, bedWidthM: mm / 1e3, bedDepthM: mm / 1e3 });
     const from = Math.max(bed.widthMm, bed.depthMm);
     if (at(1000)) {
       const v = Math.ceil(largestWorking(from, 1000, (x) => !at(x), 0.5) + 0.5);

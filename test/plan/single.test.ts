@@ -24,7 +24,8 @@ describe('a flat plan with one container', () => {
     const alone = sizeDesign(doc.inputs);
     if (!alone.ok || !c.sizing.ok) throw new Error('sizing failed');
     expect(c.sizing.float.outerDiameterMm).toBe(alone.float.outerDiameterMm);
-    expect(c.sizing.float.heightMm).toBeCloseTo(alone.float.heightMm, 6);
+    // the guide collar carries the stop gap, which follows the pad's indentation: equal to a micrometre
+    expect(c.sizing.float.heightMm).toBeCloseTo(alone.float.heightMm, 3);
     expect(c.sizing.housing.outerDiameterMm).toBe(alone.housing.outerDiameterMm);
     // same head to 0.1 mm, so the same tip to well under 0.1 mm (about 5 mm of tip per metre of head)
     expect(Math.abs(c.sizing.nozzle.tipHeightMm - alone.nozzle.tipHeightMm)).toBeLessThan(0.1);
@@ -45,13 +46,13 @@ describe('a flat plan with one container', () => {
     expect(c.headMinM).toBeCloseTo(c.headMaxM, 12);
   });
 
-  it('checks the doc comment example: 2.4 m tank, 0.3 m floor, 45 mm level: tip near 76.9 mm, head near 2.023 m', () => {
+  it('checks the doc comment example: 2.4 m tank, 0.3 m floor, 45 mm level: tip near 79.8 mm, head near 2.020 m', () => {
     const doc = parseDesign({ supply: { headMax: '1 m' }, level: { target: '45 mm' } });
     if (!doc.ok) throw new Error('bad doc');
     const r = solveTipElevation({ inputs: doc.inputs, floorElevationM: 0.3, tankFullSurfaceElevationM: 2.4, tankLowSurfaceElevationM: 2.4 });
     expect(r.converged).toBe(true);
-    expect(Math.abs((r.tipElevationM - 0.3) * 1e3 - 76.9)).toBeLessThan(0.5);
-    expect(Math.abs(r.headMaxM - 2.023)).toBeLessThan(5e-4);
+    expect(Math.abs((r.tipElevationM - 0.3) * 1e3 - 79.8)).toBeLessThan(0.5);
+    expect(Math.abs(r.headMaxM - 2.020)).toBeLessThan(5e-4);
     expect(r.headMaxM).toBeCloseTo(2.4 - r.tipElevationM, 12);
   });
 

@@ -35,7 +35,7 @@ describe('packPlates', () => {
 });
 
 describe('the bed in the sizing and the written plates', () => {
-  const bed = (mm: number): Partial<DesignInputs> => ({ bedWidthM: mm / 1e3, bedDepthM: mm / 1e3 }) as Partial<DesignInputs>;
+  const bed = (mm: number): Partial<DesignInputs> => ({ bedWidthM: mm / 1e3, bedDepthM: mm / 1e3 });
 
   it('a bed too small for the housing refuses the design and offers a bed that works', () => {
     const inp = defaultInputs(bed(60));

@@ -22,6 +22,8 @@ export interface FloatShapeOptions {
   collarMinRadiusMm?: number;
   /** the guide collar's height above the cone, mm; default 0 (no collar: the cone ends at the plateau) */
   collarHeightMm?: number;
+  /** the cone's rise over run; default OVERHANG_RISE (50 degrees from the bed) */
+  coneRise?: number;
 }
 
 /**
@@ -41,7 +43,7 @@ export interface FloatShapeOptions {
 export function floatShape(o: FloatShapeOptions): FloatSpec | null {
   const R = o.outerDiameterMm / 2;
   const t = o.shellMm;
-  const k = OVERHANG_RISE;
+  const k = o.coneRise ?? OVERHANG_RISE;
   const cosA = 1 / Math.sqrt(1 + k * k);
   const sinA = k * cosA;
   const pocketDepth = Math.max(0, o.padThicknessMm - o.padProudMm);

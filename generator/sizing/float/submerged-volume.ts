@@ -1,4 +1,3 @@
-import { OVERHANG_RISE } from '../constants.ts';
 import { cylinderVolume, frustumVolume } from './frustum-volume.ts';
 import type { FloatSpec } from '../result.ts';
 
@@ -6,7 +5,7 @@ import type { FloatSpec } from '../result.ts';
  * Volume of the float's outer envelope below a water line at depth z above its bottom, mm3.
  *
  *   z <= h_c:        V = pi R^2 z
- *   h_c < z <= h_c + h_k:  V = pi R^2 h_c + frustum(u, R, R - u / tan 50deg), u = z - h_c   (50-degree cone)
+ *   h_c < z <= h_c + h_k:  V = pi R^2 h_c + frustum(u, R, R - u / tan 50deg), u = z - h_c   (cone of rise tan 50deg = h_k / (R - r_c))
  *   above:           V = pi R^2 h_c + frustum(h_k, R, r_c) + pi r_c^2 (z - h_c - h_k)   (collar), at most V_f
  *
  * Example: R = 27, h_c = 35, z = 10 gives 22 902 mm3. Source: elementary geometry.
@@ -16,7 +15,8 @@ export function submergedVolumeMm3(f: FloatSpec, depthMm: number): number {
   const z = Math.min(Math.max(depthMm, 0), f.heightMm);
   if (z <= f.cylinderHeightMm) return cylinderVolume(R, z);
   const u = Math.min(z - f.cylinderHeightMm, f.coneHeightMm);
-  const cone = cylinderVolume(R, f.cylinderHeightMm) + frustumVolume(u, R, R - u / OVERHANG_RISE);
+  const rise = f.coneHeightMm / (R - f.plateauRadiusMm); // the shape's own cone (OVERHANG_RISE unless asked otherwise)
+  const cone = cylinderVolume(R, f.cylinderHeightMm) + frustumVolume(u, R, R - u / rise);
   return cone + cylinderVolume(f.plateauRadiusMm, Math.max(0, z - f.cylinderHeightMm - f.coneHeightMm));
 }
 

@@ -179,14 +179,12 @@ export function layoutCandidate(b: DesignBasis, f: FloatSizing, drainAreaMm2: nu
     violations.push('part-size');
   }
   if (bore / 2 - housing.bossOuterDiameterMm / 2 < VENT_DIAMETER_MM + 2) violations.push('vent-room');
-  // every part must fit the printer's bed in its print pose, when the document names the bed
+  // every part must fit the printer's bed (print.bed) in its print pose
   const bed = printBedMm(inp);
-  if (bed.given) {
-    const foot = housing.foot.outerDiameterMm;
-    const d = f.float.outerDiameterMm;
-    const footprints: [number, number][] = [[foot, foot], [d, d], [pin.lengthMm + pin.head.lengthMm, pin.head.widthMm]];
-    if (!footprints.every(([w, dd]) => fitsBed(w, dd, bed))) violations.push('bed-size');
-  }
+  const foot = housing.foot.outerDiameterMm;
+  const d = f.float.outerDiameterMm;
+  const footprints: [number, number][] = [[foot, foot], [d, d], [pin.lengthMm + pin.head.lengthMm, pin.head.widthMm]];
+  if (!footprints.every(([w, dd]) => fitsBed(w, dd, bed))) violations.push('bed-size');
   return {
     ...f,
     housing,

@@ -36,6 +36,10 @@ export function leverFloat(
     padProudMm: 0,
     clearanceMm: PRINT_CLEARANCE_MM,
     rimMm: shellMm,
+    // 45 degrees, as the lever's layout was built and checked for: at 50 its float meets the frame
+    // at rest (the lever's layout has no float-to-frame rule yet). A slicer at a 45-degree threshold
+    // may support inside this cavity; issue 13's layout should take the 50-degree cone.
+    coneRise: 1,
   });
   if (!float) return null;
   const shell = floatShellVolumeMm3(float);

@@ -30,20 +30,17 @@ export const GUIDE_SLOT_WIDTH_MM = 2;
 export const GUIDE_SLOT_RISE_MM = 0.5;
 /**
  * The pin holes' teardrop roof, degrees from the horizontal. Where the hole leaves the
- * foot's flare, the roof and the flare meet in an edge that slopes at
- * atan(1 / sqrt(cot^2 roof + cot^2 flare)): 40 degrees for a 50-degree roof in a 50-degree flare, which a
- * slicer would support; a 65-degree roof in the 55-degree flare lifts it to 50 (elementary geometry).
+ * foot's flare, the roof and the flare meet in an edge where each printed layer of height h
+ * steps out by h cot(roof) and h cot(flare) at once, h sqrt(cot^2 roof + cot^2 flare) in all:
+ * 1.19 h for a 50-degree roof in a 50-degree flare, more than the h cot 45deg = h a slicer
+ * allows at a 45-degree threshold. A 58-degree roof in a 60-degree flare steps 0.85 h
+ * (elementary geometry). Measured with PrusaSlicer at 0.3 mm layers on the presets: 50/50
+ * put support under the pin holes, 58/60 none (55/60 and 55/63 still some). The roof is
+ * kept as low as that allows: the pin's lowest height grows with 1 / cos(roof).
  */
-export const PIN_HOLE_ROOF_DEG = 65;
-/**
- * The foot's flare, degrees from the bed once printed deck-down. Steeper than the 50 of
- * every other face because the pin holes pass through it: a hole's roof (65 degrees) and
- * the flare meet in an edge where each printed layer of height h steps out by h cot 65deg
- * and h cot a at once; at 55 degrees that is h sqrt(cot^2 65deg + cot^2 55deg) = 0.84 h,
- * under the h cot 45deg = h a slicer allows at a 45-degree threshold (elementary geometry;
- * measured with PrusaSlicer at 0.3 mm layers: a 50-degree flare got support under the pin holes).
- */
-export const FOOT_FLARE_DEG = 55;
+export const PIN_HOLE_ROOF_DEG = 58;
+/** The foot's flare, degrees from the bed once printed deck-down (see PIN_HOLE_ROOF_DEG for why it is steeper than 50). */
+export const FOOT_FLARE_DEG = 60;
 export const FOOT_FLARE_RISE = Math.tan((FOOT_FLARE_DEG * Math.PI) / 180);
 /** Drain notches: six around the rim, at least 4 x 4 mm (common practice: roots and grit pass). */
 export const NOTCH_COUNT = 6;

@@ -1,10 +1,10 @@
 /**
  * The housing. Built mounted (z up from the base), then turned deck-down for
  * printing: the deck is the first layer, the boss and the float's guide
- * sleeve stand up from it, the flare under the flange rises at 55 degrees and
+ * sleeve stand up from it, the flare under the flange rises at 60 degrees and
  * the pin holes' teardrop tips point up.
  *
- * Body: one solid of revolution (HousingSpec): flange from z = 0, 55-degree
+ * Body: one solid of revolution (HousingSpec): flange from z = 0, 60-degree
  * flare back to the tube, tube to the deck, deck on top, seat bore through
  * deck and boss, boss hanging under the deck inside the tube, going on down as
  * the guide sleeve with the stop ring inside it.
