@@ -88,15 +88,16 @@ export function guidedTilt(o: GuidedTiltInput): GuidedTilt {
   let lo = 0;
   let hi = Math.PI / 4;
   if (!feasible(0)) return { maxAngleDeg: 0, padOffsetMm: 0, lipGapMm: 0 };
-  for (let i = 0; i < 60; i++) {
+  for (let i = 0; i < 40; i++) {
     const mid = (lo + hi) / 2;
     if (feasible(mid)) lo = mid;
     else hi = mid;
   }
   const thetaMax = lo;
-  // both ends of the feasible interval are smooth in theta: a fine scan finds the farthest pivot
+  // both ends of the feasible interval grow with theta (for tilts below atan(h_p / R)), so the farthest
+  // pivot is at theta = 0 or at the worst tilt; a few samples between make sure of it
   let offset = 0;
-  const n = 400;
+  const n = 8;
   for (let i = 0; i <= n; i++) {
     const [a, b] = pivotRange(o, (thetaMax * i) / n);
     offset = Math.max(offset, Math.abs(a), Math.abs(b));
