@@ -16,6 +16,8 @@ import { markdownText } from './safe-text/markdown-text.ts';
 import type { NormalizedDoc } from './schema.ts';
 import { sizingSections, type Section } from './format-sizing.ts';
 import { CONSTRAINT_TEXT } from '../sizing/layout/constraint-text.ts';
+import { STANDARD_GRAVITY } from '../sizing/constants.ts';
+import { OVERHANG_DEG, standSpecOf } from '../sizing/parts/stand-spec.ts';
 import type { SizingSuccess } from '../sizing/result.ts';
 
 /** Layer height suggested for every part but the nozzle, mm (common practice for a 0.4 mm nozzle). */
@@ -37,6 +39,8 @@ export interface BuildSheetFiles {
   plate3mf?: string;
   /** whether the pad's cutting template was written */
   withPad?: boolean;
+  /** whether the seal test stand's two parts were written */
+  withTestStand?: boolean;
 }
 
 interface Table {
@@ -57,6 +61,8 @@ interface Sheet {
   printFirst: string;
   printNotes: string[];
   steps: string[];
+  /** the seal test with the stand: empty without it */
+  standSteps: string[];
   cautions: { title: string; text: string }[];
 }
 
@@ -146,8 +152,23 @@ function sheetContent(s: SizingSuccess, doc: NormalizedDoc, files: BuildSheetFil
       ],
       ['Retainer pin', 'flat side down', '3 lines', '100 %', `${LAYER_HEIGHT_MM} mm`, 'none'],
       ...(files.withPad ? [['Pad cutting template (optional, any filament)', 'flat', '2 lines', '100 %', `${LAYER_HEIGHT_MM} mm`, 'none']] : []),
+      ...(files.withTestStand
+        ? [
+            ['Test stand base', 'foot down, as it stands', `${wall.count} lines`, '100 %', `${LAYER_HEIGHT_MM} mm`, `none: the roof under the deck and the tube exit's top rise at ${OVERHANG_DEG} degrees`],
+            ['Test stand plunger', 'cup rim down', `${wall.count} lines`, '100 % (the printed mass assumes solid plastic)', `${LAYER_HEIGHT_MM} mm`, `none: the cup is a ${OVERHANG_DEG}-degree cone`],
+          ]
+        : []),
     ],
   };
+  if (files.withTestStand) {
+    const st = standSpecOf(s);
+    bom.rows.push(
+      ['Test stand base (printed)', '1', `${material}, ${f1(st.base.massG)} g, file ${stl('stand-base')}`],
+      ['Test stand plunger (printed)', '1', `${material}, ${f1(st.plunger.plasticMassG)} g, file ${stl('stand-plunger')}; with the pad ${f1(st.plunger.massG)} g, printed on it as "${st.plunger.label.text}"`],
+      ['Second seal pad and nozzle insert', '1 each', 'for the plunger and the stand, or move the valve\'s own'],
+      ['Kitchen scale', '1', 'reads to 1 g or better'],
+    );
+  }
 
   const printFirst =
     'Supports: off. The float is sealed: any support the slicer put inside it could never come out and would weigh the float down ' +
@@ -183,6 +204,7 @@ function sheetContent(s: SizingSuccess, doc: NormalizedDoc, files: BuildSheetFil
     `Open the supply. The level should settle near ${f1(s.levels.shutOffAtHeadMaxMm)} mm with the tank full and ${f1(s.levels.shutOffAtHeadMinMm)} mm when it runs low. Check for drips at the nozzle with the tank full.`,
   ];
 
+  const standSteps = files.withTestStand ? standTestSteps(s) : [];
   const boundByText = CONSTRAINT_TEXT as Record<string, string>;
   return {
     title: `${name}: build sheet`,
@@ -198,8 +220,37 @@ function sheetContent(s: SizingSuccess, doc: NormalizedDoc, files: BuildSheetFil
     printFirst,
     printNotes,
     steps,
+    standSteps,
     cautions: CAUTIONS.map((c) => ({ title: c.title, text: c.text })),
   };
+}
+
+/**
+ * The seal test with the stand: one (head, mass) point per head, two heads or
+ * more for the line F = F_seat + A rho g H that `seal.calibration` fits
+ * (generator/sizing/hydrostatics/fit-seal-calibration.ts).
+ */
+function standTestSteps(s: SizingSuccess): string[] {
+  const st = standSpecOf(s);
+  const g = STANDARD_GRAVITY;
+  const atMax = (s.closingForce.atHeadMaxN * 1000) / g;
+  const atMin = (s.closingForce.atHeadMinN * 1000) / g;
+  const steps = [
+    `Push a nozzle insert into the stand's seat from above, barb first, until its shoulder sits on the deck: the lip points up, as in the housing's seat turned over. Push the supply tube over the barb from below and lead it out through the opening at the foot.`,
+    `Put a pad in the plunger's pocket (${f1(2 * st.plunger.pocketRadiusMm)} mm across, ${f1(st.plunger.pocketDepthMm)} mm deep), with a drop of flexible glue: it faces down in use. The plunger weighs ${f1(st.plunger.massG)} g with its pad; the figure is printed on its pad face.`,
+    'Set the tank so its water surface stands at a known height above the lip (the head); measure it with a tape from the lip to the surface. Open the supply: water runs out of the nozzle and away through the slots and the foot.',
+    `Lower the plunger into the guide so the pad rests on the lip. Pour water into its cup a little at a time until the drip stops and stays stopped for a minute. The cup holds ${f1(st.plunger.cupCapacityMl)} mL` +
+      (st.cupCapped ? ': at high heads that may not be enough; stand a small jar on the cup for more.' : '.'),
+    `Lift the plunger out with its cup and water and weigh them together: that mass, with the head, is one point. The plunger's own mass is part of it.`,
+    'Repeat at a second head, as far from the first as the tank allows (two heads or more: the points give both the pad\'s seating force and the area the pressure acts on; one head gives only their sum).',
+    `Enter the points in the design document as seal.calibration, e.g. [{ "head": "0.8 m", "mass": "35 g" }, { "head": "1.6 m", "mass": "60 g" }], or in the workbench's bench points box, then size again. The model now expects about ${f1(atMin)} g at the lowest head and ${f1(atMax)} g at the highest.`,
+  ];
+  if (st.plunger.massG >= atMin) {
+    steps.push(
+      `The plunger alone (${f1(st.plunger.massG)} g) already outweighs the ${f1(atMin)} g the model expects at the lowest head: test at heads where the drip still runs with the plunger resting on the lip.`,
+    );
+  }
+  return steps;
 }
 
 /** Every text in the Markdown sheet, ours or the grower's (name, notes, material): one line, Markdown characters escaped. */
@@ -223,6 +274,7 @@ export function buildSheetMarkdown(sizing: SizingSuccess, document: NormalizedDo
   out.push(`## ${m(c.bom.title)}`, '', ...mdTable(c.bom.head, c.bom.rows), '');
   out.push(`## ${m(c.print.title)}`, '', `**${m(c.printFirst)}**`, '', ...mdTable(c.print.head, c.print.rows), '', ...c.printNotes.map((n) => `- ${m(n)}`), '');
   out.push('## Assembly', '', ...c.steps.map((step, i) => `${i + 1}. ${m(step)}`), '');
+  if (c.standSteps.length) out.push('## Seal test with the stand', '', ...c.standSteps.map((step, i) => `${i + 1}. ${m(step)}`), '');
   return out.join('\n');
 }
 
@@ -271,6 +323,7 @@ export function buildSheetHtml(sizing: SizingSuccess, document: NormalizedDoc, f
     '<h2>Assembly</h2><ol>',
     ...c.steps.map((step) => `<li>${esc(step)}</li>`),
     '</ol>',
+    ...(c.standSteps.length ? ['<h2>Seal test with the stand</h2><ol>', ...c.standSteps.map((step) => `<li>${esc(step)}</li>`), '</ol>'] : []),
   ].join('\n');
   return `<!doctype html>\n<html lang="en">\n<head>\n<meta charset="utf-8">\n<title>${esc(c.title)}</title>\n<style>${style}</style>\n</head>\n<body>\n${body}\n</body>\n</html>\n`;
 }

@@ -5,7 +5,8 @@
  * Every dimension comes from `sizing.parts` (the sizing result alone).
  *
  * Options: quality 'preview' (chord error 0.3 mm, for the view) or 'export'
- * (0.05 mm, for files); withPad (default false) adds the pad disc (a cutting template).
+ * (0.05 mm, for files); withPad (default false) adds the pad disc (a cutting template);
+ * withTestStand (default false) adds the seal test stand's base and plunger.
  * A builder that fails throws an Error whose message starts with the part's
  * name (e.g. "housing: ...").
  */
@@ -17,20 +18,35 @@ import { buildHousingMesh } from './parts/housing-solid.ts';
 import { buildNozzleMesh } from './parts/nozzle-solid.ts';
 import { buildPadMesh } from './parts/pad-solid.ts';
 import { buildPinMesh } from './parts/pin-solid.ts';
+import { buildStandBaseMesh } from './parts/stand-base-solid.ts';
+import { buildStandPlungerMesh } from './parts/stand-plunger-solid.ts';
+import { standSpecOf } from '../sizing/parts/stand-spec.ts';
 import { partCapProblems } from './part-caps.ts';
 
 export interface BuildOptions {
   quality: Quality;
   /** add the printed flexible seal pad; default false */
   withPad?: boolean;
+  /** add the seal test stand's two parts (stand-base, stand-plunger); default false */
+  withTestStand?: boolean;
 }
 
-export type BuiltParts = Record<PartName, IndexedMesh> & { pad?: IndexedMesh };
+export type StandPartName = 'stand-base' | 'stand-plunger';
+export const STAND_PART_NAMES: readonly StandPartName[] = ['stand-base', 'stand-plunger'];
+/** Every part buildPart makes: the valve's, the pad template and the test stand's. */
+export type AnyPartName = PartName | 'pad' | StandPartName;
+
+export type BuiltParts = Record<PartName, IndexedMesh> & { pad?: IndexedMesh } & Partial<Record<StandPartName, IndexedMesh>>;
+
+/** The parts a build makes, in order, for these options. */
+export function partNamesFor(opts: Pick<BuildOptions, 'withPad' | 'withTestStand'>): AnyPartName[] {
+  return [...PART_NAMES, ...(opts.withPad ? (['pad'] as const) : []), ...(opts.withTestStand ? STAND_PART_NAMES : [])];
+}
 
 /** Error from a part builder, naming the part. */
 export class PartBuildError extends Error {
   constructor(
-    readonly part: PartName | 'pad',
+    readonly part: AnyPartName,
     cause: unknown,
   ) {
     super(`${part}: ${cause instanceof Error ? cause.message : String(cause)}`, { cause });
@@ -38,7 +54,7 @@ export class PartBuildError extends Error {
   }
 }
 
-function checkInput(sizing: SizingSuccess, opts: BuildOptions, names: readonly (PartName | 'pad')[]): void {
+function checkInput(sizing: SizingSuccess, opts: BuildOptions, names: readonly AnyPartName[]): void {
   if (!sizing || sizing.ok !== true || !sizing.parts) {
     throw new TypeError('buildParts.sizing is not a successful sizing result (sizeDesign(...).ok must be true)');
   }
@@ -46,11 +62,11 @@ function checkInput(sizing: SizingSuccess, opts: BuildOptions, names: readonly (
     throw new RangeError(`buildParts.opts.quality = ${JSON.stringify(opts?.quality)}; allowed: "preview" or "export"`);
   }
   // Caps (DESIGN "Caps": 250 mm, 200,000 triangles) before any geometry is made, with a message naming the part.
-  const over = partCapProblems(sizing, opts.quality, names.filter((n) => (PART_NAMES as readonly string[]).includes(n) || n === 'pad'));
+  const over = partCapProblems(sizing, opts.quality, names);
   if (over.length) throw new PartBuildError(over[0].part, over.map((p, i) => (i === 0 ? p.message : `${p.part}: ${p.message}`)).join('; '));
 }
 
-async function buildUnchecked(name: PartName | 'pad', sizing: SizingSuccess, quality: Quality): Promise<IndexedMesh> {
+async function buildUnchecked(name: AnyPartName, sizing: SizingSuccess, quality: Quality): Promise<IndexedMesh> {
   const p = sizing.parts;
   switch (name) {
     case 'housing':
@@ -63,13 +79,17 @@ async function buildUnchecked(name: PartName | 'pad', sizing: SizingSuccess, qua
       return buildPinMesh(p.pin, quality);
     case 'pad':
       return buildPadMesh(p.float, quality);
+    case 'stand-base':
+      return buildStandBaseMesh(standSpecOf(sizing).base, quality);
+    case 'stand-plunger':
+      return buildStandPlungerMesh(standSpecOf(sizing).plunger, quality);
     default:
-      throw new RangeError(`buildPart.name = ${JSON.stringify(name)}; allowed: ${[...PART_NAMES, 'pad'].map((n) => `"${n}"`).join(', ')}`);
+      throw new RangeError(`buildPart.name = ${JSON.stringify(name)}; allowed: ${[...PART_NAMES, 'pad', ...STAND_PART_NAMES].map((n) => `"${n}"`).join(', ')}`);
   }
 }
 
 /** One part's mesh in print pose. */
-export async function buildPart(name: PartName | 'pad', sizing: SizingSuccess, opts: BuildOptions): Promise<IndexedMesh> {
+export async function buildPart(name: AnyPartName, sizing: SizingSuccess, opts: BuildOptions): Promise<IndexedMesh> {
   checkInput(sizing, opts, [name]);
   try {
     const mesh = await buildUnchecked(name, sizing, opts.quality);
@@ -80,9 +100,9 @@ export async function buildPart(name: PartName | 'pad', sizing: SizingSuccess, o
   }
 }
 
-/** Every part's mesh in print pose (the pad only with withPad). */
+/** Every part's mesh in print pose (the pad only with withPad, the stand's parts only with withTestStand). */
 export async function buildParts(sizing: SizingSuccess, opts: BuildOptions): Promise<BuiltParts> {
-  const names: (PartName | 'pad')[] = opts?.withPad ? [...PART_NAMES, 'pad'] : [...PART_NAMES];
+  const names = partNamesFor(opts ?? {});
   checkInput(sizing, opts, names);
   const meshes = await Promise.all(names.map((name) => buildPart(name, sizing, opts)));
   const out = {} as BuiltParts;

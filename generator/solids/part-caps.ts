@@ -18,13 +18,17 @@
  * about 2,000.
  */
 import { PART_SIZE_CAP_MM, TRIANGLE_CAP } from '../sizing/constants.ts';
+import { standSpecOf } from '../sizing/parts/stand-spec.ts';
 import type { SizingSuccess } from '../sizing/result.ts';
 import { segmentsFor, type Quality } from './mesh/index.ts';
 
 /** Boolean output over its inputs' triangles (measured below 1.5 on every fuzzed part; 3 leaves room). */
 export const BOOLEAN_FACTOR = 3;
 
-export type CappedPart = 'housing' | 'float' | 'nozzle' | 'pin' | 'pad';
+export type CappedPart = 'housing' | 'float' | 'nozzle' | 'pin' | 'pad' | 'stand-base' | 'stand-plunger';
+
+/** Straight stroke pieces the plunger's mass label may have (measured: "88.8g" has 107 in JSCAD's vector font, "0123456789.g" 162; 6 characters of the worst, 28 each). */
+const LABEL_PIECES_MAX = 6 * 28;
 
 const revolved = (corners: number, n: number) => 2 * corners * n;
 const prismOf = (sides: number) => 4 * sides;
@@ -32,6 +36,7 @@ const prismOf = (sides: number) => 4 * sides;
 /** Upper bound of each part's triangle count at `quality`, from the sizing result alone. */
 export function triangleBounds(sizing: SizingSuccess, quality: Quality): Record<CappedPart, number> {
   const { housing: h, float: f, nozzle: z, pin } = sizing.parts;
+  const stand = standSpecOf(sizing);
   const nh = segmentsFor(h.foot.outerDiameterMm / 2, quality);
   const cutters =
     h.vents.count * prismOf(segmentsFor(h.vents.diameterMm / 2, quality)) +
@@ -47,18 +52,23 @@ export function triangleBounds(sizing: SizingSuccess, quality: Quality): Record<
     nozzle: BOOLEAN_FACTOR * (revolved(nozzleCorners, nz) + z.crushRibs.count * prismOf(5)),
     pin: BOOLEAN_FACTOR * (prismOf(np + 2) + 12),
     pad: revolved(4, segmentsFor(f.padDiameterMm / 2, quality)),
+    'stand-base': BOOLEAN_FACTOR * (revolved(13, segmentsFor(stand.base.footRadiusMm, quality)) + stand.base.slots.count * prismOf(4) + prismOf(5)),
+    'stand-plunger': BOOLEAN_FACTOR * (revolved(8, segmentsFor(stand.plunger.cupRimRadiusMm, quality)) + LABEL_PIECES_MAX * prismOf(4)),
   };
 }
 
 /** Largest extent of each part, mm, from its spec. */
 export function partExtentsMm(sizing: SizingSuccess): Record<CappedPart, number> {
   const { housing: h, float: f, nozzle: z, pin } = sizing.parts;
+  const stand = standSpecOf(sizing);
   return {
     housing: Math.max(h.heightMm, h.foot.outerDiameterMm),
     float: Math.max(f.heightMm, f.outerDiameterMm),
     nozzle: Math.max(z.totalLengthMm, z.shoulderDiameterMm, z.collarDiameterMm + 2 * z.crushRibs.heightMm),
     pin: Math.max(pin.lengthMm + pin.head.lengthMm, pin.head.widthMm, pin.head.heightMm),
     pad: Math.max(f.padDiameterMm, f.padThicknessMm),
+    'stand-base': Math.max(stand.base.heightMm, 2 * stand.base.footRadiusMm),
+    'stand-plunger': Math.max(stand.plunger.heightMm, 2 * stand.plunger.cupRimRadiusMm),
   };
 }
 

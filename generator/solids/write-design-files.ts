@@ -24,8 +24,7 @@ import { buildSheetHtml, buildSheetMarkdown } from '../doc/build-sheet.ts';
 import type { NormalizedDoc } from '../doc/schema.ts';
 import type { SizingSuccess } from '../sizing/result.ts';
 import { printBedMm } from '../sizing/parts/print-bed.ts';
-import { PART_NAMES, type PartName } from './assembly.ts';
-import { buildParts, PartBuildError } from './build-parts.ts';
+import { buildParts, partNamesFor, PartBuildError, type AnyPartName } from './build-parts.ts';
 import {
   countEdgeUses,
   meshBounds,
@@ -43,12 +42,14 @@ export interface WriteDesignOptions {
   quality: Quality;
   baseName?: string;
   withPad?: boolean;
+  /** also write the seal test stand's base and plunger (default false) */
+  withTestStand?: boolean;
   /** stop when aborted (Ctrl-C): checked before each step; the folder is put back as it was */
   signal?: AbortSignal;
 }
 
 export interface WrittenPart {
-  name: PartName | 'pad';
+  name: AnyPartName;
   /** path of the part's STL */
   file: string;
   volumeMm3: number;
@@ -108,9 +109,9 @@ export async function writeDesignFiles(
     );
   }
   const quality = options.quality;
-  const built = await buildParts(sizing, { quality, withPad: options.withPad });
-  const names: (PartName | 'pad')[] = options.withPad ? [...PART_NAMES, 'pad'] : [...PART_NAMES];
-  const density = (name: PartName | 'pad') => (name === 'pad' ? sizing.inputs.padDensityKgM3 : sizing.inputs.materialDensityKgM3);
+  const built = await buildParts(sizing, { quality, withPad: options.withPad, withTestStand: options.withTestStand });
+  const names = partNamesFor(options);
+  const density = (name: AnyPartName) => (name === 'pad' ? sizing.inputs.padDensityKgM3 : sizing.inputs.materialDensityKgM3);
 
   // Everything is made in memory first, so a failure leaves the folder as it was.
   const contents: { file: string; bytes: Uint8Array | string; what: string }[] = [];
@@ -152,7 +153,7 @@ export async function writeDesignFiles(
     if (error instanceof RangeError && error.message.startsWith('print.bed')) throw error;
     throw new Error(`3MF plate: ${error instanceof Error ? error.message : String(error)}`, { cause: error });
   }
-  const sheetFiles = { stl: stlNames, plate3mf: plateFile, withPad: options.withPad };
+  const sheetFiles = { stl: stlNames, plate3mf: plateFile, withPad: options.withPad, withTestStand: options.withTestStand };
   contents.push({ file: `${base}-design.json`, bytes: `${JSON.stringify(document, null, 2)}\n`, what: 'design document' });
   contents.push({ file: `${base}-build-sheet.md`, bytes: buildSheetMarkdown(sizing, document, sheetFiles), what: 'build sheet' });
   contents.push({ file: `${base}-build-sheet.html`, bytes: buildSheetHtml(sizing, document, sheetFiles), what: 'build sheet' });

@@ -2,6 +2,7 @@
  * `floatwright build`: size one valve and write its printable files (one STL
  * per part, a 3MF plate, the design document, the build sheet) into a folder.
  */
+import { standSpecOf } from '../../sizing/parts/stand-spec.ts';
 import type { FieldError } from '../../doc/fields.ts';
 import { sizeDesign } from '../../sizing/size-design.ts';
 import { writeDesignFiles } from '../../solids/write-design-files.ts';
@@ -16,6 +17,7 @@ const OPTIONS = {
   out: { type: 'string' },
   quality: { type: 'string' },
   'with-pad': { type: 'boolean' },
+  'with-test-stand': { type: 'boolean' },
   json: { type: 'boolean' },
   help: { type: 'boolean', short: 'h' },
   debug: { type: 'boolean' },
@@ -33,6 +35,7 @@ per part (housing, float, nozzle insert, retainer pin) in print orientation, a
                            .floatwright-output; a file or a symbolic link is refused)
   --quality Q              export (default: chord error at most 0.05 mm) or preview (coarse, quick)
   --with-pad               also write the seal pad's disc as a cutting template (the pad itself is cut from sponge or rubber sheet)
+  --with-test-stand        also write the seal test stand (stand-base, stand-plunger) and its page in the build sheet
 ${designFlagsHelp()}
   --json                   print the sizing result as JSON with a "parts" list of the files written
   --debug                  show the stack trace if floatwright itself fails
@@ -75,7 +78,7 @@ async function run(argv: string[], io: Io): Promise<number> {
   }
 
   const written = await writeIntoOutFolder(out as string, (dir, signal) =>
-    writeDesignFiles(result, parsed.document, dir, { quality: quality as 'export' | 'preview', withPad: values['with-pad'] === true, signal }),
+    writeDesignFiles(result, parsed.document, dir, { quality: quality as 'export' | 'preview', withPad: values['with-pad'] === true, withTestStand: values['with-test-stand'] === true, signal }),
   );
   if (!written.ok) {
     const { field, message, status } = written;
@@ -87,13 +90,14 @@ async function run(argv: string[], io: Io): Promise<number> {
   if (json) {
     // the sizing result's part dimensions move to `partSpecs`; `parts` lists the files written
     const { parts: partSpecs, ...rest } = result;
-    io.out(`${JSON.stringify({ ...rest, partSpecs, parts: written.value.parts, files: written.value.files }, null, 2)}\n`);
+    const testStand = values['with-test-stand'] === true ? { testStand: standSpecOf(result) } : {};
+    io.out(`${JSON.stringify({ ...rest, partSpecs, ...testStand, parts: written.value.parts, files: written.value.files }, null, 2)}\n`);
     return EXIT_OK;
   }
   const { parts, files } = written.value;
   const rows = parts.map(
     (p) =>
-      `  ${p.name.padEnd(8)} ${fixed(p.volumeMm3 / 1000, 2).padStart(8)} cm3 ${fixed(p.massG, 1).padStart(7)} g ${String(p.triangles).padStart(7)} triangles  ${p.file}`,
+      `  ${p.name.padEnd(13)} ${fixed(p.volumeMm3 / 1000, 2).padStart(8)} cm3 ${fixed(p.massG, 1).padStart(7)} g ${String(p.triangles).padStart(7)} triangles  ${p.file}`,
   );
   const others = files.filter((f) => !parts.some((p) => p.file === f));
   io.out(
