@@ -3,17 +3,11 @@ import { customElement, property } from 'lit/decorators.js';
 import type { SizingSuccess } from '../../generator/sizing/result.ts';
 import { levelAxis } from '../lib/format.ts';
 import { pushCurve } from '../lib/net-push.ts';
+import { niceStep } from '../lib/nice-step.ts';
 import type { UnitSystem } from '../lib/units-system.ts';
 import { shared } from './shared-styles.ts';
 
 const W = 460, H = 230, L = 52, R = 14, T = 14, B = 40;
-
-function niceStep(span: number, ticks = 5): number {
-  const raw = span / ticks;
-  const mag = 10 ** Math.floor(Math.log10(raw));
-  const n = raw / mag;
-  return (n < 1.5 ? 1 : n < 3 ? 2 : n < 7 ? 5 : 10) * mag;
-}
 
 /**
  * How hard the float pushes the pad up as the water rises (float held shut at
