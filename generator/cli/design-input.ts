@@ -27,6 +27,7 @@ export const DESIGN_FLAGS = [
   { flag: 'reserve', path: 'reserve', help: 'float lift over the force needed to close (default 1.5)', example: '2' },
   { flag: 'pad', path: 'seal.pad', help: 'seal pad from the table, e.g. "sponge grade 2" or "rubber 40A" (default auto: the softest sponge that fits)', example: 'sponge-2' },
   { flag: 'overflow', path: 'container.overflow', help: 'height of the container overflow above its floor (the valve shuts 10 mm below it at least)', example: '80mm' },
+  { flag: 'demand', path: 'container.demand', help: "the plants' peak use (default 3 L/day; also gal/day, L/h)", example: '5L/day' },
 ] as const;
 
 /** parseArgs options for --design and the design flags. */

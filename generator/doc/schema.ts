@@ -65,6 +65,7 @@ export const FIELD_UNITS = {
   'reservoir.area': 'm2',
   'reservoir.rise': 'mm',
   'container.overflow': 'mm',
+  'container.demand': 'L/day',
   'print.bed.width': 'mm',
   'print.bed.depth': 'mm',
 } as const;
@@ -89,6 +90,14 @@ export const DEFAULT_DOCUMENT = {
   limits: { maxOuterDiameter: '120 mm' },
   reserve: 1.5,
 } as const;
+
+/**
+ * The plants' peak use when the document gives none (container.demand): 3 L a day, a container of two or
+ * three leafy or fruiting plants at a summer peak of 1 to 2 L each a day (common practice, from memory).
+ * Used for the level held and the fill time; the valve is still sized for the tight shut-off.
+ */
+export const DEFAULT_DEMAND_LPD = 3;
+const DEFAULT_DEMAND_M3S = (DEFAULT_DEMAND_LPD * 1e-3) / 86400;
 
 const LOW_PRESSURE_NOTE =
   '3.05 m is about 10 ft (30 kPa, 4.3 psi of water): floatwright sizes valves for low-pressure gravity feed from a raised tank only. Never connect one to mains pressure.';
@@ -121,6 +130,7 @@ export const FIELD_SPECS = {
   reservoirArea: { unit: 'm2', label: 'the reservoir area', min: 1e-4, max: 100 },
   reservoirRise: { unit: 'mm', label: 'the reservoir rise', min: 1, max: 1000 },
   overflow: { unit: 'mm', label: 'the overflow height (above the container floor)', min: 10, max: 2000, example: '60 mm' },
+  demand: { unit: 'L/day', label: "the plants' peak use (container demand)", min: 0, max: 5000, example: '3 L/day' },
   bedSide: { unit: 'mm', label: 'a bed side', min: 50, max: 1000, example: '220 mm' },
 } satisfies Record<string, QuantitySpec>;
 
@@ -305,6 +315,7 @@ const documentShape = {
   }).optional(),
   container: section({
     overflow: optionalQuantityField('length', S.overflow),
+    demand: optionalQuantityField('flow', S.demand),
   }).optional(),
 };
 
@@ -321,7 +332,7 @@ export interface NormalizedDoc {
   limits: { maxOuterDiameter: string };
   reserve: number;
   reservoir?: { area: string; rise: string };
-  container?: { overflow: string };
+  container?: { overflow?: string; demand?: string };
 }
 
 export interface ParsedDesign {
@@ -393,6 +404,7 @@ export const designSchema = section(documentShape).transform((doc, ctx): ParsedD
   const area = reservoir?.area ?? null;
   const rise = reservoir?.rise ?? null;
   const overflow = container?.overflow ?? null;
+  const demand = container?.demand ?? null;
   const inputs: DesignInputs = {
     headMaxM: headMaxResult.measured.si,
     headMinM: headMin.si,
@@ -416,6 +428,7 @@ export const designSchema = section(documentShape).transform((doc, ctx): ParsedD
     reservoirAreaM2: area ? area.si : null,
     reservoirRiseM: rise ? rise.si : null,
     overflowM: overflow ? overflow.si : null,
+    demandM3s: demand ? demand.si : DEFAULT_DEMAND_M3S,
     bedWidthM: print.bed.widthM,
     bedDepthM: print.bed.depthM,
     retiredFields,
@@ -469,7 +482,14 @@ export const designSchema = section(documentShape).transform((doc, ctx): ParsedD
     ...(area && rise
       ? { reservoir: { area: normalizedText(area.si, U['reservoir.area']), rise: normalizedText(rise.si, U['reservoir.rise']) } }
       : {}),
-    ...(overflow ? { container: { overflow: normalizedText(overflow.si, U['container.overflow']) } } : {}),
+    ...(overflow || demand
+      ? {
+          container: {
+            ...(overflow ? { overflow: normalizedText(overflow.si, U['container.overflow']) } : {}),
+            ...(demand ? { demand: normalizedText(demand.si, U['container.demand']) } : {}),
+          },
+        }
+      : {}),
   };
   return { inputs, document };
 });

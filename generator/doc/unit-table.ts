@@ -9,13 +9,13 @@
 import { STANDARD_GRAVITY } from '../sizing/constants.ts';
 
 /** What a quantity measures; `head` accepts a length or a pressure. */
-export type Dimension = 'length' | 'pressure' | 'density' | 'force' | 'mass' | 'area' | 'viscosity';
+export type Dimension = 'length' | 'pressure' | 'density' | 'force' | 'mass' | 'area' | 'viscosity' | 'flow';
 
 export interface UnitDef {
   /** how the unit is written in output, e.g. "mm", "g/cm3", "mPa s" */
   symbol: string;
   dimension: Dimension;
-  /** one of this unit in the SI unit of its dimension (m, Pa, kg/m3, N, kg, m2, Pa s) */
+  /** one of this unit in the SI unit of its dimension (m, Pa, kg/m3, N, kg, m2, Pa s, m3/s) */
   toSi: number;
   /** other spellings; matched case-insensitively with spaces, dots and carets removed */
   aliases: string[];
@@ -27,6 +27,9 @@ export const PSI_PA = 6894.757;
 export const OUNCE_KG = 0.028349523125;
 export const POUND_KG = 0.45359237;
 export const GRAM_FORCE_N = 1e-3 * STANDARD_GRAVITY;
+/** 1 US liquid gallon = 231 in3 = 3.785411784 L (NIST SP 811, App. B) */
+export const US_GALLON_M3 = 3.785411784e-3;
+export const DAY_S = 86400;
 
 export const UNITS: readonly UnitDef[] = [
   // length, m
@@ -68,6 +71,10 @@ export const UNITS: readonly UnitDef[] = [
   // dynamic viscosity, Pa s (1 cP = 1 mPa s)
   { symbol: 'mPa s', dimension: 'viscosity', toSi: 1e-3, aliases: ['cp', 'centipoise'] },
   { symbol: 'Pa s', dimension: 'viscosity', toSi: 1, aliases: [] },
+  // volume flow, m3/s (a plants' demand: litres or US gallons a day, or litres an hour)
+  { symbol: 'L/day', dimension: 'flow', toSi: 1e-3 / DAY_S, aliases: ['l/d', 'lpd', 'litres/day', 'liters/day', 'litre/day', 'liter/day'] },
+  { symbol: 'gal/day', dimension: 'flow', toSi: US_GALLON_M3 / DAY_S, aliases: ['gal/d', 'gpd', 'gallons/day', 'gallon/day'] },
+  { symbol: 'L/h', dimension: 'flow', toSi: 1e-3 / 3600, aliases: ['l/hr', 'lph', 'litres/hour', 'liters/hour', 'litre/hour', 'liter/hour'] },
 ];
 
 /**

@@ -37,6 +37,7 @@ const ACCEPTS: Record<QuantityKind, readonly Dimension[]> = {
   mass: ['mass'],
   area: ['area'],
   viscosity: ['viscosity'],
+  flow: ['flow'],
   number: [],
 };
 
@@ -49,6 +50,7 @@ const KIND_NOUN: Record<QuantityKind, string> = {
   mass: 'a mass',
   area: 'an area',
   viscosity: 'a viscosity',
+  flow: 'a flow',
   number: 'a plain number',
 };
 
@@ -65,6 +67,7 @@ export const DEFAULT_UNIT: Record<QuantityKind, string> = {
   mass: 'g',
   area: 'm2',
   viscosity: 'mPa s',
+  flow: 'L/day',
   number: '',
 };
 
@@ -91,6 +94,7 @@ function examples(kind: QuantityKind, unit: string): string {
     mass: ['31 g', '0.031 kg', '1.1 oz'],
     area: ['0.12 m2', '1200 cm2', '1.3 ft2'],
     viscosity: ['1.0 mPa s', '1 cP', '0.001 Pa s'],
+    flow: ['4 L/day', '1 gal/day', '0.2 L/h'],
   };
   const chosen = list[`${kind}:${unit}`] ?? list[kind] ?? [];
   return chosen.map((e) => `"${e}"`).join(', ');

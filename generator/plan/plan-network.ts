@@ -6,6 +6,8 @@ export interface NetworkRow {
   count: number;
   mainLengthM: number;
   tipElevationM: number;
+  /** the nozzle insert's length, the bore's (designBasis(inputs).nozzle.totalLengthMm / 1000), m; absent, a sharp orifice */
+  boreLengthM?: number;
   inputs: DesignInputs;
 }
 
@@ -34,6 +36,8 @@ function branchOf(row: NetworkRow, count: number): NetworkBranch {
     tubeLengthM: row.inputs.tubeLengthM,
     orificeM: row.inputs.orificeM,
     tipElevationM: row.tipElevationM,
+    // the bore as the single design sizes it: a short tube when the insert is at least three bores long
+    boreLengthM: row.boreLengthM,
   };
 }
 

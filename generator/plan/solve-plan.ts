@@ -4,6 +4,7 @@ import { HEAD_CAP_M } from '../sizing/constants.ts';
 import type { DesignInputs } from '../sizing/inputs.ts';
 import type { SizingResult, SizingSuccess, WayOut } from '../sizing/result.ts';
 import { sizeDesign } from '../sizing/size-design.ts';
+import { designBasis } from '../sizing/layout/design-basis.ts';
 import { groupDesigns } from './group-designs.ts';
 import { planNetwork, starvingReason } from './plan-network.ts';
 import { planPathFor } from './schema.ts';
@@ -76,7 +77,13 @@ export function solvePlan(plan: PlanInputs, size: (inputs: DesignInputs) => Sizi
 
   const { groups, idOf } = groupDesigns(tips.map((t, i) => ({ sizing: t.sizing.ok ? t.sizing : null, count: plan.containers[i]!.count })));
 
-  const rows = plan.containers.map((c, i) => ({ count: c.count, mainLengthM: c.mainLengthM, tipElevationM: tips[i]!.tipElevationM, inputs: c.inputs }));
+  const rows = plan.containers.map((c, i) => ({
+    count: c.count,
+    mainLengthM: c.mainLengthM,
+    tipElevationM: tips[i]!.tipElevationM,
+    boreLengthM: designBasis(c.inputs).nozzle.totalLengthMm * 1e-3,
+    inputs: c.inputs,
+  }));
   const common = { mainInnerDiameterM: plan.mainInnerDiameterM, densityKgM3: plan.liquidDensityKgM3, viscosityPaS: plan.liquidViscosityPaS, rows };
   const full = planNetwork({ ...common, tankSurfaceElevationM: plan.tankFullSurfaceElevationM });
   const low = planNetwork({ ...common, tankSurfaceElevationM: plan.tankLowSurfaceElevationM });

@@ -55,6 +55,8 @@ export interface DesignInputs {
   reservoirRiseM: number | null;
   /** container overflow height above its floor, m, or null when not given */
   overflowM: number | null;
+  /** the plants' peak use drawn from the reservoir, m3/s (>= 0; the document's default when not given) */
+  demandM3s: number;
   /** printer bed, m (plates never exceed it) */
   bedWidthM: number;
   bedDepthM: number;

@@ -141,7 +141,8 @@ export interface PartsSpec {
 
 export interface SizingSuccess {
   ok: true;
-  inputs: DesignInputs;
+  /** the inputs, with the demand also in litres per day */
+  inputs: DesignInputs & { demandLpd: number };
   closingForce: {
     atHeadMaxN: number;
     atHeadMinN: number;
@@ -225,12 +226,33 @@ export interface SizingSuccess {
     shutOffAtHeadMinMm: number;
     liftOffMm: number;
     firstTouchMm: number;
+    /** throttling starts: the first touch (the same figure, by the name the characteristic uses), full tank, mm */
+    throttleStartMm: number;
+    /** the pad rests on the lip (the film down to the contact gap), full tank, mm */
+    contactMm: number;
+    /** levels at 50, 10 and 1 % of the open flow, full tank, mm */
+    flow50Mm: number;
+    flow10Mm: number;
+    flow1Mm: number;
+    /** level held at the container's demand (inputs.demandLpd), full tank and low tank, mm */
+    heldAtDemandMm: number;
+    heldAtDemandLowTankMm: number;
+    /** the band at low tank */
+    lowTank: { throttleStartMm: number; contactMm: number; flow50Mm: number; flow10Mm: number; flow1Mm: number };
     minimumReachableMm: number;
     /** the container's overflow height, when given (the tight shut-off at full tank stays 10 mm below it) */
     overflowMm: number | null;
   };
   flow: {
+    /** open flow at full tank, nominal (drawn bore, linear friction bridge), L/h */
     atHeadMaxLph: number;
+    /** the flow band at full tank: bore 0.2 mm small and the friction bridge's high end; drawn bore and its low end, L/h */
+    atHeadMaxLowLph: number;
+    atHeadMaxHighLph: number;
+    /** the bore as a short tube (at least three bores long) or a sharp orifice */
+    boreModel: 'short-tube' | 'orifice';
+    /** the bore's length: the nozzle insert's whole length, mm */
+    boreLengthMm: number;
     atHeadMinLph: number;
     reynoldsAtHeadMax: number;
     reynoldsAtHeadMin: number;
@@ -238,6 +260,14 @@ export interface SizingSuccess {
     fillTimeAtHeadMaxMin: number | null;
     fillTimeAtHeadMinMin: number | null;
   };
+  /** the valve's characteristic Q(level) at full and low tank: from the float on its pin (open) to the tight shut-off (zero) */
+  characteristic: { headMax: { levelMm: number; flowLph: number }[]; headMin: { levelMm: number; flowLph: number }[] };
+  /**
+   * fill time with the demand drawn, on the low end of the flow band at full tank, from (level held - reservoir.rise)
+   * to 1 mm below the level held, min; null without reservoir.area and rise, or when the valve cannot outpace the demand
+   */
+  fill: { timeToHeldMin: number | null; fromLevelMm: number | null; toLevelMm: number | null };
+  /** drains sized on the high end of the flow band */
   drain: { requiredAreaMm2: number; providedAreaMm2: number; notchCount: number };
   vents: { count: number; diameterMm: number; areaMm2: number };
   holdDown: {

@@ -17,18 +17,15 @@ import type { Candidate } from './layout/evaluate-candidate.ts';
 import type { DesignInputs } from './inputs.ts';
 import type { SizingFailure, SizingResult, SizingSuccess, Warning, WayOut } from './result.ts';
 import { wayOutApplies } from './way-out-applies.ts';
+import { lineForDesign, type FlowBand } from './throttle/line-for-design.ts';
+import { characteristicPoints, throttleReport } from './throttle/throttle-report.ts';
 
 const fmt = (x: number, digits = 1) => Number(x.toFixed(digits)).toString();
 
-function flowAt(inp: DesignInputs, headM: number) {
-  return supplyFlow({
-    headM,
-    tubeInnerDiameterM: inp.tubeInnerDiameterM,
-    tubeLengthM: inp.tubeLengthM,
-    orificeM: inp.orificeM,
-    densityKgM3: inp.liquidDensityKgM3,
-    viscosityPaS: inp.liquidViscosityPaS,
-  });
+/** Open-valve flow of a design at a head, at one point of the flow band (the bore a short tube when long enough). */
+function flowAt(b: DesignBasis, headM: number, band: FlowBand = 'nominal') {
+  const line = lineForDesign(b.inputs, headM, b.nozzle.totalLengthMm * 1e-3, band);
+  return supplyFlow(line);
 }
 
 /** Checks that need no float: the nozzle's own walls. */
@@ -101,7 +98,7 @@ function works(inp: DesignInputs): boolean {
   try {
     const b = designBasis(inp);
     if (nozzleProblems(b).reasons.length || padOnStop(b)) return false;
-    const q = flowAt(inp, inp.headMaxM);
+    const q = flowAt(b, inp.headMaxM, 'high');
     return searchSize(b, drainAreaRequiredM2({ flowM3s: q.flowM3s }) * 1e6).best !== null;
   } catch {
     return false;
@@ -207,6 +204,20 @@ function overflowFailure(inp: DesignInputs, shutOffMaxMm: number): SizingFailure
   return { ok: false, reasons, waysOut: applicable(inp, waysOut), warnings: [] };
 }
 
+/** The plants drink more than the valve gives at low tank: the container would never fill. */
+function demandFailure(inp: DesignInputs, openLowTankLph: number): SizingFailure {
+  const demandLpd = inp.demandM3s * 8.64e7;
+  const canLpd = openLowTankLph * 24;
+  const reasons: Warning[] = [{
+    code: 'demand',
+    message: `container.demand: ${fmt(demandLpd, 1)} L/day is more than this valve gives wide open at the lowest tank level, ${fmt(canLpd, 1)} L/day (${fmt(openLowTankLph, 2)} L/h): the container would never fill.`,
+  }];
+  const waysOut: WayOut[] = [];
+  const most = Math.floor(canLpd * 10) / 10;
+  if (most > 0) waysOut.push({ field: 'container.demand', value: `${fmt(most, 1)} L/day`, message: `a demand of at most ${fmt(most, 1)} L/day (or a second valve)` });
+  return { ok: false, reasons, waysOut: applicable(inp, waysOut), warnings: [] };
+}
+
 function warningsFor(b: DesignBasis, c: Candidate, netWeightN: number, ballastG: number, lowFlow: boolean): Warning[] {
   const inp = b.inputs;
   const w: Warning[] = [];
@@ -269,9 +280,12 @@ export function sizeDesign(inp: DesignInputs): SizingResult {
   if (early.reasons.length) return { ok: false, reasons: early.reasons, waysOut: applicable(inp, early.waysOut), warnings: [] };
 
   const rho = inp.liquidDensityKgM3;
-  const qMax = flowAt(inp, inp.headMaxM);
-  const qMin = flowAt(inp, inp.headMinM);
-  const drainRequiredMm2 = drainAreaRequiredM2({ flowM3s: qMax.flowM3s }) * 1e6;
+  const qMax = flowAt(b, inp.headMaxM);
+  const qMin = flowAt(b, inp.headMinM);
+  const qMaxLow = flowAt(b, inp.headMaxM, 'low');
+  const qMaxHigh = flowAt(b, inp.headMaxM, 'high');
+  // DESIGN second part: drains sized on the high end of the flow band
+  const drainRequiredMm2 = drainAreaRequiredM2({ flowM3s: qMaxHigh.flowM3s }) * 1e6;
   const outcome = searchSize(b, drainRequiredMm2);
   const c = outcome.best;
   if (!c) return failure(b, outcome);
@@ -283,6 +297,8 @@ export function sizeDesign(inp: DesignInputs): SizingResult {
   const shutOffMax = c.sealBottomMm + depthAt(b.forceAtHeadMaxN);
   const shutOffMin = c.sealBottomMm + depthAt(b.forceAtHeadMinN);
   if (inp.overflowM !== null && shutOffMax > (inp.overflowM - OVERFLOW_MARGIN_M) * 1e3 + 1e-9) return overflowFailure(inp, shutOffMax);
+  const throttle = throttleReport(b, c, qMax.flowLph, qMin.flowLph);
+  if (throttle.demandLph > throttle.headMin.openLph) return demandFailure(inp, throttle.headMin.openLph);
 
   // The pad in service (DESIGN second part): with the tank empty and the reservoir full the float's whole
   // push F_seal(H_max) bears on the land; flooded, its whole lift F_avail. The stop caps the strain at 25 %.
@@ -337,7 +353,7 @@ export function sizeDesign(inp: DesignInputs): SizingResult {
   const notches = c.housing.drainNotches;
   const result: SizingSuccess = {
     ok: true,
-    inputs: inp,
+    inputs: { ...inp, demandLpd: inp.demandM3s * 8.64e7 },
     closingForce: {
       atHeadMaxN: b.forceAtHeadMaxN,
       atHeadMinN: b.forceAtHeadMinN,
@@ -405,11 +421,27 @@ export function sizeDesign(inp: DesignInputs): SizingResult {
       shutOffAtHeadMinMm: shutOffMin,
       liftOffMm: c.pinTopMm + floatingDepth,
       firstTouchMm: c.sealBottomMm - deltaMm + floatingDepth,
+      throttleStartMm: c.sealBottomMm - deltaMm + floatingDepth,
+      contactMm: throttle.headMax.contactMm,
+      flow50Mm: throttle.flow50Mm,
+      flow10Mm: throttle.flow10Mm,
+      flow1Mm: throttle.flow1Mm,
+      heldAtDemandMm: throttle.heldAtDemandMm,
+      heldAtDemandLowTankMm: throttle.heldAtDemandLowTankMm,
+      lowTank: {
+        throttleStartMm: c.sealBottomMm - deltaMm + floatingDepth,
+        contactMm: throttle.headMin.contactMm,
+        ...throttle.lowTank,
+      },
       minimumReachableMm: c.minimumReachableMm,
       overflowMm: inp.overflowM === null ? null : inp.overflowM * 1e3,
     },
     flow: {
       atHeadMaxLph: qMax.flowLph,
+      atHeadMaxLowLph: qMaxLow.flowLph,
+      atHeadMaxHighLph: qMaxHigh.flowLph,
+      boreModel: qMax.boreModel,
+      boreLengthMm: b.nozzle.totalLengthMm,
       atHeadMinLph: qMin.flowLph,
       reynoldsAtHeadMax: qMax.reynolds,
       reynoldsAtHeadMin: qMin.reynolds,
@@ -417,6 +449,8 @@ export function sizeDesign(inp: DesignInputs): SizingResult {
       fillTimeAtHeadMaxMin: fill(qMax.flowM3s),
       fillTimeAtHeadMinMin: fill(qMin.flowM3s),
     },
+    characteristic: { headMax: characteristicPoints(throttle.headMax), headMin: characteristicPoints(throttle.headMin) },
+    fill: { timeToHeldMin: throttle.timeToHeldMin, fromLevelMm: throttle.fillFromMm, toLevelMm: throttle.fillToMm },
     drain: {
       requiredAreaMm2: drainRequiredMm2,
       providedAreaMm2: notches.count * notches.widthMm * notches.heightMm,

@@ -31,6 +31,7 @@ const SPEC_OF: Record<string, { spec: Spec; si: number; input: keyof DesignInput
   'limits.maxOuterDiameter': { spec: FIELD_SPECS.maxOuterDiameter, si: 1e-3, input: 'maxOuterDiameterM' },
   'seal.padThickness': { spec: FIELD_SPECS.padThickness, si: 1e-3, input: 'padThicknessM' },
   'container.overflow': { spec: FIELD_SPECS.overflow, si: 1e-3, input: 'overflowM' },
+  'container.demand': { spec: FIELD_SPECS.demand, si: 1e-3 / 86400, input: 'demandM3s' },
 };
 
 /**

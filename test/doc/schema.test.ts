@@ -57,6 +57,8 @@ describe('defaults', () => {
       reservoirAreaM2: null,
       reservoirRiseM: null,
       overflowM: null,
+      // container.demand default: 3 L/day (the schema's stated common-practice peak) = 3e-3 m3 / 86400 s
+      demandM3s: 3e-3 / 86400,
       bedWidthM: 0.22, // 220 x 220 mm, a common hobby printer bed (common practice)
       bedDepthM: 0.22,
       retiredFields: [],

@@ -68,7 +68,7 @@ describe('supplyFlow limits and defaults', () => {
 
   it('gives zero flow, no NaN, at zero head', () => {
     const r = supplyFlow({ headM: 0, ...tube, orificeM: 0.003, ...water });
-    expect(r).toEqual({ flowM3s: 0, flowLph: 0, tubeVelocityMS: 0, reynolds: 0, regime: 'laminar', frictionFactor: null });
+    expect(r).toEqual({ flowM3s: 0, flowLph: 0, tubeVelocityMS: 0, reynolds: 0, regime: 'laminar', boreModel: 'orifice', frictionFactor: null });
   });
 
   it('rises with head and falls with the entrance loss (defaults K_in 0.5, C_d 0.61 from Crane TP-410 / standard texts, from memory)', () => {

@@ -25,6 +25,7 @@ export function defaultInputs(over: Partial<DesignInputs> = {}): DesignInputs {
     reservoirAreaM2: 0.12,
     reservoirRiseM: 0.02,
     overflowM: null,
+    demandM3s: 3e-3 / 86400,
     bedWidthM: 0.22,
     bedDepthM: 0.22,
     retiredFields: [],

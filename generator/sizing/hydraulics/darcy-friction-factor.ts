@@ -4,6 +4,13 @@ import { LAMINAR_LIMIT_REYNOLDS, TURBULENT_LIMIT_REYNOLDS } from './flow-regime.
 import { laminarFrictionFactor } from './laminar-friction-factor.ts';
 
 /**
+ * How friction is taken between Re 2300 and 4000, where no formula is settled: 'linear' (the
+ * sizing's nominal bridge), or its bounds, 'low' = min(64/Re, Colebrook) and 'high' = max of the two
+ * (the laminar and turbulent ends carried into the gap; used for the flow band).
+ */
+export type FrictionBridge = 'linear' | 'low' | 'high';
+
+/**
  * Darcy friction factor over the whole Reynolds range, as the sizing model uses it.
  *
  * Equation: f = 64/Re for Re <= 2300; Colebrook-White for Re >= 4000; in between,
@@ -13,6 +20,7 @@ import { laminarFrictionFactor } from './laminar-friction-factor.ts';
  *
  * @param reynolds Reynolds number (dimensionless, > 0)
  * @param relativeRoughness e/d (dimensionless, 0 to 0.1)
+ * @param bridge friction between Re 2300 and 4000 (FrictionBridge); default 'linear'
  * @returns Darcy friction factor f (dimensionless)
  *
  * Example: Re = 1948 gives 0.032854 (laminar); Re = 3150, e/d = 3.75e-4 gives
@@ -20,11 +28,16 @@ import { laminarFrictionFactor } from './laminar-friction-factor.ts';
  * Source: 64/Re Hagen-Poiseuille; Colebrook (1939); the linear bridge is the project's
  * design rule (common practice: the transition zone has no settled formula).
  */
-export function darcyFrictionFactor(reynolds: number, relativeRoughness: number): number {
+export function darcyFrictionFactor(reynolds: number, relativeRoughness: number, bridge: FrictionBridge = 'linear'): number {
   checkRange('reynolds', reynolds, { min: 0, minExclusive: true });
   checkRange('relativeRoughness', relativeRoughness, { min: 0, max: MAX_RELATIVE_ROUGHNESS });
   if (reynolds <= LAMINAR_LIMIT_REYNOLDS) return laminarFrictionFactor(reynolds);
   if (reynolds >= TURBULENT_LIMIT_REYNOLDS) return colebrookFrictionFactor(reynolds, relativeRoughness);
+  if (bridge !== 'linear') {
+    const laminar = laminarFrictionFactor(reynolds);
+    const turbulent = colebrookFrictionFactor(reynolds, relativeRoughness);
+    return bridge === 'low' ? Math.min(laminar, turbulent) : Math.max(laminar, turbulent);
+  }
   const fromF = laminarFrictionFactor(LAMINAR_LIMIT_REYNOLDS);
   const toF = colebrookFrictionFactor(TURBULENT_LIMIT_REYNOLDS, relativeRoughness);
   const share = (reynolds - LAMINAR_LIMIT_REYNOLDS) / (TURBULENT_LIMIT_REYNOLDS - LAMINAR_LIMIT_REYNOLDS);

@@ -21,6 +21,8 @@ export interface NetworkBranch {
   orificeM: number;
   /** nozzle tip elevation, m, on the same datum as tankSurfaceElevationM */
   tipElevationM: number;
+  /** each valve's bore length, m (>= 0): at least 3 bore diameters makes it a short tube (boreHeadM); default 0, a sharp orifice */
+  boreLengthM?: number;
 }
 
 export interface SupplyNetworkOptions {
@@ -129,6 +131,7 @@ export function solveSupplyNetwork(opts: SupplyNetworkOptions): SupplyNetworkRes
         entranceLossK: 0,
         dischargeCoefficient: cd,
         roughnessM,
+        boreLengthM: checkRange(`${at}.boreLengthM`, b.boreLengthM ?? 0, { min: 0 }),
       },
     };
   });

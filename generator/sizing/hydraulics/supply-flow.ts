@@ -1,7 +1,8 @@
 import { ORIFICE_DISCHARGE_COEFFICIENT, SHARP_ENTRANCE_LOSS, TUBE_ROUGHNESS_M } from '../constants.ts';
 import { checkRange } from './check-range.ts';
 import { MAX_RELATIVE_ROUGHNESS } from './colebrook-friction-factor.ts';
-import { darcyFrictionFactor } from './darcy-friction-factor.ts';
+import { boreModel, type BoreModel } from './bore-model.ts';
+import { darcyFrictionFactor, type FrictionBridge } from './darcy-friction-factor.ts';
 import { flowRegime, type FlowRegime } from './flow-regime.ts';
 import { reynoldsNumber } from './reynolds-number.ts';
 import { valveFlowM3s } from './valve-flow-m3s.ts';
@@ -25,6 +26,10 @@ export interface SupplyFlowOptions {
   dischargeCoefficient?: number;
   /** tube wall roughness, m (>= 0, at most a tenth of the tube bore); default TUBE_ROUGHNESS_M (1.5 um) */
   roughnessM?: number;
+  /** length of the bore, m (>= 0): at least 3 bore diameters makes it a short tube (boreHeadM); default 0, a sharp orifice */
+  boreLengthM?: number;
+  /** friction between Re 2300 and 4000 (darcyFrictionFactor); default 'linear' */
+  bridge?: FrictionBridge;
 }
 
 export interface SupplyFlowResult {
@@ -37,6 +42,8 @@ export interface SupplyFlowResult {
   /** Reynolds number in the supply tube (0 at zero flow) */
   reynolds: number;
   regime: FlowRegime;
+  /** how the bore was modelled */
+  boreModel: BoreModel;
   /** Darcy friction factor in the tube; null at zero flow, where it is undefined */
   frictionFactor: number | null;
 }
@@ -45,7 +52,8 @@ export interface SupplyFlowResult {
  * Flow through a wide-open valve fed by one tube from a tank: the steady energy
  * balance from the tank surface to the free jet, solved for Q by bisection to 1e-10 (relative).
  *
- * Equation: H = (v_t^2 / 2g)(K_in + f l_t / d_t) + (Q / (C_d A_o))^2 / 2g,
+ * Equation: H = (v_t^2 / 2g)(K_in + f l_t / d_t) + h_bore(Q), h_bore the sharp orifice's (Q / (C_d A_o))^2 / 2g
+ * or, for a bore at least 3 diameters long, the short tube's (K_c + f l_o/d_o + 1) v_o^2 / 2g (boreHeadM),
  * v_t = 4 Q / (pi d_t^2), A_o = pi d_o^2 / 4, f = darcyFrictionFactor(Re, e/d_t).
  *
  * headM = 0 gives zero flow (reynolds 0, regime 'laminar', frictionFactor null).
@@ -77,8 +85,10 @@ export function supplyFlow(opts: SupplyFlowOptions): SupplyFlowResult {
     note: 'a tenth of tubeInnerDiameterM',
   });
 
+  const boreLengthM = checkRange('boreLengthM', opts.boreLengthM ?? 0, { min: 0 });
+  const bridge = opts.bridge ?? 'linear';
   const flowM3s = valveFlowM3s(
-    { headM, tubeInnerDiameterM, tubeLengthM, orificeM, densityKgM3, viscosityPaS, entranceLossK, dischargeCoefficient, roughnessM },
+    { headM, tubeInnerDiameterM, tubeLengthM, orificeM, densityKgM3, viscosityPaS, entranceLossK, dischargeCoefficient, roughnessM, boreLengthM, bridge },
     1e-10,
   );
   const reynolds = reynoldsNumber({ flowM3s, innerDiameterM: tubeInnerDiameterM, densityKgM3, viscosityPaS });
@@ -88,6 +98,7 @@ export function supplyFlow(opts: SupplyFlowOptions): SupplyFlowResult {
     tubeVelocityMS: (4 * flowM3s) / (Math.PI * tubeInnerDiameterM * tubeInnerDiameterM),
     reynolds,
     regime: flowRegime(reynolds),
-    frictionFactor: flowM3s > 0 ? darcyFrictionFactor(reynolds, roughnessM / tubeInnerDiameterM) : null,
+    boreModel: boreModel(boreLengthM, orificeM),
+    frictionFactor: flowM3s > 0 ? darcyFrictionFactor(reynolds, roughnessM / tubeInnerDiameterM, bridge) : null,
   };
 }

@@ -1,7 +1,7 @@
 import { STANDARD_GRAVITY, TUBE_ROUGHNESS_M } from '../constants.ts';
 import { checkRange } from './check-range.ts';
 import { MAX_RELATIVE_ROUGHNESS } from './colebrook-friction-factor.ts';
-import { darcyFrictionFactor } from './darcy-friction-factor.ts';
+import { darcyFrictionFactor, type FrictionBridge } from './darcy-friction-factor.ts';
 import { reynoldsNumber } from './reynolds-number.ts';
 
 export interface TubeHeadLossOptions {
@@ -19,6 +19,8 @@ export interface TubeHeadLossOptions {
   roughnessM?: number;
   /** sum of minor-loss coefficients on the tube velocity head (entrance, bends), dimensionless (>= 0); default 0 */
   minorLossK?: number;
+  /** friction between Re 2300 and 4000 (darcyFrictionFactor); default 'linear' */
+  bridge?: FrictionBridge;
 }
 
 /**
@@ -45,6 +47,6 @@ export function tubeHeadLossM(opts: TubeHeadLossOptions): number {
   const reynolds = reynoldsNumber({ flowM3s, innerDiameterM: d, densityKgM3: opts.densityKgM3, viscosityPaS: opts.viscosityPaS });
   if (flowM3s === 0) return 0;
   const velocityMS = (4 * flowM3s) / (Math.PI * d * d);
-  const f = darcyFrictionFactor(reynolds, roughnessM / d);
+  const f = darcyFrictionFactor(reynolds, roughnessM / d, opts.bridge);
   return ((minorLossK + (f * lengthM) / d) * velocityMS * velocityMS) / (2 * STANDARD_GRAVITY);
 }

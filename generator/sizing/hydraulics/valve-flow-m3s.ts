@@ -1,7 +1,9 @@
 import { STANDARD_GRAVITY } from '../constants.ts';
 import { bisectIncreasing } from './bisect-increasing.ts';
 import { illinoisIncreasing } from './illinois-increasing.ts';
-import { jetHeadM } from './jet-head-m.ts';
+import { boreHeadM } from './bore-head-m.ts';
+import { boreModel } from './bore-model.ts';
+import type { FrictionBridge } from './darcy-friction-factor.ts';
 import { tubeHeadLossM } from './tube-head-loss-m.ts';
 
 /** Everything the steady energy balance of one tube-and-orifice line needs; SI, already checked. */
@@ -17,12 +19,20 @@ export interface ValveLine {
   entranceLossK: number;
   dischargeCoefficient: number;
   roughnessM: number;
+  /** length of the bore, m: at least 3 bore diameters makes it a short tube (boreHeadM); 0 or absent, a sharp orifice */
+  boreLengthM?: number;
+  /** friction between Re 2300 and 4000 in tube and bore; default 'linear' */
+  bridge?: FrictionBridge;
+  /** head taken by a restriction past the bore (the gap between lip and pad), m, increasing in Q; absent, none */
+  gapHeadM?: (flowM3s: number) => number;
 }
 
 /**
  * Volume flow (m3/s) of one open line: the Q that solves
- * H = (K_in + f l_t/d_t) v_t^2/(2g) + (Q/(C_d A_o))^2/(2g)
- * by bisection (or the Illinois method) on [0, C_d A_o sqrt(2 g H)] (at the upper end the jet alone uses all of H).
+ * H = (K_in + f l_t/d_t) v_t^2/(2g) + h_bore(Q)
+ * with h_bore the sharp orifice's (Q/(C_d A_o))^2/(2g) or the short tube's (K_c + f l_o/d_o + 1) v_o^2/(2g)
+ * (boreHeadM), by bisection (or the Illinois method) on [0, C A_o sqrt(2 g H)], C = C_d for the orifice and 1
+ * for the short tube (whose loss coefficients sum to at least the exit's 1.0): at the upper end the bore alone uses all of H.
  * The right side increases with Q in every regime, so the root is unique.
  * Zero for H <= 0. Internal: callers check the inputs (supplyFlow, solveSupplyNetwork).
  * Source: steady energy equation with Darcy-Weisbach losses (White, Fluid Mechanics, ch. 3 and 6).
@@ -30,7 +40,9 @@ export interface ValveLine {
 export function valveFlowM3s(line: ValveLine, relativeTolerance: number, method: 'bisection' | 'illinois' = 'bisection'): number {
   if (!(line.headM > 0)) return 0;
   const orificeAreaM2 = 0.25 * Math.PI * line.orificeM * line.orificeM;
-  const upperM3s = line.dischargeCoefficient * orificeAreaM2 * Math.sqrt(2 * STANDARD_GRAVITY * line.headM);
+  const boreLengthM = line.boreLengthM ?? 0;
+  const c = boreModel(boreLengthM, line.orificeM) === 'short-tube' ? 1 : line.dischargeCoefficient;
+  const upperM3s = c * orificeAreaM2 * Math.sqrt(2 * STANDARD_GRAVITY * line.headM);
   const residual = (flowM3s: number): number =>
     tubeHeadLossM({
       flowM3s,
@@ -40,8 +52,20 @@ export function valveFlowM3s(line: ValveLine, relativeTolerance: number, method:
       viscosityPaS: line.viscosityPaS,
       roughnessM: line.roughnessM,
       minorLossK: line.entranceLossK,
+      bridge: line.bridge,
     }) +
-    jetHeadM({ flowM3s, orificeM: line.orificeM, dischargeCoefficient: line.dischargeCoefficient }) -
+    boreHeadM({
+      flowM3s,
+      boreM: line.orificeM,
+      boreLengthM,
+      tubeInnerDiameterM: line.tubeInnerDiameterM,
+      densityKgM3: line.densityKgM3,
+      viscosityPaS: line.viscosityPaS,
+      dischargeCoefficient: line.dischargeCoefficient,
+      roughnessM: line.roughnessM,
+      bridge: line.bridge,
+    }) +
+    (line.gapHeadM ? line.gapHeadM(flowM3s) : 0) -
     line.headM;
   const solve = method === 'illinois' ? illinoisIncreasing : bisectIncreasing;
   return solve(residual, 0, upperM3s, relativeTolerance).root;
