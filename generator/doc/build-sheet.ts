@@ -201,7 +201,7 @@ function sheetContent(s: SizingSuccess, doc: NormalizedDoc, files: BuildSheetFil
     s.holdDown.neededN > 0
       ? `Stand the housing on the container floor and hold it down: ${f1(s.holdDown.ballastSteelG)} g of steel on the foot, or pins or screws through the anchor holes.`
       : 'Stand the housing on the container floor (anchor it if you like).',
-    `Open the supply. The level should settle near ${f1(s.levels.shutOffAtHeadMaxMm)} mm with the tank full and ${f1(s.levels.shutOffAtHeadMinMm)} mm when it runs low. Check for drips at the nozzle with the tank full.`,
+    `Open the supply. The valve starts to close at ${f1(s.levels.throttleStartMm)} mm and closes gradually: while the plants drink ${f1(s.inputs.demandLpd)} L a day the level holds near ${f1(s.levels.heldAtDemandMm)} mm with the tank full (${f1(s.levels.heldAtDemandLowTankMm)} mm when it runs low). With no one drinking it shuts tight at ${f1(s.levels.shutOffAtHeadMaxMm)} mm (${f1(s.levels.shutOffAtHeadMinMm)} mm at low tank), the highest it rises. Check for drips at the nozzle with the tank full.`,
   ];
 
   const standSteps = files.withTestStand ? standTestSteps(s) : [];

@@ -28,7 +28,7 @@ export function fixed(value: number | null | undefined, decimals: number): strin
 
 const row = (label: string, value: string, unit = ''): Row => ({ label, value, unit });
 
-/** The result as titled sections of rows (closing force, float, housing, nozzle, pin, levels, flow, drain, hold-down, tilt, mass). */
+/** The result as titled sections of rows (closing force, float, housing, nozzle, pin, levels, the level held in use, flow, drain, hold-down, tilt, mass). */
 export function sizingSections(result: SizingSuccess): Section[] {
   const { closingForce: cf, pressure, float: fl, seal, housing, nozzle, pin, levels, flow, drain, vents, holdDown, tilt, mass } = result;
   const headMaxM = result.inputs.headMaxM;
@@ -107,9 +107,32 @@ export function sizingSections(result: SizingSuccess): Section[] {
       ],
     },
     {
+      title: 'The level it holds in use (water depth; full tank / low tank)',
+      rows: [
+        row('throttling starts (pad first touches the lip)', `${fixed(levels.throttleStartMm, 1)} / ${fixed(levels.lowTank.throttleStartMm, 1)}`, 'mm'),
+        row('flow down to half', `${fixed(levels.flow50Mm, 1)} / ${fixed(levels.lowTank.flow50Mm, 1)}`, 'mm'),
+        row('flow down to a tenth', `${fixed(levels.flow10Mm, 1)} / ${fixed(levels.lowTank.flow10Mm, 1)}`, 'mm'),
+        row('flow down to a hundredth', `${fixed(levels.flow1Mm, 1)} / ${fixed(levels.lowTank.flow1Mm, 1)}`, 'mm'),
+        row(`held while the plants drink ${fixed(result.inputs.demandLpd, 1)} L/day`, `${fixed(levels.heldAtDemandMm, 1)} / ${fixed(levels.heldAtDemandLowTankMm, 1)}`, 'mm'),
+        row('tight shut-off (the highest it rises)', `${fixed(levels.shutOffAtHeadMaxMm, 1)} / ${fixed(levels.shutOffAtHeadMinMm, 1)}`, 'mm'),
+        ...(result.fill.timeToHeldMin === null || result.fill.fromLevelMm === null || result.fill.toLevelMm === null
+          ? []
+          : [row(
+              `fill ${fixed(result.fill.fromLevelMm, 1)} to ${fixed(result.fill.toLevelMm, 1)} mm, plants drinking (slow end)`,
+              fixed(result.fill.timeToHeldMin, 0),
+              'min',
+            )]),
+      ],
+    },
+    {
       title: 'Flow with the valve wide open',
       rows: [
         row(`at highest head (Re ${fixed(flow.reynoldsAtHeadMax, 0)}, ${flow.regimeAtHeadMax})`, fixed(flow.atHeadMaxLph, 1), 'L/h'),
+        row('at highest head, likely range (bore printed 0.2 mm small to as drawn)', `${fixed(flow.atHeadMaxLowLph, 1)} to ${fixed(flow.atHeadMaxHighLph, 1)}`, 'L/h'),
+        row(
+          `bore ${fixed(nozzle.orificeMm, 2)} mm through ${fixed(flow.boreLengthMm, 1)} mm taken as`,
+          flow.boreModel === 'short-tube' ? 'a short tube' : 'a sharp orifice',
+        ),
         row(`at lowest head (Re ${fixed(flow.reynoldsAtHeadMin, 0)})`, fixed(flow.atHeadMinLph, 1), 'L/h'),
         ...fill(flow.fillTimeAtHeadMaxMin).map((m) => row('time to fill the reservoir rise, highest head', fixed(m, 1), 'min')),
         ...fill(flow.fillTimeAtHeadMinMin).map((m) => row('time to fill the reservoir rise, lowest head', fixed(m, 1), 'min')),
@@ -118,7 +141,7 @@ export function sizingSections(result: SizingSuccess): Section[] {
     {
       title: 'Drain and vents',
       rows: [
-        row('drain area needed', fixed(drain.requiredAreaMm2, 1), 'mm2'),
+        row('drain area needed (at the high end of the flow)', fixed(drain.requiredAreaMm2, 1), 'mm2'),
         row(`drain area provided (${drain.notchCount} notches)`, fixed(drain.providedAreaMm2, 1), 'mm2'),
         row(`vents (${vents.count} x ${fixed(vents.diameterMm, 1)} mm)`, fixed(vents.areaMm2, 1), 'mm2'),
       ],

@@ -98,6 +98,7 @@ function works(inp: DesignInputs): boolean {
   try {
     const b = designBasis(inp);
     if (nozzleProblems(b).reasons.length || padOnStop(b)) return false;
+    if (inp.demandM3s > flowAt(b, inp.headMinM).flowM3s) return false;
     const q = flowAt(b, inp.headMaxM, 'high');
     return searchSize(b, drainAreaRequiredM2({ flowM3s: q.flowM3s }) * 1e6).best !== null;
   } catch {
@@ -282,6 +283,8 @@ export function sizeDesign(inp: DesignInputs): SizingResult {
   const rho = inp.liquidDensityKgM3;
   const qMax = flowAt(b, inp.headMaxM);
   const qMin = flowAt(b, inp.headMinM);
+  // the plants must not drink more than the valve gives wide open at the lowest tank level (no float changes that)
+  if (inp.demandM3s > qMin.flowM3s) return demandFailure(inp, qMin.flowLph);
   const qMaxLow = flowAt(b, inp.headMaxM, 'low');
   const qMaxHigh = flowAt(b, inp.headMaxM, 'high');
   // DESIGN second part: drains sized on the high end of the flow band
@@ -298,7 +301,6 @@ export function sizeDesign(inp: DesignInputs): SizingResult {
   const shutOffMin = c.sealBottomMm + depthAt(b.forceAtHeadMinN);
   if (inp.overflowM !== null && shutOffMax > (inp.overflowM - OVERFLOW_MARGIN_M) * 1e3 + 1e-9) return overflowFailure(inp, shutOffMax);
   const throttle = throttleReport(b, c, qMax.flowLph, qMin.flowLph);
-  if (throttle.demandLph > throttle.headMin.openLph) return demandFailure(inp, throttle.headMin.openLph);
 
   // The pad in service (DESIGN second part): with the tank empty and the reservoir full the float's whole
   // push F_seal(H_max) bears on the land; flooded, its whole lift F_avail. The stop caps the strain at 25 %.

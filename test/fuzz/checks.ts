@@ -135,13 +135,25 @@ export function checkSized(inp: DesignInputs, s: SizingSuccess): string[] {
   expect(s.housing.boreMm - s.float.outerDiameterMm >= 2 * RADIAL_GAP_MM - 1e-9, `bore ${s.housing.boreMm} vs float ${s.float.outerDiameterMm}: radial gap under ${RADIAL_GAP_MM} mm`);
   expect(s.parts.mount.floatRestZMm >= s.parts.mount.pinTopZMm - 1e-9, 'float rests below the pin top');
 
-  // drain (orifice equation) and vents
-  const q = s.flow.atHeadMaxLph / 3.6e6;
+  // drain (orifice equation, on the high end of the flow band) and vents
+  const q = s.flow.atHeadMaxHighLph / 3.6e6;
   const need = (q / (C_D * Math.sqrt(2 * G * DRAIN_DH_M))) * 1e6;
   expect(Math.abs(s.drain.requiredAreaMm2 - need) <= 1e-6 * Math.max(1, need), `drain required ${s.drain.requiredAreaMm2} vs orifice equation ${need}`);
   expect(s.drain.providedAreaMm2 >= need * (1 - 1e-9), `drain provided ${s.drain.providedAreaMm2} mm2 < required ${need} mm2`);
   expect(s.vents.count >= 2 && s.vents.diameterMm >= 3, `vents ${s.vents.count} x ${s.vents.diameterMm} mm`);
   expect(s.flow.atHeadMaxLph > 0 && s.flow.atHeadMinLph > 0 && s.flow.atHeadMinLph <= s.flow.atHeadMaxLph * (1 + 1e-9), `flows ${s.flow.atHeadMinLph} / ${s.flow.atHeadMaxLph} L/h`);
+
+  // the characteristic: level never falling, flow never rising, zero at the tight shut-off (the float can only
+  // push harder as the water rises: Archimedes); the level held at the demand between the first point and the shut-off
+  for (const [pts, shut] of [[s.characteristic.headMax, L.shutOffAtHeadMaxMm], [s.characteristic.headMin, L.shutOffAtHeadMinMm]] as const) {
+    expect(pts.length >= 20, `characteristic of ${pts.length} points`);
+    for (let k = 1; k < pts.length; k++) {
+      expect(pts[k]!.levelMm >= pts[k - 1]!.levelMm && pts[k]!.flowLph <= pts[k - 1]!.flowLph, `characteristic not monotone at point ${k}`);
+    }
+    expect(pts.at(-1)!.flowLph === 0 && Math.abs(pts.at(-1)!.levelMm - shut) <= 2e-3, `characteristic ends at ${pts.at(-1)!.levelMm} mm, ${pts.at(-1)!.flowLph} L/h; shut-off ${shut}`);
+  }
+  expect(L.heldAtDemandMm <= L.shutOffAtHeadMaxMm + 1e-9 && L.heldAtDemandLowTankMm <= L.shutOffAtHeadMinMm + 1e-9, `level held ${L.heldAtDemandMm} / ${L.heldAtDemandLowTankMm} above the shut-off`);
+  expect(s.flow.atHeadMaxLowLph <= s.flow.atHeadMaxLph * (1 + 1e-9) && s.flow.atHeadMaxLph <= s.flow.atHeadMaxHighLph * (1 + 1e-9), `flow band ${s.flow.atHeadMaxLowLph} / ${s.flow.atHeadMaxLph} / ${s.flow.atHeadMaxHighLph}`);
 
   // walls: housing wall as asked; float shell three lines (DESIGN "Solids")
   expect(Math.abs(s.housing.wallMm - inp.wallM * 1e3) <= 1e-9, `housing wall ${s.housing.wallMm} vs ${inp.wallM * 1e3}`);

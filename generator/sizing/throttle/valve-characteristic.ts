@@ -66,7 +66,9 @@ const CONTACT_POINTS = 12;
  * Source: float force balance (Archimedes) with the gap's film and curtain laws (gapFlow).
  */
 export function valveCharacteristic(o: CharacteristicOptions): Characteristic {
-  const depth = (forceN: number) => depthForForceMm(o.float, Math.max(0, forceN), o.floatMassKg, o.line.densityKgM3);
+  // The push never counts above the tight seal's force: a bench fit (or the gasket form) below the film's
+  // p A_film says the pad holds with less, and the float is only sized to give that (with its reserve).
+  const depth = (forceN: number) => depthForForceMm(o.float, Math.min(Math.max(0, forceN), o.sealForceN), o.floatMassKg, o.line.densityKgM3);
   const hc = CONTACT_GAP_M;
   const travelM = Math.max(hc * 2, (o.touchBottomMm - o.restBottomMm) * 1e-3 + hc);
   const raw: CharacteristicPoint[] = [];
@@ -75,9 +77,9 @@ export function valveCharacteristic(o: CharacteristicOptions): Characteristic {
     const g = gapFlow(o.line, o.lip, h);
     raw.push({ levelMm: o.touchBottomMm - (h - hc) * 1e3 + depth(g.forceN), flowLph: g.flowM3s * 3.6e6 });
   }
-  const contactForceN = gapFlow(o.line, o.lip, hc).forceN;
+  const contactForceN = Math.min(gapFlow(o.line, o.lip, hc).forceN, o.sealForceN);
   const contactMm = raw[raw.length - 1]!.levelMm;
-  const sealN = Math.max(o.sealForceN, contactForceN);
+  const sealN = o.sealForceN;
   for (let i = 1; i <= CONTACT_POINTS; i++) {
     const s = i / CONTACT_POINTS;
     const forceN = contactForceN + s * (sealN - contactForceN);
