@@ -26,7 +26,7 @@ export interface LeverFrameOptions {
  * deck sits over the nozzle exactly as the direct valve's housing deck: its
  * underside the nozzle's protrusion plus the boss above the tip; it reaches a
  * wall past the boss, and is at least a wall wider than the boss each side. On
- * the floor the cheeks stand on the floor, with anchor wings an anchor hole and
+ * the floor the cheeks stand on the floor, with anchor wings an anchor slot and
  * two walls wide; on the rim they stop a wall under the pin hole's point (or under
  * the lower stem hole's, if lower), and the back wall carries the stem's pilot
  * holes, the upper one a clearance hole's radius and a wall under the deck's top,

@@ -44,7 +44,7 @@ export interface LeverArmSpec {
  * the pivot, a deck over the arm from the back wall to past the nozzle, with the
  * nozzle seat and its boss as in the direct valve's housing. On the floor the
  * cheeks stand on anchor wings (a plate each side and one behind, each with an
- * anchor hole, carried by 50-degree wedges so that they print deck down without
+ * anchor slot open to its edge, carried by 50-degree wedges so that they print deck down without
  * support); on the rim the back wall takes the stem's two screws.
  */
 export interface LeverFrameSpec {
@@ -70,7 +70,7 @@ export interface LeverFrameSpec {
   seatBoreMm: number;
   bossOuterDiameterMm: number;
   bossHeightMm: number;
-  /** floor: anchor wings wingMm wide, plate footThicknessMm, wedge wingMm tan(50deg) tall, anchor holes anchorDiameterMm; 0 on the rim */
+  /** floor: anchor wings wingMm wide, plate footThicknessMm, wedge wingMm tan(50deg) tall, anchor slots anchorDiameterMm wide, open to the wings' edges; 0 on the rim */
   wingMm: number;
   footThicknessMm: number;
   anchorDiameterMm: number;

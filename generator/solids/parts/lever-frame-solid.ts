@@ -8,7 +8,7 @@
  * Body: one manifold-3d union of prisms (cheeks, back wall, deck, boss, wings
  * with their wedges; each overlaps its neighbour a little so nothing joins
  * face to face only). Cuts, in one subtraction: the nozzle seat through boss
- * and deck, the pin hole across both cheeks, the anchor holes through the wings
+ * and deck, the pin hole across both cheeks, the anchor slots through the wings
  * (floor) or the stem's pilot holes through the back wall (rim). Holes are drawn
  * with their flats on the nominal circle (holePolygonRadiusMm).
  */

@@ -2,8 +2,7 @@
  * Outline of a horizontal hole that prints without support, with a roof of any
  * pitch: a circle of radius r under two straight sides that rise at
  * roofAngleDeg from the bed, tangent to the circle at polar angles
- * (90 - alpha) and (90 + alpha) degrees, and
- * meeting at the tip (0, r / cos(alpha)) on +y. The arc below the tangent points
+ * (90 - alpha) and (90 + alpha) degrees, and meeting at the tip (0, r / cos(alpha)) on +y. The arc below the tangent points
  * keeps the circle's own vertices (angles 2 pi k / N from +x). At 45 degrees
  * this is teardrop2d's outline; the lever's parts use 50 (DESIGN second part:
  * every self-supporting face at least 50 degrees from the bed).
