@@ -84,9 +84,9 @@ describe('pivot pin (the retainer pin builder, spanning the frame)', () => {
 describe('rim hanger and slotted stem', () => {
   const rim = bucket.rim!;
   for (const quality of ['preview', 'export'] as const) {
-    it(`${quality}: hanger closed with two pilot holes, stem closed with a slot and two holes; no overhang past 50 degrees`, async () => {
+    it(`${quality}: hanger closed with three pilot holes, stem closed with a slot and two holes; no overhang past 50 degrees`, async () => {
       const hanger = await buildRimHangerMesh(rim, quality);
-      checkClosed(hanger, 'hanger', 2);
+      checkClosed(hanger, 'hanger', 3);
       checkOverhangs(hanger, 'hanger');
       const stem = await buildSlottedStemMesh(rim, quality);
       checkClosed(stem, 'stem', 3);

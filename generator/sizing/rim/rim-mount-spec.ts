@@ -17,7 +17,9 @@ export interface RimMountOptions {
  * Rim mount, mm. Mounted frame: x = 0 the wall's inner face, x > 0 inside the
  * container, z up from the floor. The hanger is an upside-down U over the wall
  * (a gap of the wall plus one print clearance each side); its inner leg carries
- * two pilot holes one pitch apart (M3 screws cut their own thread in them). The stem, a flat bar against the inner leg,
+ * two pilot holes one pitch apart (M3 screws cut their own thread in them); a
+ * third through the outer leg takes a clamp screw that presses the wall, so the
+ * float's lift in a flood cannot raise the hanger off the rim. The stem, a flat bar against the inner leg,
  * has a slot over those screws (slide it up or down by adjustMm either way, then
  * tighten) and two holes at its foot one pitch apart for the valve's back plate.
  */
@@ -38,6 +40,8 @@ export interface RimMountSpec {
     /** underside of the bridge over the wall, and the upper screw hole's centre, mm above the floor */
     bridgeBottomZMm: number;
     upperHoleZMm: number;
+    /** a clamp screw through the middle of the outer leg presses the wall, so a flood cannot lift the hanger off (pilot hole) */
+    clampHoleZMm: number;
   };
   stem: {
     widthMm: number;
@@ -99,6 +103,7 @@ export function rimMountSpec(o: RimMountOptions): RimMountSpec {
       outerLegLengthMm: RIM_OUTER_LEG_MM,
       bridgeBottomZMm: bridgeBottom,
       upperHoleZMm: upperHole,
+      clampHoleZMm: bridgeBottom - RIM_OUTER_LEG_MM / 2,
     },
     stem: {
       widthMm: width,

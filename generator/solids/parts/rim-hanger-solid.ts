@@ -5,8 +5,8 @@
  *
  * Print frame: x = mounted x (0 at the wall's inner face, the inner leg at
  * x > 0), y = mounted z less the bridge's underside, z = along the rim. The two
- * pilot holes cross the inner leg along x; their pointed roofs (pointedHole2d at
- * 50 degrees) face up. One manifold-3d subtraction.
+ * pilot holes cross the inner leg along x, the clamp screw's the outer leg; their
+ * pointed roofs (pointedHole2d at 50 degrees) face up. One manifold-3d subtraction.
  */
 import { holePolygonRadiusMm, jscad, loadManifold, manifoldToMesh, segmentsFor, subtractAll, type IndexedMesh, type Quality } from '../mesh/index.ts';
 import { PRINT_CLEARANCE_MM } from '../../sizing/constants.ts';
@@ -50,6 +50,16 @@ export async function buildRimHangerMesh(r: RimMountSpec, quality: Quality): Pro
     jscad.transforms.transform(
       asMat4(fromRows([0, 0, 1], [1, 0, 0], [0, 1, 0], [PRINT_CLEARANCE_MM - OVERRUN_MM, h.upperHoleZMm - h.bridgeBottomZMm - drop, h.widthMm / 2])),
       drill,
+    ),
+  );
+  // the clamp screw's pilot hole through the outer leg, stopping short of the inner leg across the gap
+  const outerFace = PRINT_CLEARANCE_MM - h.gapMm;
+  const inward = Math.min(OVERRUN_MM, h.gapMm / 2);
+  const clampDrill = jscad.extrusions.extrudeLinear({ height: h.legMm + OVERRUN_MM + inward }, outline);
+  cutters.push(
+    jscad.transforms.transform(
+      asMat4(fromRows([0, 0, 1], [1, 0, 0], [0, 1, 0], [outerFace - h.legMm - OVERRUN_MM, h.clampHoleZMm - h.bridgeBottomZMm, h.widthMm / 2])),
+      clampDrill,
     ),
   );
   return manifoldToMesh(subtractAll(wasm, body, cutters), { dispose: true });
