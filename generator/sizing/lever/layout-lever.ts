@@ -131,6 +131,8 @@ export function layoutLever(lb: LeverBasis, o: LeverLayoutOptions): LeverCandida
     wallMm: inp.wallM * 1e3,
     deckThicknessMm: b.deckThicknessMm,
     bossHeightMm: b.bossHeightMm,
+    indentationMm: delta,
+    padStopIndentationMm: lb.padStopIndentationMm,
   });
   // rest: the arm turns nose down until its heel meets the back wall (armStopTurnRad), or until the float's
   // far bottom corner meets the floor (on the rim: the floor less the adjustment), whichever first; the pad
@@ -218,6 +220,8 @@ export function layoutLever(lb: LeverBasis, o: LeverLayoutOptions): LeverCandida
     violations.push('part-size');
   }
   if (rim && (rim.tooLow || frame.cheekBottomZMm < RIM_ADJUST_MM)) violations.push('rim-height');
+  // the stop must leave the tight seal free: it may only take the push past the seal's indentation
+  if (!(lb.padStopIndentationMm > delta)) violations.push('pad-stop');
 
   return {
     mount: o.mount,

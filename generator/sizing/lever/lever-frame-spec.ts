@@ -16,7 +16,13 @@ export interface LeverFrameOptions {
   wallMm: number;
   deckThicknessMm: number;
   bossHeightMm: number;
+  /** pad indentation at the tight seal and at the hard stop, mm */
+  indentationMm: number;
+  padStopIndentationMm: number;
 }
+
+/** Length of the stop block along the arm, mm (common practice: a few lines of plastic). */
+export const STOP_LENGTH_MM = 3;
 
 /**
  * The frame around the arm (LeverFrameSpec). The cheeks stand a print clearance
@@ -30,7 +36,8 @@ export interface LeverFrameOptions {
  * two walls wide; on the rim they stop a wall under the pin hole's point (or under
  * the lower stem hole's, if lower), and the back wall carries the stem's pilot
  * holes, the upper one a clearance hole's radius and a wall under the deck's top,
- * where the stem's valve holes are (rimMountSpec).
+ * where the stem's valve holes are (rimMountSpec). The pad's hard stop hangs
+ * from the deck's front edge, past the boss and the nozzle's shoulder.
  */
 export function leverFrameSpec(o: LeverFrameOptions): LeverFrameSpec {
   const c = PRINT_CLEARANCE_MM;
@@ -44,6 +51,13 @@ export function leverFrameSpec(o: LeverFrameOptions): LeverFrameSpec {
   const deckBottom = o.tipZMm + o.nozzle.protrusionMm + o.bossHeightMm;
   const top = deckBottom + o.deckThicknessMm;
   const floor = o.mount === 'floor';
+  // hard stop: a block under the deck's front edge, sunk half a millimetre into the boss (so they join, not touch)
+  // and clear of the nozzle's shoulder by a clearance; the arm turns up by (stop - seal indentation) / a_pad
+  // past the seal before its top meets the block's far edge
+  const stopStart = a.padArmMm + Math.max(bossOuter / 2 - 0.5, o.nozzle.shoulderDiameterMm / 2 + c);
+  const deckFront = Math.max(a.padArmMm + bossOuter / 2 + t, stopStart + STOP_LENGTH_MM);
+  const armTop = o.pivotZMm + a.holeCentreDepthMm;
+  const stopGap = ((o.padStopIndentationMm - o.indentationMm) * deckFront) / a.padArmMm;
   const stemUpper = top - (ANCHOR_DIAMETER_MM / 2 + t);
   // on the rim: a wall under the pin hole's point, and under the lower stem hole's
   const cheekBottom = floor
@@ -64,7 +78,7 @@ export function leverFrameSpec(o: LeverFrameOptions): LeverFrameSpec {
     pinHoleDiameterMm: a.holeDiameterMm,
     holeRoofAngleDeg: SELF_SUPPORT_ANGLE_DEG,
     padArmMm: a.padArmMm,
-    deckFrontXMm: a.padArmMm + bossOuter / 2 + t,
+    deckFrontXMm: deckFront,
     deckWidthMm: Math.max(width, bossOuter + 2 * t),
     deckBottomZMm: deckBottom,
     deckThicknessMm: o.deckThicknessMm,
@@ -77,6 +91,9 @@ export function leverFrameSpec(o: LeverFrameOptions): LeverFrameSpec {
     stemPilotDiameterMm: RIM_PILOT_HOLE_MM,
     stemPitchMm: RIM_SCREW_PITCH_MM,
     stemUpperHoleZMm: stemUpper,
+    stopLengthMm: deckFront - stopStart,
+    stopWidthMm: a.barWidthMm - 1,
+    stopBottomZMm: armTop + stopGap,
     footBackXMm: -post - t - wing,
     footWidthMm: width + 2 * wing,
     heightMm: top - cheekBottom,

@@ -8,6 +8,7 @@ import type { LeverFrameSpec } from './lever-types.ts';
  * - cheeks: 2 x wall x post length x (deck underside - cheek bottom), less the two pointed pin holes;
  * - back wall: wall x width x the same height;
  * - deck: (front - back) x width x thickness, less the seat bore; boss: ring of its height;
+ * - the pad's hard stop: a block from the deck's underside down to its face;
  * - floor: wings (two along the cheeks and back wall, one across the back) as
  *   plates a x length x thickness plus 50-degree wedges a x a tan(50deg) / 2 x
  *   length, less three anchor slots open to the wing's edge (a half disc about the
@@ -40,5 +41,6 @@ export function leverFrameVolumeMm3(f: LeverFrameSpec): number {
   } else {
     base = -2 * t * pointedHoleAreaMm2(f.stemPilotDiameterMm / 2, f.holeRoofAngleDeg);
   }
-  return cheeks + back + deck + boss + base;
+  const stop = f.stopLengthMm * f.stopWidthMm * (f.deckBottomZMm - f.stopBottomZMm);
+  return cheeks + back + deck + boss + stop + base;
 }

@@ -78,6 +78,14 @@ export interface LeverFrameSpec {
   stemPilotDiameterMm: number;
   stemPitchMm: number;
   stemUpperHoleZMm: number;
+  /**
+   * the pad's hard stop: a block hanging from the deck's front edge over the arm (x from stopFrontXMm - stopLengthMm
+   * to stopFrontXMm = deckFrontXMm, stopWidthMm across), its face stopBottomZMm above the floor; the arm's top
+   * meets it when the pad is indented padStopIndentationMm
+   */
+  stopLengthMm: number;
+  stopWidthMm: number;
+  stopBottomZMm: number;
   /** the plan's back edge (wings or back wall) and its width there */
   footBackXMm: number;
   footWidthMm: number;
@@ -96,6 +104,8 @@ export interface LeverBasis {
   sealForceN: (headM: number) => number;
   /** pad indentation at the tight seal, mm (DesignBasis.indentationMm once the seal model lands) */
   indentationMm: number;
+  /** indentation at which a hard stop takes the float's further push, mm (DesignBasis.padStopIndentationMm once it lands; until then 25 % of the pad) */
+  padStopIndentationMm: number;
 }
 
 /** One laid-out lever valve and what it fails, if anything. */
@@ -167,4 +177,5 @@ export type LeverConstraint =
   | 'pad-arc'
   | 'outer-diameter-limit'
   | 'part-size'
-  | 'rim-height';
+  | 'rim-height'
+  | 'pad-stop';

@@ -5,7 +5,8 @@
  * pin holes' pointed roofs (50 degrees, pointedHole2d) face up, and on the floor
  * mount the anchor wings are the top of the print, carried by 50-degree wedges.
  *
- * Body: one manifold-3d union of prisms (cheeks, back wall, deck, boss, wings
+ * Body: one manifold-3d union of prisms (cheeks, back wall, deck, boss, the
+ * pad's hard stop hanging from the deck's front edge, wings
  * with their wedges; each overlaps its neighbour a little so nothing joins
  * face to face only). Cuts, in one subtraction: the nozzle seat through boss
  * and deck, the pin hole across both cheeks, the anchor slots through the wings
@@ -88,6 +89,8 @@ export async function buildLeverFrameMountedMesh(f: LeverFrameSpec, quality: Qua
     box(back, -post, -w, w, f.cheekBottomZMm, f.deckBottomZMm + OVERLAP_MM),
     box(back, f.deckFrontXMm, -f.deckWidthMm / 2, f.deckWidthMm / 2, f.deckBottomZMm, top),
   ];
+  // the pad's hard stop under the deck's front edge (into the deck by the overlap)
+  pieces.push(box(f.deckFrontXMm - f.stopLengthMm, f.deckFrontXMm, -f.stopWidthMm / 2, f.stopWidthMm / 2, f.stopBottomZMm, f.deckBottomZMm + OVERLAP_MM));
   const rb = f.bossOuterDiameterMm / 2;
   pieces.push(prism(circlePoints(rb, segmentsFor(rb, quality)), f.bossHeightMm + OVERLAP_MM, translation(f.padArmMm, 0, f.deckBottomZMm - f.bossHeightMm)));
   const cutters: Geom3[] = [];
