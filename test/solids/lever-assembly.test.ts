@@ -51,7 +51,8 @@ for (const [name, headM, levelM, mount] of [
   describe(`lever assembly: ${name}`, () => {
     const c = demoLever(headM, levelM, mount);
     const armTop = c.floatBottomZMm + c.float.heightMm + c.arm.barDepthMm;
-    const delta = designBasis(demoLeverInputs(headM, levelM)).indentationMm; // the pad's squeeze at the tight seal (seal model)
+    const basis = designBasis(demoLeverInputs(headM, levelM));
+    const delta = basis.indentationMm; // the pad's squeeze at the tight seal (seal model)
     const restTheta = Math.asin((c.restTravelMm + delta) / c.arm.padArmMm);
 
     it('no part overlaps another at the seal or at rest; the float stays off the floor at rest', async () => {
@@ -75,9 +76,10 @@ for (const [name, headM, levelM, mount] of [
       const stop = armStopTurnRad(-c.arm.tailXMm, c.arm.eyeDepthMm - c.arm.holeCentreDepthMm, c.frame.postHalfLengthMm);
       expect(overlapMm3(transformMesh(armMounted, aboutPivot(c, stop)), frame), 'arm at the stop').toBeLessThan(1e-3);
       expect(overlapMm3(transformMesh(armMounted, aboutPivot(c, stop + 0.05)), frame), 'arm past the stop').toBeGreaterThan(0.01);
-      // the pad's hard stop: turned up past the seal until the pad is indented 25 % of its 3 mm (0.75 mm; common
-      // practice against compression set), the arm's top just meets the stop block; a tenth further it would be in it
-      const up = (0.75 - delta) / c.arm.padArmMm;
+      // the pad's hard stop: turned up past the seal until the pad is indented to the stop (25 % of its thickness;
+      // common practice against compression set), the arm's top just meets the stop block; a tenth further it would be in it
+      expect(basis.padStopIndentationMm).toBeCloseTo(0.25 * 3, 9);
+      const up = (basis.padStopIndentationMm - delta) / c.arm.padArmMm;
       expect(overlapMm3(transformMesh(armMounted, aboutPivot(c, -0.98 * up)), frame), 'arm short of the pad stop').toBeLessThan(1e-3);
       expect(overlapMm3(transformMesh(armMounted, aboutPivot(c, -1.1 * up)), frame), 'arm past the pad stop').toBeGreaterThan(0.01);
       // the tongue sits in the float's socket with a clearance, the bar on the plateau: touching, not overlapping
