@@ -47,6 +47,27 @@ describe('regressions found by the fuzzing', () => {
   });
 });
 
+describe('regressions found by the build property (build.property.test.ts)', () => {
+  it('a wide lip on fine lines: the guide\'s stop ring clears the pad (was: 0.0385 mm3 of housing in the pad at seal, FUZZ_SEED=1356777560)', () => {
+    // 7.1 mm lip, 0.2 mm lines: the nozzle's shoulder (10.9 mm) is narrower than the pad (11.5 mm), which stands proud
+    // of the float into the stop ring's height at seal; the ring's bore must clear the wider of the two (plain geometry)
+    const parsed = parseDesign({
+      supply: { headMax: '0.58 m', tubeLength: '0 m' },
+      level: { target: '25 mm' },
+      nozzle: { orifice: '2 mm', sealDiameter: '7.0967 mm' },
+      print: { material: 'nylon 12', lineWidth: '0.2 mm' },
+      reserve: 3,
+    });
+    expect(parsed.ok).toBe(true);
+    if (!parsed.ok) return;
+    const s = sizeDesign(parsed.inputs);
+    expect(s.ok).toBe(true);
+    if (!s.ok) return;
+    expect(s.parts.housing.guide.stopBoreMm).toBeGreaterThanOrEqual(s.parts.float.padDiameterMm + 2 * 0.25);
+    expect(s.parts.housing.guide.stopBoreMm).toBeGreaterThanOrEqual(s.parts.nozzle.shoulderDiameterMm + 2 * 0.25);
+  });
+});
+
 describe('regressions found by the rejection properties (one field junk or out of range)', () => {
   it('"1e308 m" for a millimetre field is refused (was: accepted, as Infinity mm slipped past the range check)', () => {
     const parsed = parseDesign({ supply: { headMax: '2 m', tubeInnerDiameter: '1e308 m' }, level: { target: '40 mm' } });

@@ -107,7 +107,9 @@ export function designBasis(inp: DesignInputs): DesignBasis {
   const minimumTravel = Math.max((inp.orificeM * 1e3) / 2, 1.5);
   const preferredTravel = Math.max(2 * minimumTravel, 4);
   const stopGap = Math.max(0, stopMm - indentationMm);
-  const stopInner = nozzle.shoulderDiameterMm / 2 + PRINT_CLEARANCE_MM;
+  // the stop ring clears the nozzle's shoulder and the pad standing proud of the float (a wide lip on fine lines
+  // makes the pad the wider of the two)
+  const stopInner = Math.max(nozzle.shoulderDiameterMm, padDiameter) / 2 + PRINT_CLEARANCE_MM;
   return {
     inputs: inp,
     sealAreaM2: seal.modelAreaM2,
