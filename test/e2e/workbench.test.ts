@@ -135,6 +135,13 @@ describe.skipIf(!haveChromium)('workbench in Chromium', () => {
     expect(diameter).toBeGreaterThan(45);
     expect(diameter).toBeLessThan(65);
     expect(await page.locator('[data-result="plot-held-full"]').textContent()).toBe('45.0 mm');
+    // issue 10: the flow plot and the band in words, the figures the results list shows
+    const held = await page.locator('[data-result="held-demand-full"]').textContent();
+    expect(held).toMatch(/^\d+\.\d mm$/);
+    expect(Number.parseFloat(held!)).toBeLessThan(45); // held at a demand: below the tight shut-off (common practice of throttling valves)
+    expect(await page.locator('fw-flow-plot path.full').count()).toBe(1);
+    expect(await page.locator('fw-flow-plot figcaption').textContent()).toContain(held!);
+    expect(await page.locator('[data-result="band-words"]').textContent()).toContain(held!);
     await shot('02-sized');
   });
 

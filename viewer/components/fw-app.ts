@@ -20,6 +20,7 @@ import { shared } from './shared-styles.ts';
 import './fw-design-form.ts';
 import './fw-results.ts';
 import './fw-push-plot.ts';
+import './fw-flow-plot.ts';
 // three.js (most of the page's code) loads beside the first build instead of before it
 void import('./fw-valve-view.ts');
 import './fw-file-bar.ts';
@@ -91,7 +92,7 @@ export class FwApp extends LitElement {
       .notice button { margin-left: auto; }
       .right { display: flex; flex-direction: column; gap: 0.6rem; }
       .out-of-date { margin: 0; padding: 0.25rem 0.6rem; border-radius: 5px; background: var(--bad-soft); border: 1px solid var(--bad); font-size: 0.85rem; }
-      fw-valve-view.stale { opacity: 0.6; }
+      fw-valve-view.stale, fw-flow-plot.stale { opacity: 0.6; }
       @media (max-width: 900px) {
         :host { height: auto; }
         main { grid-template-columns: 1fr; overflow: visible; }
@@ -439,6 +440,7 @@ export class FwApp extends LitElement {
           ${outOfDate ? html`<p class="out-of-date" role="status" data-out-of-date>Out of date: the picture and figures show the last design that worked, not the boxes as they are now.</p>` : nothing}
           <fw-valve-view class=${outOfDate ? 'stale' : ''} .meshes=${this.meshes} .transforms=${this.transforms} .sizing=${good} .options=${this.view} .buildId=${this.meshBuildId} @preview-rendered=${this.previewRendered}></fw-valve-view>
           <fw-push-plot .sizing=${good} .units=${this.units}></fw-push-plot>
+          <fw-flow-plot class=${outOfDate ? 'stale' : ''} .band=${good} .units=${this.units}></fw-flow-plot>
         </div>
         <div class="right">
           <fw-results .result=${this.result} .lastGood=${good} .units=${this.units} .stale=${Object.keys(this.errors).length > 0 || outOfDate} @apply-way-out=${this.applyWayOut}></fw-results>

@@ -1,12 +1,12 @@
 import { LitElement, css, html, svg, nothing } from 'lit';
 import { customElement, property } from 'lit/decorators.js';
-import { levelAxis } from '../lib/format.ts';
+import { demandPerDay, flowAxis, levelAxis } from '../lib/format.ts';
 import { niceStep } from '../lib/nice-step.ts';
 import type { UnitSystem } from '../lib/units-system.ts';
 import { shared } from './shared-styles.ts';
 
 /**
- * The flow band the sizing core reports (issue 10's interface): flow through
+ * The part of a sizing result (SizingSuccess) the flow plot draws: flow through
  * the valve against water depth at full and low tank, the grower's demand, and
  * the levels where throttling starts, where demand is met and where it shuts
  * tight. Drawn from the worker's result as it is: nothing recomputed here.
@@ -25,15 +25,18 @@ export interface FlowBand {
 
 const W = 460, H = 230, L = 52, R = 14, T = 14, B = 40;
 
-/** The band in plain words, in the chosen units: throttling starts / held at demand / tight shut-off. */
+/** The band in plain words, in the chosen units: the flow eases off / held at the demand / shut tight. */
 export function flowBandWords(b: FlowBand, units: UnitSystem): string[] {
   const unit = units === 'metric' ? 'mm' : 'in';
   const d = units === 'metric' ? 1 : 2;
   const at = (mm: number) => `${levelAxis(mm, units).toFixed(d)} ${unit}`;
+  const held = b.inputs.demandLpd > 0
+    ? `While the plants drink ${demandPerDay(b.inputs.demandLpd, units)}, the water stays at about ${at(b.levels.heldAtDemandMm)} with the tank full and ${at(b.levels.heldAtDemandLowTankMm)} with it low.`
+    : `With no water drawn, the water rises to the tight shut-off.`;
   return [
-    `Throttling starts at ${at(b.levels.throttleStartMm)} of water.`,
-    `At your demand the level holds at ${at(b.levels.heldAtDemandMm)} with the tank full, ${at(b.levels.heldAtDemandLowTankMm)} with it low.`,
-    `Tight shut-off at ${at(b.levels.shutOffAtHeadMaxMm)} (tank full) to ${at(b.levels.shutOffAtHeadMinMm)} (tank low).`,
+    `The flow starts to ease off when the water reaches ${at(b.levels.throttleStartMm)}.`,
+    held,
+    `It shuts tight at ${at(b.levels.shutOffAtHeadMaxMm)} with the tank full (${at(b.levels.shutOffAtHeadMinMm)} with it low), the highest the water can rise.`,
   ];
 }
 
@@ -66,10 +69,12 @@ export class FwFlowPlot extends LitElement {
     const x0 = levelAxis(Math.min(...all.map((p) => p.levelMm)), u);
     const x1 = levelAxis(Math.max(...all.map((p) => p.levelMm)), u);
     const demandLph = b.inputs.demandLpd / 24;
-    const yMax = Math.max(...all.map((p) => p.flowLph), demandLph) * 1.08 || 1;
+    const flowUnit = u === 'metric' ? 'L/h' : 'gal/h';
+    const yMax = flowAxis(Math.max(...all.map((p) => p.flowLph), demandLph), u) * 1.08 || 1;
     const px = (mm: number) => L + ((levelAxis(mm, u) - x0) / (x1 - x0 || 1)) * (W - L - R);
     const py = (y: number) => T + (1 - y / yMax) * (H - T - B);
-    const line = (pts: { levelMm: number; flowLph: number }[]) => pts.map((p, i) => `${i ? 'L' : 'M'}${px(p.levelMm).toFixed(1)},${py(p.flowLph).toFixed(1)}`).join('');
+    const pyLph = (lph: number) => py(flowAxis(lph, u));
+    const line = (pts: { levelMm: number; flowLph: number }[]) => pts.map((p, i) => `${i ? 'L' : 'M'}${px(p.levelMm).toFixed(1)},${pyLph(p.flowLph).toFixed(1)}`).join('');
     const xStep = niceStep(x1 - x0 || 1);
     const yStep = niceStep(yMax, 4);
     const xTicks: number[] = [];
@@ -85,14 +90,14 @@ export class FwFlowPlot extends LitElement {
         <line class="axis" x1=${L} x2=${W - R} y1=${py(0)} y2=${py(0)}></line>
         <line class="axis" x1=${L} x2=${L} y1=${T} y2=${H - B}></line>
         <text x=${(L + W - R) / 2} y=${H - 6} text-anchor="middle">water depth in the container (${unit})</text>
-        <text transform="translate(12 ${(T + H - B) / 2}) rotate(-90)" text-anchor="middle">flow (L/h)</text>
-        <line class="demand" x1=${L} x2=${W - R} y1=${py(demandLph)} y2=${py(demandLph)}></line>
-        <text x=${W - R - 4} y=${py(demandLph) - 4} text-anchor="end">your demand</text>
+        <text transform="translate(12 ${(T + H - B) / 2}) rotate(-90)" text-anchor="middle">flow (${flowUnit})</text>
+        <line class="demand" x1=${L} x2=${W - R} y1=${pyLph(demandLph)} y2=${pyLph(demandLph)}></line>
+        <text x=${W - R - 4} y=${pyLph(demandLph) - 4} text-anchor="end">what the plants drink</text>
         <path class="low" d=${line(b.characteristic.headMin)}></path>
         <path class="full" d=${line(b.characteristic.headMax)}></path>
-        ${Number.isFinite(held) ? svg`<circle data-mark="held" cx=${px(held)} cy=${py(demandLph)} r="4" fill="var(--water)"></circle>` : nothing}
+        ${Number.isFinite(held) ? svg`<circle data-mark="held" cx=${px(held)} cy=${pyLph(demandLph)} r="4" fill="var(--water)"></circle>` : nothing}
       </svg>
-      <figcaption>Solid: tank full; dashed: tank low. ${words.map((w) => html`<span>${w} </span>`)}</figcaption>
+      <figcaption>Solid line: tank full; dashed: tank low; dot: where the flow matches what the plants drink. ${words.map((w) => html`<span>${w} </span>`)}</figcaption>
     </figure>`;
   }
 }

@@ -4,6 +4,7 @@ import { CONSTRAINT_TEXT } from '../../generator/sizing/layout/constraint-text.t
 import type { SizingResult, SizingSuccess, WayOut } from '../../generator/sizing/result.ts';
 import * as f from '../lib/format.ts';
 import type { UnitSystem } from '../lib/units-system.ts';
+import { flowBandWords } from './fw-flow-plot.ts';
 import { shared } from './shared-styles.ts';
 
 /** Document paths in plain words, for ways out. */
@@ -40,6 +41,7 @@ export class FwResults extends LitElement {
       .ways button { display: block; margin: 0.3rem 0; text-align: left; }
       .stale { opacity: 0.55; }
       ul { margin: 0.2rem 0; padding-left: 1.2rem; }
+      .band { margin: 0.2rem 0 0.5rem; }
     `,
   ];
 
@@ -62,26 +64,30 @@ export class FwResults extends LitElement {
         <div class="headline">
           <div class="big" data-result="float">Float <b>${f.lengthMm(s.float.outerDiameterMm, u)} × ${f.lengthMm(s.float.heightMm, u)}</b></div>
           <div class="big" data-result="housing">Housing <b>${f.lengthMm(s.housing.outerDiameterMm, u)} × ${f.lengthMm(s.housing.heightMm, u)}</b></div>
-          <div class="big" data-result="held-full">Holds water at <b>${f.lengthMm(s.levels.shutOffAtHeadMaxMm, u)}</b></div>
+          <div class="big" data-result="held-full">Holds water at <b>${f.lengthMm(s.levels.heldAtDemandMm, u)}</b></div>
         </div>
       </section>
       <section aria-label="Water levels">
         <h2>Water levels</h2>
+        <p class="band" data-result="band-words">${flowBandWords(s, u).join(' ')}</p>
         <dl>
-          <dt>Held with the tank full (${f.headM(s.inputs.headMaxM, u)})</dt><dd data-result="level-full">${f.lengthMm(s.levels.shutOffAtHeadMaxMm, u)}</dd>
-          ${same ? nothing : html`<dt>Held with the tank low (${f.headM(s.inputs.headMinM, u)})</dt><dd data-result="level-low">${f.lengthMm(s.levels.shutOffAtHeadMinMm, u)}</dd>`}
+          <dt>Held while the plants drink ${f.demandPerDay(s.inputs.demandLpd, u)}, tank full (${f.headM(s.inputs.headMaxM, u)})</dt><dd data-result="held-demand-full">${f.lengthMm(s.levels.heldAtDemandMm, u)}</dd>
+          ${same ? nothing : html`<dt>The same, tank low (${f.headM(s.inputs.headMinM, u)})</dt><dd data-result="held-demand-low">${f.lengthMm(s.levels.heldAtDemandLowTankMm, u)}</dd>`}
+          <dt>Flow starts to ease off at</dt><dd data-result="throttle-start">${f.lengthMm(s.levels.throttleStartMm, u)}</dd>
+          <dt>Half flow / a tenth / a hundredth, tank full</dt><dd>${f.lengthMm(s.levels.flow50Mm, u)} / ${f.lengthMm(s.levels.flow10Mm, u)} / ${f.lengthMm(s.levels.flow1Mm, u)}</dd>
+          <dt>Shut tight (the highest it can rise), tank full</dt><dd data-result="level-full">${f.lengthMm(s.levels.shutOffAtHeadMaxMm, u)}</dd>
+          ${same ? nothing : html`<dt>Shut tight, tank low</dt><dd data-result="level-low">${f.lengthMm(s.levels.shutOffAtHeadMinMm, u)}</dd>`}
           <dt>Float lifts off its pin at</dt><dd>${f.lengthMm(s.levels.liftOffMm, u)}</dd>
-          <dt>Pad first touches the nozzle at</dt><dd>${f.lengthMm(s.levels.firstTouchMm, u)}</dd>
           <dt>Shallowest depth this float can hold</dt><dd>${f.lengthMm(s.levels.minimumReachableMm, u)}</dd>
         </dl>
       </section>
       <section aria-label="Flow">
         <h2>Refill</h2>
         <dl>
-          <dt>Flow, tank full</dt><dd data-result="flow-full">${f.flowLph(s.flow.atHeadMaxLph, u)}</dd>
+          <dt>Flow wide open, tank full</dt><dd data-result="flow-full">${f.flowLph(s.flow.atHeadMaxLph, u)}</dd>
+          <dt>Likely range (print and tube tolerance)</dt><dd data-result="flow-band">${f.flowLph(s.flow.atHeadMaxLowLph, u)} to ${f.flowLph(s.flow.atHeadMaxHighLph, u)}</dd>
           ${same ? nothing : html`<dt>Flow, tank low</dt><dd>${f.flowLph(s.flow.atHeadMinLph, u)}</dd>`}
-          ${s.flow.fillTimeAtHeadMaxMin !== null ? html`<dt>Refill time, tank full</dt><dd>${f.minutes(s.flow.fillTimeAtHeadMaxMin)}</dd>` : nothing}
-          ${s.flow.fillTimeAtHeadMinMin !== null && !same ? html`<dt>Refill time, tank low</dt><dd>${f.minutes(s.flow.fillTimeAtHeadMinMin)}</dd>` : nothing}
+          ${s.fill.timeToHeldMin !== null ? html`<dt>Refill time while the plants drink</dt><dd data-result="fill-time">${f.minutes(s.fill.timeToHeldMin)}</dd>` : nothing}
           <dt>Push needed to shut, tank full</dt><dd>${f.forceN(s.closingForce.atHeadMaxN, u)}</dd>
           <dt>Float's lift when under water</dt><dd>${f.forceN(s.float.availableForceN, u)} (${s.float.reserve.toFixed(2)}×)</dd>
           <dt>Drain slots at the bottom</dt><dd>${s.drain.notchCount}, ${f.areaMm2(s.drain.providedAreaMm2, u)} (needs ${f.areaMm2(s.drain.requiredAreaMm2, u)})</dd>

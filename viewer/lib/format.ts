@@ -26,6 +26,16 @@ export function flowLph(lph: number, system: UnitSystem): string {
   return system === 'metric' ? `${fixed(lph, 1)} L/h` : `${fixed(lph / US_GALLON_L, 2)} gal/h`;
 }
 
+/** The plants' demand, per day. */
+export function demandPerDay(lpd: number, system: UnitSystem): string {
+  return system === 'metric' ? `${fixed(lpd, lpd < 10 ? 1 : 0)} L/day` : `${fixed(lpd / US_GALLON_L, 2)} gal/day`;
+}
+
+/** A flow in the page's unit, for a plot axis (L/h or US gal/h). */
+export function flowAxis(lph: number, system: UnitSystem): number {
+  return system === 'metric' ? lph : lph / US_GALLON_L;
+}
+
 export function massG(g: number, system: UnitSystem, digits = 0): string {
   return system === 'metric' ? `${fixed(g, digits)} g` : `${fixed(g / OUNCE_G, 2)} oz`;
 }
