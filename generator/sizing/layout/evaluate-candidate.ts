@@ -90,12 +90,19 @@ export function floatTilt(b: DesignBasis, f: FloatSpec): GuidedTilt & { padMargi
   return { ...tilt, padMarginMm: b.padDiameterMm / 2 - (b.inputs.sealDiameterM * 1e3) / 2, pivotZMm: pivotZ };
 }
 
-/** The float constraints that its cylinder height settles (all ease as the float grows taller). */
-export function floatViolations(b: DesignBasis, f: FloatSizing | null): ConstraintCode[] {
+/** The float constraints of its lift alone (reserve, seal depth): cheap, and they ease as the float grows taller. */
+export function floatLiftViolations(b: DesignBasis, f: FloatSizing | null): ConstraintCode[] {
   if (!f) return ['float-shape'];
   const v: ConstraintCode[] = [];
   if (f.reserve < b.inputs.reserve) v.push('reserve');
   if (!(f.sealDepthMm <= f.float.cylinderHeightMm)) v.push('seal-in-cylinder');
+  return v;
+}
+
+/** The float constraints that its cylinder height settles (all ease as the float grows taller). */
+export function floatViolations(b: DesignBasis, f: FloatSizing | null): ConstraintCode[] {
+  if (!f) return ['float-shape'];
+  const v = floatLiftViolations(b, f);
   const tilt = floatTilt(b, f.float);
   if (tilt.padOffsetMm > tilt.padMarginMm + 1e-9) v.push('tilt-offset');
   if (tilt.lipGapMm > b.indentationMm / 2 + 1e-9) v.push('tilt-gap');

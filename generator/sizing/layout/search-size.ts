@@ -1,6 +1,6 @@
 import { PART_SIZE_CAP_MM } from '../constants.ts';
 import type { DesignBasis } from './design-basis.ts';
-import { floatViolations, layoutCandidate, sizeFloat, type Candidate, type ConstraintCode } from './evaluate-candidate.ts';
+import { floatLiftViolations, floatViolations, layoutCandidate, sizeFloat, type Candidate, type ConstraintCode } from './evaluate-candidate.ts';
 
 /** Float diameters are tried on this grid, mm (a printer cannot hold finer anyway). */
 export const DIAMETER_STEP_MM = 0.5;
@@ -26,31 +26,73 @@ export interface SearchOutcome {
   nearestLevelAndFoot: { levelMm: number; footMm: number };
 }
 
-/**
- * Shortest cylinder for a float diameter that meets the reserve and keeps the
- * seal depth inside the cylinder. Both ease monotonically as the cylinder grows
- * (lift gains pi R^2 per mm against 2 pi R t rho_m / rho of shell), so bisection
- * finds the smallest; every other cost grows with height, so smallest is best.
- */
-function shortestCylinderMm(b: DesignBasis, diameterMm: number): number | null {
-  const ok = (h: number) => floatViolations(b, sizeFloat(b, diameterMm, h)).length === 0;
-  let hi = PART_SIZE_CAP_MM;
-  if (!ok(hi)) return null;
-  let lo = 0.5;
-  if (ok(lo)) return lo;
+/** Smallest height in [lo, hi] where `ok` holds, to a quarter of the height grid (ok(hi) holds, ok monotone). */
+function bisectHeightMm(ok: (h: number) => boolean, lo: number, hi: number): number {
   while (hi - lo > HEIGHT_STEP_MM / 4) {
     const mid = (lo + hi) / 2;
     if (ok(mid)) hi = mid;
     else lo = mid;
   }
-  // to the height grid, clear of floating-point fuzz (hi itself works, so this ends within a step or two)
-  let k = Math.ceil(lo / HEIGHT_STEP_MM - 1e-6);
-  while (!ok(Number((k * HEIGHT_STEP_MM).toFixed(6)))) k++;
-  return Number((k * HEIGHT_STEP_MM).toFixed(6));
+  return lo;
 }
 
-function candidateAt(b: DesignBasis, drainAreaMm2: number, diameterMm: number): Candidate | ConstraintCode[] {
-  const h = shortestCylinderMm(b, diameterMm);
+/**
+ * Shortest cylinder for a float diameter that meets the reserve, keeps the
+ * seal depth inside the cylinder and holds the pad on the lip when tilted. All
+ * ease monotonically as the cylinder grows (lift gains pi R^2 per mm against
+ * 2 pi R t rho_m / rho of shell; a taller float tilts less in its bore), so
+ * bisection finds the smallest; every other cost grows with height, so smallest
+ * is best. The cheap lift rules are bisected first; the tilt (an inner
+ * bisection of its own) is looked at only above the height they give.
+ */
+function shortestCylinderMm(b: DesignBasis, diameterMm: number, guessMm: number | null): number | null {
+  const liftOk = (h: number) => floatLiftViolations(b, sizeFloat(b, diameterMm, h)).length === 0;
+  const ok = (h: number) => floatViolations(b, sizeFloat(b, diameterMm, h)).length === 0;
+  const hi = PART_SIZE_CAP_MM;
+  if (!liftOk(hi) || !ok(hi)) return null;
+  let lo = liftOk(0.5) ? 0.5 : bisectHeightMm(liftOk, ...bracketHeightMm(liftOk, guessMm, 0.5, hi));
+  if (lo === 0.5 && ok(0.5)) return 0.5;
+  // from the lift's height up: the grid point there, or a bisection with the tilt when that binds
+  const grid = (k: number) => Number((k * HEIGHT_STEP_MM).toFixed(6));
+  let k = Math.ceil(lo / HEIGHT_STEP_MM - 1e-6);
+  if (ok(grid(k))) return grid(k);
+  lo = bisectHeightMm(ok, k * HEIGHT_STEP_MM, hi);
+  // to the height grid, clear of floating-point fuzz (the bound found works, so this ends within a step or two)
+  k = Math.ceil(lo / HEIGHT_STEP_MM - 1e-6);
+  while (!ok(grid(k))) k++;
+  return grid(k);
+}
+
+/**
+ * A bracket [failing, working] around the boundary of a monotone `ok` on [lo, hi] (ok(lo) fails, ok(hi) holds),
+ * galloping out from a guess (the neighbouring diameter's height: heights change little from one diameter to
+ * the next), so the bisection starts narrow. Without a guess: the whole range.
+ */
+function bracketHeightMm(ok: (h: number) => boolean, guessMm: number | null, lo: number, hi: number): [number, number] {
+  if (guessMm === null || !(guessMm > lo && guessMm < hi)) return [lo, hi];
+  let step = 4 * HEIGHT_STEP_MM;
+  if (ok(guessMm)) {
+    let top = guessMm;
+    for (;;) {
+      const below = top - step;
+      if (below <= lo) return [lo, top];
+      if (!ok(below)) return [below, top];
+      top = below;
+      step *= 2;
+    }
+  }
+  let bottom = guessMm;
+  for (;;) {
+    const above = bottom + step;
+    if (above >= hi) return [bottom, hi];
+    if (ok(above)) return [bottom, above];
+    bottom = above;
+    step *= 2;
+  }
+}
+
+function candidateAt(b: DesignBasis, drainAreaMm2: number, diameterMm: number, guessMm: number | null): Candidate | ConstraintCode[] {
+  const h = shortestCylinderMm(b, diameterMm, guessMm);
   if (h === null) return floatViolations(b, sizeFloat(b, diameterMm, PART_SIZE_CAP_MM));
   const f = sizeFloat(b, diameterMm, h);
   if (!f) return ['float-shape'];
@@ -77,11 +119,13 @@ export function searchSize(b: DesignBasis, drainAreaMm2: number): SearchOutcome 
   const targetMm = b.inputs.targetLevelM * 1e3;
   const results: (Candidate | ConstraintCode[])[] = [];
   const limitMm = b.inputs.maxOuterDiameterM * 1e3;
+  let guess: number | null = null;
   for (let i = 0; ; i++) {
     const d = SMALLEST_FLOAT_MM + i * DIAMETER_STEP_MM;
     if (d > PART_SIZE_CAP_MM) break;
-    const c = candidateAt(b, drainAreaMm2, d);
+    const c = candidateAt(b, drainAreaMm2, d, guess);
     results.push(c);
+    guess = Array.isArray(c) ? null : c.float.cylinderHeightMm;
     // a diameter with no workable cylinder at all is just too small; it explains nothing,
     // unless the tilt rules refuse even the tallest float (a lip too wide for the pad's indentation)
     if (Array.isArray(c)) {
@@ -105,7 +149,10 @@ export function searchSize(b: DesignBasis, drainAreaMm2: number): SearchOutcome 
       best = c;
       bestIndex = i;
     }
-    // past the diameter limit with a working design in hand, wider can only be heavier and too wide
+    // The foot grows with the float, so past the diameter limit nothing fits any more: with a design in hand,
+    // this first one too wide is the last needed (the best's neighbour, for boundBy). Without one, go on
+    // a little to find what a wider limit would give (the ways out).
+    if (best && c.housing.foot.outerDiameterMm > limitMm + 1e-9) break;
     if (c.housing.foot.outerDiameterMm > Math.max(limitMm, smallestFoot) + 20) break;
   }
   const boundBy: string[] = [];
