@@ -118,7 +118,7 @@ export function sizingSections(result: SizingSuccess): Section[] {
         ...(result.fill.timeToHeldMin === null || result.fill.fromLevelMm === null || result.fill.toLevelMm === null
           ? []
           : [row(
-              `fill ${fixed(result.fill.fromLevelMm, 1)} to ${fixed(result.fill.toLevelMm, 1)} mm, plants drinking (slow end)`,
+              `time to fill the reservoir rise, ${fixed(result.fill.fromLevelMm, 1)} to ${fixed(result.fill.toLevelMm, 1)} mm, with the plants drinking and the flow at the slow end of its range`,
               fixed(result.fill.timeToHeldMin, 0),
               'min',
             )]),
@@ -134,8 +134,8 @@ export function sizingSections(result: SizingSuccess): Section[] {
           flow.boreModel === 'short-tube' ? 'a short tube' : 'a sharp orifice',
         ),
         row(`at lowest head (Re ${fixed(flow.reynoldsAtHeadMin, 0)})`, fixed(flow.atHeadMinLph, 1), 'L/h'),
-        ...fill(flow.fillTimeAtHeadMaxMin).map((m) => row('time to fill the reservoir rise, highest head', fixed(m, 1), 'min')),
-        ...fill(flow.fillTimeAtHeadMinMin).map((m) => row('time to fill the reservoir rise, lowest head', fixed(m, 1), 'min')),
+        ...fill(flow.fillTimeAtHeadMaxMin).map((m) => row('time to fill the reservoir rise if the valve stayed wide open and nothing drank, highest head', fixed(m, 1), 'min')),
+        ...fill(flow.fillTimeAtHeadMinMin).map((m) => row('the same, lowest head', fixed(m, 1), 'min')),
       ],
     },
     {
