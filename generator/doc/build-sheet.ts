@@ -140,7 +140,9 @@ function sheetContent(s: SizingSuccess, doc: NormalizedDoc, files: BuildSheetFil
         `${shell.count} lines; ${shellLayers} top and bottom layers`,
         'any: the shell is modelled solid and the cavity hollow, so the mass does not depend on infill',
         `${LAYER_HEIGHT_MM} mm`,
-        `none: the cavity roof is a 50-degree cone with a ${f1(2 * P.float.cavityRoofRadiusMm)} mm bridge at the top`,
+        P.float.cavityRoofRadiusMm > 0
+          ? `none: the cavity roof is a 50-degree cone with a ${f1(2 * P.float.cavityRoofRadiusMm)} mm bridge at the top`
+          : 'none: the cavity roof is a 50-degree cone that closes to a point, so there is no bridge inside, whatever the perimeter count',
       ],
       [
         'Nozzle insert',
@@ -172,8 +174,10 @@ function sheetContent(s: SizingSuccess, doc: NormalizedDoc, files: BuildSheetFil
 
   const printFirst =
     'Supports: off. The float is sealed: any support the slicer put inside it could never come out and would weigh the float down ' +
-    `for good. Nothing needs it: every overhang of every part is ${OVERHANG_MIN_DEG} degrees or steeper from the bed (the foot ${FOOT_FLARE_DEG}), and the ` +
-    `one bridge, ${f1(2 * P.float.cavityRoofRadiusMm)} mm under the float's pad, prints without.`;
+    `for good. Nothing needs it: every overhang of every part is ${OVERHANG_MIN_DEG} degrees or steeper from the bed (the foot ${FOOT_FLARE_DEG})` +
+    (P.float.cavityRoofRadiusMm > 0
+      ? `, and the one bridge, ${f1(2 * P.float.cavityRoofRadiusMm)} mm under the float's pad, prints without.`
+      : ', and the float\'s sealed cavity closes to a point: no bridge inside it.');
   const printNotes = [
     `Material: ${material} (${f2(inp.materialDensityKgM3 / 1000)} g/cm3). The masses assume solid plastic.`,
     `Every fit has the same clearance, ${f2(P.printClearanceMm)} mm per side; the nozzle's crush ribs take up the printer's spread in the seat.`,

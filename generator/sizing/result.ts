@@ -27,7 +27,10 @@ export interface FloatSpec {
   plateauRadiusMm: number;
   /** shell wall (side, bottom and cone normal thickness) */
   shellMm: number;
-  /** cavity: inner cylinder radius, bottom z, z where the inner cone starts and where it reaches the collar's inner radius, roof z, roof radius */
+  /**
+   * cavity: inner cylinder radius, bottom z, z where the inner cone starts and where it ends, roof z, roof radius;
+   * with a guide collar the cone closes to a point (top = roof z, roof radius 0: no bridge), without one it ends at a flat roof
+   */
   cavityRadiusMm: number;
   cavityBottomZMm: number;
   cavityConeStartZMm: number;

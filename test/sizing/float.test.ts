@@ -38,14 +38,29 @@ describe('float geometry (elementary geometry: cylinder, frustum; disc integrati
     // collar radius: pocket (4.5 + 0.25) + rim 1.35 = 6.1, raised to the asked least 6.15
     expect(shape.plateauRadiusMm).toBeCloseTo(6.15, 12);
     expect(shape.coneHeightMm).toBeCloseTo((27 - 6.15) * K, 12);
-    expect(shape.heightMm).toBeCloseTo(35 + shape.coneHeightMm + 6.5, 12);
     // the cavity's cone is the outer cone moved in by the shell thickness along its normal:
     // the lines K r + z = c_outer and K r + z = c_inner lie |c_outer - c_inner| / sqrt(1 + K^2) apart
     const cOuter = K * 27 + shape.cylinderHeightMm;
     const cInner = K * shape.cavityRadiusMm + shape.cavityConeStartZMm;
     expect((cOuter - cInner) / Math.hypot(1, K)).toBeCloseTo(shape.shellMm, 12);
-    expect(K * shape.cavityRoofRadiusMm + shape.cavityConeTopZMm).toBeCloseTo(cInner, 12);
-    expect(shape.cavityRoofRadiusMm).toBeCloseTo(6.15 - 1.35, 12);
+    // it closes to a point on the axis (r = 0 on the inner line: z = c_inner), no flat roof: no bridge inside
+    expect(shape.cavityRoofRadiusMm).toBe(0);
+    expect(shape.cavityConeTopZMm).toBeCloseTo(cInner, 12);
+    expect(shape.cavityRoofZMm).toBeCloseTo(cInner, 12);
+    // the collar is raised from the asked 6.5 mm so the point sits a shell under the 2 mm pocket
+    const collar = cInner + 1.35 + 2 - (35 + shape.coneHeightMm);
+    expect(collar).toBeGreaterThan(6.5);
+    expect(shape.collarHeightMm).toBeCloseTo(collar, 12);
+    expect(shape.heightMm).toBeCloseTo(35 + shape.coneHeightMm + collar, 12);
+    expect(shape.heightMm - shape.pocketDepthMm - shape.cavityRoofZMm).toBeCloseTo(1.35, 12);
+  });
+  it('a collar taller than the point needs keeps its height (the point then sits lower than a shell under the pocket)', () => {
+    const tall = floatShape({
+      outerDiameterMm: 54, cylinderHeightMm: 35, shellMm: 1.35, padDiameterMm: 9, padThicknessMm: 3, padProudMm: 1,
+      clearanceMm: 0.25, rimMm: 1.35, collarMinRadiusMm: 6.15, collarHeightMm: 20,
+    }) as FloatSpec;
+    expect(tall.collarHeightMm).toBe(20);
+    expect(tall.cavityRoofZMm).toBeCloseTo(shape.cavityRoofZMm, 12);
   });
   it('outer and cavity volumes agree with disc integration of the profile', () => {
     const R = 27;
@@ -60,7 +75,7 @@ describe('float geometry (elementary geometry: cylinder, frustum; disc integrati
       (z) =>
         z <= shape.cavityConeStartZMm
           ? shape.cavityRadiusMm
-          : Math.max(shape.cavityRoofRadiusMm, shape.cavityRadiusMm - (z - shape.cavityConeStartZMm) / K),
+          : Math.max(0, shape.cavityRadiusMm - (z - shape.cavityConeStartZMm) / K),
       shape.cavityBottomZMm,
       shape.cavityRoofZMm,
     );

@@ -35,10 +35,20 @@ export interface FloatShapeOptions {
  * vertical cylinder r_c high collarHeight, whose top is the plateau with the pad
  * pocket. Cavity: inner cylinder of radius R - t from z = t; its roof cone is the
  * outer cone moved inward by t along the normal, i.e. down by t / cos 50deg, so it
- * starts at z1 = h_c - t (1 - sin 50deg) / cos 50deg; it rises to radius r_c - t
- * and goes on up inside the collar to a flat roof under the pocket (the one bridge
- * of the print, 2 (r_c - t) across); with no collar (the lever's float) the cone
- * stops at the roof, t under the pocket. Returns null if the shape does not close.
+ * starts at z1 = h_c - t (1 - sin 50deg) / cos 50deg. With a collar, the roof cone
+ * goes on up inside it to a point, z_apex = z1 + (R - t) tan 50deg, so the sealed
+ * cavity has no flat roof at all: a flat roof is a bridge, and a slicer laying more
+ * perimeters than the shell has lines round the bridge (the housing's five, say, on
+ * one plate) prints them over the hole and fills the cavity with support that can
+ * never come out (PrusaSlicer, 5 perimeters, 45-degree threshold: 23 m of support
+ * filament in a 9.5 mm roof). The collar is made tall enough for the point to sit
+ * at least t under the pocket: h_collar >= z_apex + t + pocket depth - (h_c + h_k).
+ * With no collar (the lever's float) the cone stops at the roof, t under the
+ * pocket. Returns null if the shape does not close.
+ *
+ * Example: R 30.5, t 1.8, r_c 6.55, pocket 2 mm, h_c 30 mm: z1 = 29.34, z_apex =
+ * 29.34 + 28.7 x 1.1918 = 63.55; h_k = 23.95 x 1.1918 = 28.54; so the collar is at
+ * least 63.55 + 1.8 + 2 - 58.54 = 8.81 mm high. Source: plane geometry.
  */
 export function floatShape(o: FloatShapeOptions): FloatSpec | null {
   const R = o.outerDiameterMm / 2;
@@ -49,18 +59,20 @@ export function floatShape(o: FloatShapeOptions): FloatSpec | null {
   const pocketDepth = Math.max(0, o.padThicknessMm - o.padProudMm);
   const pocketRadius = o.padDiameterMm / 2 + o.clearanceMm;
   const collarRadius = Math.max(pocketRadius + o.rimMm, o.collarMinRadiusMm ?? 0);
-  const collarHeight = o.collarHeightMm ?? 0;
   const coneHeight = (R - collarRadius) * k;
-  const height = o.cylinderHeightMm + coneHeight + collarHeight;
   const cavityRadius = R - t;
   const cavityBottom = t;
   const coneStart = o.cylinderHeightMm - (t * (1 - sinA)) / cosA;
-  const roofZ = height - pocketDepth - t;
-  // the inner cone rises to the collar's inner radius, or, with little or no collar, only to the roof
-  const collarConeTop = coneStart + (cavityRadius - (collarRadius - t)) * k;
-  const coneTop = Math.min(collarConeTop, roofZ);
-  const roofRadius = cavityRadius - (coneTop - coneStart) / k;
-  if (coneHeight <= 0 || cavityRadius <= 0 || coneStart <= cavityBottom || roofZ <= coneStart || roofRadius <= 0) {
+  const withCollar = (o.collarHeightMm ?? 0) > 0;
+  const apexZ = coneStart + cavityRadius * k;
+  // with a collar, tall enough that the cavity closes to a point under the pocket (no bridge)
+  const collarHeight = withCollar ? Math.max(o.collarHeightMm!, apexZ + t + pocketDepth - (o.cylinderHeightMm + coneHeight)) : 0;
+  const height = o.cylinderHeightMm + coneHeight + collarHeight;
+  const roofZ = withCollar ? apexZ : height - pocketDepth - t;
+  // without one, the inner cone rises to the collar's inner radius or the roof, whichever comes first
+  const coneTop = withCollar ? apexZ : Math.min(coneStart + (cavityRadius - (collarRadius - t)) * k, roofZ);
+  const roofRadius = withCollar ? 0 : cavityRadius - (coneTop - coneStart) / k;
+  if (coneHeight <= 0 || cavityRadius <= 0 || coneStart <= cavityBottom || roofZ <= coneStart || roofRadius < 0 || (!withCollar && roofRadius === 0)) {
     return null;
   }
   return {

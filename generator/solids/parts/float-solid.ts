@@ -6,8 +6,9 @@
  * the axis. Outer: cylinder R to h_c, 50-degree cone in to the guide collar
  * r_c, the collar up to the plateau at h_f, pocket (r_pocket, depth) cut into
  * the plateau. Cavity: r_cav from the bottom shell t up to the inner cone
- * start, 50-degree roof in to r_c - t, up inside the collar to the flat roof
- * (the one short bridge). Every dimension is FloatSpec's.
+ * start, then the 50-degree roof: with the guide collar it closes to a point
+ * inside the collar (no bridge); without one (the lever's float) it ends at a
+ * flat roof under the pocket. Every dimension is FloatSpec's.
  *
  * Facets: one count for the whole float, from its outer radius at the asked
  * quality, so every section is the same N-gon and the volume is exactly
