@@ -1,4 +1,4 @@
-import { checkRange } from './check-range.ts';
+import { checkRange, POSITIVE } from './check-range.ts';
 
 /**
  * Darcy friction factor of turbulent flow in a smooth pipe (for cross-checks).
@@ -12,6 +12,6 @@ import { checkRange } from './check-range.ts';
  * Source: H. Blasius (1913), Mitt. Forschungsarb. Ingenieurwes. 131.
  */
 export function blasiusFrictionFactor(reynolds: number): number {
-  checkRange('reynolds', reynolds, { min: 0, minExclusive: true });
+  checkRange('reynolds', reynolds, POSITIVE);
   return 0.3164 * reynolds ** -0.25;
 }

@@ -22,6 +22,10 @@ function describe(range: AllowedRange): string {
   return parts.join(' ') + (range.note ? ` (${range.note})` : '');
 }
 
+/** Ranges checked in the solvers' inner loops, made once (a literal per call costs an allocation each time). */
+export const POSITIVE: AllowedRange = Object.freeze({ min: 0, minExclusive: true });
+export const NON_NEGATIVE: AllowedRange = Object.freeze({ min: 0 });
+
 /** Returns `value` when it is allowed; throws RangeError naming `path` otherwise. */
 export function checkRange(path: string, value: unknown, range: AllowedRange = {}): number {
   const ok =

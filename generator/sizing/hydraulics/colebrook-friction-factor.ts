@@ -1,7 +1,8 @@
-import { checkRange } from './check-range.ts';
+import { checkRange, POSITIVE } from './check-range.ts';
 
 /** Largest relative roughness e/d the friction-factor functions accept (the Moody chart stops at 0.05). */
 export const MAX_RELATIVE_ROUGHNESS = 0.1;
+export const RELATIVE_ROUGHNESS_RANGE = Object.freeze({ min: 0, max: MAX_RELATIVE_ROUGHNESS });
 
 /**
  * Darcy friction factor of turbulent pipe flow from the Colebrook-White equation,
@@ -22,8 +23,8 @@ export const MAX_RELATIVE_ROUGHNESS = 0.1;
  * in H. K. Winning and T. Coole (2013), Flow Turbulence Combust. 90:1-27.
  */
 export function colebrookFrictionFactor(reynolds: number, relativeRoughness: number): number {
-  checkRange('reynolds', reynolds, { min: 0, minExclusive: true });
-  checkRange('relativeRoughness', relativeRoughness, { min: 0, max: MAX_RELATIVE_ROUGHNESS });
+  checkRange('reynolds', reynolds, POSITIVE);
+  checkRange('relativeRoughness', relativeRoughness, RELATIVE_ROUGHNESS_RANGE);
   const a = relativeRoughness / 3.7;
   const b = 2.51 / reynolds;
   let x = 7; // f of about 0.02, typical of tube flow

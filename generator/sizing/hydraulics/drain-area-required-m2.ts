@@ -1,5 +1,5 @@
 import { DRAIN_HEAD_LOSS_M, ORIFICE_DISCHARGE_COEFFICIENT, STANDARD_GRAVITY } from '../constants.ts';
-import { checkRange } from './check-range.ts';
+import { checkRange, POSITIVE, NON_NEGATIVE } from './check-range.ts';
 
 export interface DrainAreaOptions {
   /** largest flow the drain openings must pass, m3/s (>= 0) */
@@ -20,8 +20,8 @@ export interface DrainAreaOptions {
  * C_d = 0.61 standard texts (from memory).
  */
 export function drainAreaRequiredM2(opts: DrainAreaOptions): number {
-  const flowM3s = checkRange('flowM3s', opts.flowM3s, { min: 0 });
-  const headLossM = checkRange('headLossM', opts.headLossM ?? DRAIN_HEAD_LOSS_M, { min: 0, minExclusive: true });
+  const flowM3s = checkRange('flowM3s', opts.flowM3s, NON_NEGATIVE);
+  const headLossM = checkRange('headLossM', opts.headLossM ?? DRAIN_HEAD_LOSS_M, POSITIVE);
   const cd = checkRange('dischargeCoefficient', opts.dischargeCoefficient ?? ORIFICE_DISCHARGE_COEFFICIENT, {
     min: 0,
     minExclusive: true,

@@ -1,4 +1,4 @@
-import { checkRange } from './check-range.ts';
+import { checkRange, POSITIVE, NON_NEGATIVE } from './check-range.ts';
 
 export interface FillTimeOptions {
   /** reservoir surface area, m2 (> 0) */
@@ -21,9 +21,9 @@ export interface FillTimeOptions {
  * Source: volume balance (continuity), any fluid mechanics text.
  */
 export function fillTimeS(opts: FillTimeOptions): number | null {
-  const areaM2 = checkRange('areaM2', opts.areaM2, { min: 0, minExclusive: true });
-  const riseM = checkRange('riseM', opts.riseM, { min: 0 });
-  const flowM3s = checkRange('flowM3s', opts.flowM3s, { min: 0 });
+  const areaM2 = checkRange('areaM2', opts.areaM2, POSITIVE);
+  const riseM = checkRange('riseM', opts.riseM, NON_NEGATIVE);
+  const flowM3s = checkRange('flowM3s', opts.flowM3s, NON_NEGATIVE);
   if (riseM === 0) return 0;
   if (flowM3s === 0) return null;
   return (areaM2 * riseM) / flowM3s;

@@ -1,4 +1,4 @@
-import { checkRange } from './check-range.ts';
+import { checkRange, NON_NEGATIVE } from './check-range.ts';
 
 /** Reynolds number up to which pipe flow is taken as laminar (common practice; White, Fluid Mechanics, ch. 6). */
 export const LAMINAR_LIMIT_REYNOLDS = 2300;
@@ -20,7 +20,7 @@ export type FlowRegime = 'laminar' | 'transitional' | 'turbulent';
  * Source: the usual engineering limits 2300 and 4000 (common practice; e.g. F. M. White, Fluid Mechanics, ch. 6).
  */
 export function flowRegime(reynolds: number): FlowRegime {
-  checkRange('reynolds', reynolds, { min: 0 });
+  checkRange('reynolds', reynolds, NON_NEGATIVE);
   if (reynolds <= LAMINAR_LIMIT_REYNOLDS) return 'laminar';
   if (reynolds < TURBULENT_LIMIT_REYNOLDS) return 'transitional';
   return 'turbulent';

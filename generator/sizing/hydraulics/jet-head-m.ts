@@ -1,5 +1,5 @@
 import { ORIFICE_DISCHARGE_COEFFICIENT, STANDARD_GRAVITY } from '../constants.ts';
-import { checkRange } from './check-range.ts';
+import { checkRange, POSITIVE, NON_NEGATIVE } from './check-range.ts';
 
 export interface JetHeadOptions {
   /** volume flow through the orifice, m3/s (>= 0) */
@@ -23,8 +23,8 @@ export interface JetHeadOptions {
  * e.g. White, Fluid Mechanics, ch. 6; C_d = 0.61 for a sharp edge (standard texts, from memory).
  */
 export function jetHeadM(opts: JetHeadOptions): number {
-  const flowM3s = checkRange('flowM3s', opts.flowM3s, { min: 0 });
-  const orificeM = checkRange('orificeM', opts.orificeM, { min: 0, minExclusive: true });
+  const flowM3s = checkRange('flowM3s', opts.flowM3s, NON_NEGATIVE);
+  const orificeM = checkRange('orificeM', opts.orificeM, POSITIVE);
   const cd = checkRange('dischargeCoefficient', opts.dischargeCoefficient ?? ORIFICE_DISCHARGE_COEFFICIENT, {
     min: 0,
     minExclusive: true,

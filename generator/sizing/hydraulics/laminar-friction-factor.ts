@@ -1,4 +1,4 @@
-import { checkRange } from './check-range.ts';
+import { checkRange, POSITIVE } from './check-range.ts';
 
 /**
  * Darcy friction factor of fully developed laminar pipe flow.
@@ -12,6 +12,6 @@ import { checkRange } from './check-range.ts';
  * Source: Hagen-Poiseuille law; any fluid mechanics text, e.g. F. M. White, Fluid Mechanics, ch. 6.
  */
 export function laminarFrictionFactor(reynolds: number): number {
-  checkRange('reynolds', reynolds, { min: 0, minExclusive: true });
+  checkRange('reynolds', reynolds, POSITIVE);
   return 64 / reynolds;
 }

@@ -1,4 +1,4 @@
-import { checkRange } from './check-range.ts';
+import { checkRange, POSITIVE, NON_NEGATIVE } from './check-range.ts';
 
 export interface ReynoldsOptions {
   /** volume flow through the tube, m3/s (>= 0) */
@@ -21,9 +21,9 @@ export interface ReynoldsOptions {
  * Source: definition of the Reynolds number (any fluid mechanics text, e.g. White, Fluid Mechanics, ch. 1).
  */
 export function reynoldsNumber(opts: ReynoldsOptions): number {
-  const flowM3s = checkRange('flowM3s', opts.flowM3s, { min: 0 });
-  const d = checkRange('innerDiameterM', opts.innerDiameterM, { min: 0, minExclusive: true });
-  const rho = checkRange('densityKgM3', opts.densityKgM3, { min: 0, minExclusive: true });
-  const mu = checkRange('viscosityPaS', opts.viscosityPaS, { min: 0, minExclusive: true });
+  const flowM3s = checkRange('flowM3s', opts.flowM3s, NON_NEGATIVE);
+  const d = checkRange('innerDiameterM', opts.innerDiameterM, POSITIVE);
+  const rho = checkRange('densityKgM3', opts.densityKgM3, POSITIVE);
+  const mu = checkRange('viscosityPaS', opts.viscosityPaS, POSITIVE);
   return (4 * rho * flowM3s) / (Math.PI * mu * d);
 }

@@ -1,5 +1,5 @@
 import { ORIFICE_DISCHARGE_COEFFICIENT, SHARP_ENTRANCE_LOSS, TUBE_ROUGHNESS_M } from '../constants.ts';
-import { checkRange } from './check-range.ts';
+import { checkRange, POSITIVE, NON_NEGATIVE } from './check-range.ts';
 import { MAX_RELATIVE_ROUGHNESS } from './colebrook-friction-factor.ts';
 import { boreModel, type BoreModel } from './bore-model.ts';
 import { darcyFrictionFactor, type FrictionBridge } from './darcy-friction-factor.ts';
@@ -67,13 +67,13 @@ export interface SupplyFlowResult {
  * K_in = 0.5 Crane TP-410 (from memory); C_d = 0.61 standard texts (from memory).
  */
 export function supplyFlow(opts: SupplyFlowOptions): SupplyFlowResult {
-  const headM = checkRange('headM', opts.headM, { min: 0 });
-  const tubeInnerDiameterM = checkRange('tubeInnerDiameterM', opts.tubeInnerDiameterM, { min: 0, minExclusive: true });
-  const tubeLengthM = checkRange('tubeLengthM', opts.tubeLengthM, { min: 0 });
-  const orificeM = checkRange('orificeM', opts.orificeM, { min: 0, minExclusive: true });
-  const densityKgM3 = checkRange('densityKgM3', opts.densityKgM3, { min: 0, minExclusive: true });
-  const viscosityPaS = checkRange('viscosityPaS', opts.viscosityPaS, { min: 0, minExclusive: true });
-  const entranceLossK = checkRange('entranceLossK', opts.entranceLossK ?? SHARP_ENTRANCE_LOSS, { min: 0 });
+  const headM = checkRange('headM', opts.headM, NON_NEGATIVE);
+  const tubeInnerDiameterM = checkRange('tubeInnerDiameterM', opts.tubeInnerDiameterM, POSITIVE);
+  const tubeLengthM = checkRange('tubeLengthM', opts.tubeLengthM, NON_NEGATIVE);
+  const orificeM = checkRange('orificeM', opts.orificeM, POSITIVE);
+  const densityKgM3 = checkRange('densityKgM3', opts.densityKgM3, POSITIVE);
+  const viscosityPaS = checkRange('viscosityPaS', opts.viscosityPaS, POSITIVE);
+  const entranceLossK = checkRange('entranceLossK', opts.entranceLossK ?? SHARP_ENTRANCE_LOSS, NON_NEGATIVE);
   const dischargeCoefficient = checkRange('dischargeCoefficient', opts.dischargeCoefficient ?? ORIFICE_DISCHARGE_COEFFICIENT, {
     min: 0,
     minExclusive: true,
@@ -85,7 +85,7 @@ export function supplyFlow(opts: SupplyFlowOptions): SupplyFlowResult {
     note: 'a tenth of tubeInnerDiameterM',
   });
 
-  const boreLengthM = checkRange('boreLengthM', opts.boreLengthM ?? 0, { min: 0 });
+  const boreLengthM = checkRange('boreLengthM', opts.boreLengthM ?? 0, NON_NEGATIVE);
   const bridge = opts.bridge ?? 'linear';
   const flowM3s = valveFlowM3s(
     { headM, tubeInnerDiameterM, tubeLengthM, orificeM, densityKgM3, viscosityPaS, entranceLossK, dischargeCoefficient, roughnessM, boreLengthM, bridge },

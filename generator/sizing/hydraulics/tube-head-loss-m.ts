@@ -1,5 +1,5 @@
 import { STANDARD_GRAVITY, TUBE_ROUGHNESS_M } from '../constants.ts';
-import { checkRange } from './check-range.ts';
+import { checkRange, POSITIVE, NON_NEGATIVE } from './check-range.ts';
 import { MAX_RELATIVE_ROUGHNESS } from './colebrook-friction-factor.ts';
 import { darcyFrictionFactor, type FrictionBridge } from './darcy-friction-factor.ts';
 import { reynoldsNumber } from './reynolds-number.ts';
@@ -35,15 +35,16 @@ export interface TubeHeadLossOptions {
  * Source: Darcy-Weisbach equation and Hagen-Poiseuille law (White, Fluid Mechanics, ch. 6).
  */
 export function tubeHeadLossM(opts: TubeHeadLossOptions): number {
-  const flowM3s = checkRange('flowM3s', opts.flowM3s, { min: 0 });
-  const d = checkRange('innerDiameterM', opts.innerDiameterM, { min: 0, minExclusive: true });
-  const lengthM = checkRange('lengthM', opts.lengthM, { min: 0 });
-  const roughnessM = checkRange('roughnessM', opts.roughnessM ?? TUBE_ROUGHNESS_M, {
-    min: 0,
-    max: MAX_RELATIVE_ROUGHNESS * d,
-    note: 'a tenth of innerDiameterM',
-  });
-  const minorLossK = checkRange('minorLossK', opts.minorLossK ?? 0, { min: 0 });
+  const flowM3s = checkRange('flowM3s', opts.flowM3s, NON_NEGATIVE);
+  const d = checkRange('innerDiameterM', opts.innerDiameterM, POSITIVE);
+  const lengthM = checkRange('lengthM', opts.lengthM, NON_NEGATIVE);
+  const roughnessRaw = opts.roughnessM ?? TUBE_ROUGHNESS_M;
+  // the range depends on d: built (and checked in full) only when the quick test fails
+  const roughnessM =
+    typeof roughnessRaw === 'number' && roughnessRaw >= 0 && roughnessRaw <= MAX_RELATIVE_ROUGHNESS * d
+      ? roughnessRaw
+      : checkRange('roughnessM', roughnessRaw, { min: 0, max: MAX_RELATIVE_ROUGHNESS * d, note: 'a tenth of innerDiameterM' });
+  const minorLossK = checkRange('minorLossK', opts.minorLossK ?? 0, NON_NEGATIVE);
   const reynolds = reynoldsNumber({ flowM3s, innerDiameterM: d, densityKgM3: opts.densityKgM3, viscosityPaS: opts.viscosityPaS });
   if (flowM3s === 0) return 0;
   const velocityMS = (4 * flowM3s) / (Math.PI * d * d);
