@@ -10,7 +10,7 @@
 import { z } from 'zod';
 import { HEAD_CAP_M, STANDARD_GRAVITY, WATER_DENSITY_20C, WATER_VISCOSITY_20C } from '../sizing/constants.ts';
 import type { CalibrationPoint, DesignInputs } from '../sizing/inputs.ts';
-import { fitSealCalibration } from '../sizing/hydrostatics/fit-seal-calibration.ts';
+import { fitSealCalibration, headsDefineSlope } from '../sizing/hydrostatics/fit-seal-calibration.ts';
 import { DEFAULT_MATERIAL_NAME, findMaterial, materialNames } from '../sizing/materials.ts';
 import { AUTO_PAD, PADS, findPad, padNames } from '../sizing/seal/pads.ts';
 import { chooseSeal } from '../sizing/seal/choose-seal.ts';
@@ -505,7 +505,11 @@ function calibrationFitProblem(points: CalibrationPoint[], text: { head: string;
   if (areaM2 > 0) return null;
   const shown = text.slice(0, 4).map((p) => `${p.mass} at ${p.head}`).join(', ') + (text.length > 4 ? ', ...' : '');
   const area = Number.isFinite(areaM2) ? ` (fitted seal area ${formatNumber(areaM2 * 1e6)} mm2)` : '';
-  return `${shown} do not rise with head${area}; the mass that stops the flow must grow with the head (fitted seal area more than 0 mm2${points.length === 1 || new Set(points.map((p) => p.headM)).size === 1 ? `, and above the pad's ${formatNumber(Number(seatN.toPrecision(3)))} N seating force` : ''}): check the heads and masses.`;
+  if (!headsDefineSlope(points)) {
+    const one = points.length === 1 ? 'one bench point' : 'bench points at heads less than 1 % apart (they count as one head)';
+    return `${shown}: ${one} can only set the seal's area, with the pad's own seating force of ${formatNumber(Number(seatN.toPrecision(3)))} N taken as the rest, so each mass must weigh more than that (${formatNumber(Number(((seatN / STANDARD_GRAVITY) * 1e3).toPrecision(3)))} g); for a line of your own, weigh at two heads well apart.`;
+  }
+  return `${shown} do not rise with head${area}; the mass that stops the flow must grow with the head (fitted seal area more than 0 mm2): check the heads and masses.`;
 }
 
 export type DesignParse = { ok: true; inputs: DesignInputs; document: NormalizedDoc } | { ok: false; errors: FieldError[] };

@@ -23,6 +23,7 @@ import type { DesignInputs } from '../../generator/sizing/inputs.ts';
 import type { SizingResult, SizingSuccess, WayOut } from '../../generator/sizing/result.ts';
 import { parseDesign } from '../../generator/doc/schema.ts';
 import { sizeDesign } from '../../generator/sizing/size-design.ts';
+import { headsDefineSlope } from '../../generator/sizing/hydrostatics/fit-seal-calibration.ts';
 import { setPath, type DesignSpec } from './arbitraries.ts';
 import {
   countEdgeUses,
@@ -297,5 +298,7 @@ export function wayOutProblems(doc: Record<string, unknown>, s: Exclude<SizingRe
 export function calibrationMayBeRefused(spec: DesignSpec, doc: unknown): boolean {
   if (!spec.calibration) return false;
   const written = ((doc as { seal?: { calibration?: { head: unknown }[] } }).seal?.calibration ?? []).map((p) => p.head);
-  return spec.calibration.line === null || spec.calibration.line.scatter > 0 || new Set(written).size <= 1;
+  // heads less than 1 % apart count as one head (headsDefineSlope, the fit's own rule)
+  const oneHead = !headsDefineSlope(written.map((h) => ({ headM: Number(h) })));
+  return spec.calibration.line === null || spec.calibration.line.scatter > 0 || oneHead;
 }

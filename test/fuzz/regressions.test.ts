@@ -29,7 +29,15 @@ describe('regressions found by the fuzzing', () => {
     // one point under the pad's seating force: m g = 0.1 g * 9.80665 m/s2 = 0.98 mN, far below any pad's (seed run 2, explore script)
     const one = refusal({ supply: { headMax: '2 m' }, level: { target: '40 mm' }, seal: { calibration: [{ head: 0.01, mass: '0.1 g' }] } });
     expect(one[0].field).toBe('seal.calibration');
-    expect(one[0].message).toMatch(/above the pad's [\d.]+ N seating force/);
+    expect(one[0].message).toMatch(/one bench point can only set the seal's area, with the pad's own seating force of [\d.]+ N/);
+    // two heads 0.8 % apart count as one (soak seed 555637040, #167: was "do not rise with head" for masses that rise)
+    const close = refusal({
+      supply: { headMax: '0.18 m' }, level: { target: '48 mm' }, nozzle: { sealDiameter: '2.4 mm' },
+      seal: { pad: 'sponge-2', calibration: [{ head: 0.0552654225586, mass: '1.2798 g' }, { head: 0.0557165386943, mass: '1.2902 g' }] },
+    });
+    expect(close[0].field).toBe('seal.calibration');
+    expect(close[0].message).toMatch(/heads less than 1 % apart \(they count as one head\)/);
+    expect(close[0].message).not.toMatch(/do not rise/);
   });
 
   it('a design no float can lift says why (was: a failure with no reasons)', () => {

@@ -35,6 +35,20 @@ export interface SealFit {
  * @param defaultPreloadN preload to hold when a line cannot be fitted, N
  * @throws RangeError if there are no points or the fit gives a non-positive area
  */
+/**
+ * Whether bench points' heads are spread enough to define a slope: their spread (the root-mean-square
+ * distance from the mean head) at least 1 % of the mean head. Heads closer than that count as one head,
+ * and the fit then holds the preload at the pad's seating force (fitSealCalibration).
+ * Example: 0.0553 and 0.0557 m (0.4 % apart from their mean) count as one head; 0.5 and 1.0 m do not.
+ */
+export function headsDefineSlope(points: readonly Pick<CalibrationPoint, 'headM'>[]): boolean {
+  const n = points.length;
+  if (n < 2) return false;
+  const mean = points.reduce((a, p) => a + p.headM, 0) / n;
+  const spread = points.reduce((a, p) => a + (p.headM - mean) ** 2, 0);
+  return spread > (0.01 * mean) ** 2 * n;
+}
+
 export function fitSealCalibration(
   points: readonly CalibrationPoint[],
   densityKgM3: number,
@@ -51,7 +65,7 @@ export function fitSealCalibration(
   let area: number;
   let preload: number;
   // A spread of heads under 1 % of the mean cannot define a slope.
-  if (n >= 2 && sxx > (0.01 * xbar) ** 2 * n) {
+  if (headsDefineSlope(points)) {
     const sxf = xs.reduce((a, x, i) => a + (x - xbar) * (fs[i] - fbar), 0);
     area = sxf / sxx;
     preload = fbar - area * xbar;
