@@ -2,7 +2,9 @@
  * Quantities in a design document: a number in the field's stated unit, or a
  * string with a unit ("2.4 m", "40mm", "1.27 g/cm3", "3 psi", "31 g").
  * Units are case-insensitive, the space before them optional, ² and ³ allowed.
- * A decimal comma ("2,4 m") is refused rather than guessed at.
+ * A decimal comma ("2,4 m") is refused rather than guessed at. Lengths also
+ * take feet and inches together ("7' 2\"", "7 ft 2 in", "7 ft 2 1/2 in") and
+ * fractions ("5/32 in", "1 1/2 in"), as tape measures and US hardware are marked.
  *
  * Results are in SI (m, Pa, kg/m3, N, kg, m2, Pa s). A force given as a mass
  * ("31 g") is that mass's weight in standard gravity. A head may be given as a
@@ -10,7 +12,10 @@
  * density is known (H = p / (rho g)).
  */
 import { STANDARD_GRAVITY } from '../sizing/constants.ts';
-import { findUnit, scaleFromSi, scaleToSi, unitBySymbol, type Dimension } from './unit-table.ts';
+import { FOOT_M, INCH_M, findUnit, scaleFromSi, scaleToSi, unitBySymbol, type Dimension } from './unit-table.ts';
+
+/** The unit reported for a length written as feet and inches together ("7' 2\""). */
+export const FEET_INCHES = 'ft+in';
 
 export type QuantityKind = Dimension | 'head' | 'number';
 
@@ -20,7 +25,7 @@ export interface Quantity {
   si: number;
   /** what was measured; a force written as a mass is reported as 'force' */
   dimension: Dimension | 'number';
-  /** symbol of the unit used (the field's unit when a bare number was given) */
+  /** symbol of the unit used (the field's unit when a bare number was given; FEET_INCHES for "7' 2\"") */
   unit: string;
 }
 
@@ -56,6 +61,26 @@ const KIND_NOUN: Record<QuantityKind, string> = {
 
 const MAX_TEXT_LENGTH = 64;
 const NUMBER_THEN_UNIT = /^([+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:e[+-]?\d+)?)\s*(.*)$/i;
+/** "5/32", "1 1/2", "1-1/2" (a whole number, then a fraction) before the unit. */
+const FRACTION_THEN_UNIT = /^(?:(\d+)(?:\s+|-))?(\d+)\/(\d+)(?![\d.])\s*(.*)$/;
+/** Feet then inches: "7' 2\"", "7 ft 2 in", "7ft 2 1/2in", "7' 2" (the inches' own mark may be left off). */
+const FEET_THEN_INCHES =
+  /^(\d+(?:\.\d+)?)\s*(?:(?:'|\u2032)\s*|(?:ft|feet|foot)\s+)(\d+(?:\.\d+)?|(?:\d+(?:\s+|-))?\d+\/\d+)\s*(?:"|\u2033|''|in|inch|inches)?$/i;
+
+/**
+ * A fraction or mixed number as a value: "5/32" -> 0.15625, "1 1/2" -> 1.5, "1-1/2" -> 1.5; NaN when the
+ * text is not one (or divides by zero).
+ */
+export function fractionValue(text: string): number {
+  const m = /^(?:(\d+)(?:\s+|-))?(\d+)\/(\d+)$/.exec(text.trim());
+  if (!m || Number(m[3]) === 0) return Number.NaN;
+  return Number(m[1] ?? 0) + Number(m[2]) / Number(m[3]);
+}
+
+/** A value, decimal or fraction: "2.5" -> 2.5, "5/32" -> 0.15625. */
+function plainValue(text: string): number {
+  return text.includes('/') ? fractionValue(text) : Number(text);
+}
 
 /** The field unit used for bare numbers when none is given. */
 export const DEFAULT_UNIT: Record<QuantityKind, string> = {
@@ -148,10 +173,20 @@ export function parseQuantity(input: unknown, kind: QuantityKind, unit: string =
       message: `${showInput(input)} has a comma; write decimals with a point and no thousands separators${single}`,
     };
   }
-  const match = NUMBER_THEN_UNIT.exec(text);
+  const feetInches = FEET_THEN_INCHES.exec(text);
+  if (feetInches) {
+    if (!ACCEPTS[kind].includes('length')) return fail(`feet and inches measure length`);
+    const inches = plainValue(feetInches[2]);
+    if (!Number.isFinite(inches)) return fail('a fraction over zero');
+    if (inches >= 12) return fail(`${formatNumber(inches)} inches is a foot or more; write it in feet`);
+    return sized({ si: Number(feetInches[1]) * FOOT_M + inches * INCH_M, dimension: 'length', unit: FEET_INCHES });
+  }
+  const fraction = FRACTION_THEN_UNIT.exec(text);
+  const match = fraction ? ([text, `${fraction[1] ?? ''} ${fraction[2]}/${fraction[3]}`.trim(), fraction[4]] as const) : NUMBER_THEN_UNIT.exec(text);
   if (!match) return fail();
-  const value = Number(match[1]);
+  const value = fraction ? fractionValue(match[1]) : Number(match[1]);
   const unitText = match[2].trim();
+  if (fraction && !Number.isFinite(value)) return fail('a fraction over zero');
   if (!Number.isFinite(value)) return fail('not a finite number');
   if (unitText === '') return bare(value);
   if (kind === 'number') return fail('no unit expected');

@@ -215,7 +215,7 @@ describe('refusals say what was expected', () => {
     expect(message(parseLength(Number.NaN))).toContain('not a finite number');
     expect(message(parseLength(Infinity))).toContain('not a finite number');
     expect(message(parseLength('Infinity mm'))).toContain('is not a length');
-    expect(message(parseLength(`2' 6"`))).toContain('unknown unit');
+    expect(message(parseLength('2 m 6 cm'))).toContain('unknown unit'); // feet and inches are the one compound taken
     expect(message(parseLength('x'.repeat(100)))).toContain('longer than');
   });
 
@@ -242,5 +242,38 @@ describe('formatting', () => {
         return Math.abs(back - si) <= 1e-12 * si;
       }),
     );
+  });
+});
+
+// Feet and inches together, and fractions, as tape measures and US hardware are marked. Expected values from the
+// exact definitions 1 ft = 0.3048 m and 1 in = 0.0254 m (NIST SP 811, App. B); cross-checked with js-quantities.
+describe('feet and inches, and fractions (NIST SP 811, App. B)', () => {
+  it("7' 2\" and 7 ft 2 in are 86 in = 2.1844 m", () => {
+    const expected = 86 * 0.0254;
+    for (const text of [`7' 2"`, '7 ft 2 in', "7'2\"", '7ft 2in', '7 feet 2 inches', "7' 2", '7 ft 2', '7\u2032 2\u2033']) {
+      expect(value(parseLength(text)), text).toBeCloseTo(expected, 12);
+    }
+    expect(expected).toBeCloseTo(Qty('86 in').to('m').scalar, 12);
+  });
+
+  it('a head in feet and inches: 7 ft 2 in of water is 2.1844 m', () => {
+    expect(value(parseHead('7 ft 2 in', 998.2))).toBeCloseTo(2.1844, 12);
+  });
+
+  it('fractions and mixed numbers: 5/32 in = 3.96875 mm, 1 1/2 in = 38.1 mm, 7 ft 2 1/2 in = 2.197 m', () => {
+    expect(value(parseLength('5/32 in'))).toBeCloseTo(0.00396875, 15);
+    expect(value(parseLength('5/32"'))).toBeCloseTo(0.00396875, 15);
+    expect(value(parseLength('1 1/2 in'))).toBeCloseTo(0.0381, 15);
+    expect(value(parseLength('1-1/2 in'))).toBeCloseTo(0.0381, 15);
+    expect(value(parseLength('7 ft 2 1/2 in'))).toBeCloseTo(86.5 * 0.0254, 12);
+    expect(value(parseLength('3/4', 'in'))).toBeCloseTo(0.01905, 15); // a bare fraction in the field's unit
+    expect(value(parseLength('5/32 in'))).toBeCloseTo(Qty('5 in').div(32).to('m').scalar, 15);
+  });
+
+  it('refuses what a tape measure would not show, saying why', () => {
+    expect(message(parseLength('7 ft 14 in'))).toMatch(/a foot or more/);
+    expect(message(parseLength('1/0 in'))).toMatch(/over zero/);
+    expect(message(parseMass("7' 2\""))).toMatch(/measure length/);
+    expect(parseLength('7 ft 2 m').ok).toBe(false);
   });
 });

@@ -61,3 +61,23 @@ describe('switching systems', () => {
     expect(ALL_FIELDS.every(known)).toBe(true);
   });
 });
+
+describe('imperial as growers write it (NIST SP 811: 1 in = 25.4 mm, 1 ft = 0.3048 m)', () => {
+  const tube = ALL_FIELDS.find((f) => f.path === 'supply.tubeInnerDiameter')!;
+  it('a fraction typed in an inch box is inches, and shows as typed', () => {
+    expect(documentValue('5/32', tube, 'imperial')).toBe('5/32 in');
+    expect(displayText('5/32 in', tube, 'imperial')).toBe('5/32');
+    expect(documentValue('1 1/2', level, 'imperial')).toBe('1 1/2 in');
+  });
+  it("feet and inches in a feet box stay as typed; switching to metric gives 2.184 m for 7' 2\"", () => {
+    expect(documentValue(`7' 2"`, head, 'imperial')).toBe(`7' 2"`);
+    expect(displayText(`7' 2"`, head, 'imperial')).toBe(`7' 2"`);
+    expect(convertValue(`7' 2"`, head, 'm')).toBe('2.184 m'); // 86 in = 2.1844 m, to the millimetre
+  });
+  it('rounds sensibly: 2.2 m is 7.22 ft, not 7.2178; 45 mm is 1.77 in', () => {
+    expect(convertValue('2.2 m', head, 'ft')).toBe('7.22 ft');
+    expect(displayText('2.2 m', head, 'imperial')).toBe('2.2 m'); // typed in another unit: kept as written
+    expect(displayText(2.2, head, 'imperial')).toBe('7.22');
+    expect(convertValue('45 mm', level, 'in')).toBe('1.77 in');
+  });
+});

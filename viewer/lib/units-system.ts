@@ -5,7 +5,8 @@
  * Print settings (walls, nozzle, pad) stay in millimetres in both systems:
  * slicers and printers work in millimetres.
  */
-import { formatNumber, fromSi, parseQuantity, type QuantityKind } from '../../generator/doc/units.ts';
+import { fractionValue, fromSi, parseQuantity, type QuantityKind } from '../../generator/doc/units.ts';
+import { shownNumber } from '../../generator/doc/shown-number.ts';
 import { FIELD_UNITS } from '../../generator/doc/schema.ts';
 import { getAt, setAt, type Doc } from './doc-path.ts';
 
@@ -30,8 +31,17 @@ export function documentUnit(path: string): string {
 
 const BARE_NUMBER = /^\s*[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:e[+-]?\d+)?\s*$/i;
 
+/** A number with no unit: "2.5", "5/32", "1 1/2" (fractions as rulers and US hardware are marked). */
 export function isBareNumber(text: string): boolean {
-  return BARE_NUMBER.test(text);
+  return BARE_NUMBER.test(text) || Number.isFinite(fractionValue(text));
+}
+
+/** The number part of text written in `unit` ("5/32 in" -> "5/32", "45 mm" -> "45"), or null. */
+function numberPart(text: string, unit: string): string | null {
+  const trimmed = text.trim();
+  if (!unit) return isBareNumber(trimmed) ? trimmed : null;
+  const m = /^(.*?)\s*([^\d\s/.]\S*)$/.exec(trimmed);
+  return m && m[2] === unit && isBareNumber(m[1]) ? m[1] : null;
 }
 
 export function unitFor(def: Pick<FieldDef, 'metric' | 'imperial'>, system: UnitSystem): string {
@@ -49,12 +59,12 @@ export function displayText(raw: unknown, def: FieldDef, system: UnitSystem): st
   if (typeof raw === 'number') {
     if (!unit || unit === docUnit) return String(raw);
     const parsed = parseQuantity(raw, def.kind, docUnit || undefined);
-    return parsed.ok ? `${formatNumber(fromSi(parsed.quantity.si, unit), 5)}` : String(raw);
+    return parsed.ok ? shownNumber(fromSi(parsed.quantity.si, unit), unit) : String(raw);
   }
   const text = String(raw);
   const parsed = parseQuantity(text, def.kind, docUnit || undefined);
   if (parsed.ok && (parsed.quantity.unit === unit || (!unit && parsed.quantity.dimension === 'number'))) {
-    return text.match(/^\s*([+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:e[+-]?\d+)?)/i)?.[1] ?? text;
+    return numberPart(text, unit) ?? text;
   }
   return text;
 }
@@ -75,7 +85,7 @@ export function convertValue(raw: unknown, def: FieldDef, unit: string): unknown
   if (!parsed.ok || parsed.quantity.dimension === 'pressure' || parsed.quantity.dimension === 'number') return raw;
   if (parsed.quantity.dimension === 'force' && def.kind !== 'force') return raw;
   if (parsed.quantity.unit === unit) return raw;
-  return `${formatNumber(fromSi(parsed.quantity.si, unit), 5)} ${unit}`;
+  return `${shownNumber(fromSi(parsed.quantity.si, unit), unit)} ${unit}`;
 }
 
 /** A copy of the document with every listed field written in the system's units. */
