@@ -149,8 +149,8 @@ describe.skipIf(!haveChromium)('workbench in Chromium', () => {
     const before = await buildId();
     await page.getByLabel('imperial').check();
     await waitBuildAfter(before);
-    // 45 mm / 25.4 mm per inch (NIST SP 811: the inch is exactly 25.4 mm) = 1.7717 in
-    expect(await page.getByLabel('Water depth to hold').inputValue()).toBe('1.7717');
+    // 45 mm / 25.4 mm per inch (NIST SP 811: the inch is exactly 25.4 mm) = 1.7717 in, shown to the hundredth
+    expect(await page.getByLabel('Water depth to hold').inputValue()).toBe('1.77');
     await expect.poll(() => page.locator('[data-result="level-full"]').textContent()).toBe('1.77 in');
     await shot('03-imperial');
     const again = await buildId();
@@ -365,5 +365,54 @@ describe.skipIf(!haveChromium)('workbench in Chromium', () => {
     }
     // the parser used here does refuse what XML forbids (the check can fail)
     expect(await page.evaluate(() => new DOMParser().parseFromString('<a>\u0001</a>', 'application/xml').getElementsByTagName('parsererror').length)).toBeGreaterThan(0);
+  });
+
+  it('at 390x844: one column (inputs, summary, view, details), a view of fixed height, nothing wider than the screen, cautions foldable and always reachable', async () => {
+    await page.setViewportSize({ width: 390, height: 844 });
+    await page.goto(url);
+    await waitPreviewAfter(0);
+    const top = async (selector: string) => (await page.locator(selector).first().boundingBox())!.y;
+    const order = [await top('fw-design-form'), await top('fw-results[show="summary"]'), await top('fw-valve-view'), await top('fw-results[show="details"]')];
+    expect([...order].sort((a, b) => a - b)).toEqual(order);
+    const pageWidth = () => page.evaluate(() => Math.max(document.documentElement.scrollWidth, document.body.scrollWidth));
+    expect(await pageWidth()).toBeLessThanOrEqual(390);
+    const viewHeight = async () => (await page.locator('fw-valve-view').boundingBox())!.height;
+    const first = await viewHeight();
+    expect(first).toBeGreaterThan(200);
+    expect(first).toBeLessThan(420);
+    const before = await buildId();
+    await page.getByLabel('Water depth to hold').fill('48');
+    await waitPreviewAfter(before);
+    expect(await viewHeight()).toBe(first); // it no longer grows with every redraw
+    await page.screenshot({ path: join(SHOTS, '15-phone-full.png'), fullPage: true });
+    await shot('15-phone');
+    // the cautions: open on a first visit, fold to one line kept at the bottom edge, open again in one click
+    const cautions = page.locator('fw-cautions details');
+    const folded = await cautions.evaluate((d) => !(d as HTMLDetailsElement).open);
+    if (folded) await page.locator('fw-cautions summary').click();
+    expect(await page.getByText('Low pressure only').isVisible()).toBe(true);
+    await page.locator('fw-cautions summary').click();
+    await expect.poll(() => page.getByText('Low pressure only').isVisible()).toBe(false);
+    await page.mouse.wheel(0, 1500);
+    const bar = (await page.locator('fw-cautions').boundingBox())!;
+    expect(bar.y + bar.height).toBeLessThanOrEqual(844 + 0.5);
+    expect(bar.y).toBeGreaterThan(844 - 80);
+    await shot('16-phone-scrolled');
+    await page.locator('fw-cautions summary').click();
+    expect(await page.getByText('Low pressure only').isVisible()).toBe(true);
+    expect(await pageWidth()).toBeLessThanOrEqual(390);
+  });
+
+  it('at 1024x768 the columns sit side by side without overlapping', async () => {
+    await page.setViewportSize({ width: 1024, height: 768 });
+    await page.goto(url);
+    await waitPreviewAfter(0);
+    const boxes = await Promise.all(['fw-app .left', 'fw-app .middle', 'fw-app .summary', 'fw-app .right'].map(async (s) => (await page.locator(s).boundingBox())!));
+    const overlap = (a: { x: number; y: number; width: number; height: number }, b: typeof a) =>
+      a.x < b.x + b.width - 0.5 && b.x < a.x + a.width - 0.5 && a.y < b.y + b.height - 0.5 && b.y < a.y + a.height - 0.5;
+    for (let i = 0; i < boxes.length; i++) for (let j = i + 1; j < boxes.length; j++) expect(overlap(boxes[i], boxes[j]), `boxes ${i} and ${j}`).toBe(false);
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(1024);
+    await shot('17-1024');
+    await page.setViewportSize({ width: 1400, height: 900 });
   });
 });

@@ -69,35 +69,56 @@ export class FwApp extends LitElement {
   static override styles = [
     shared,
     css`
-      :host { display: grid; grid-template-rows: auto 1fr auto; height: 100vh; background: var(--paper); }
-      header { display: flex; flex-wrap: wrap; align-items: center; gap: 0.6rem 1.2rem; padding: 0.45rem 1rem; background: var(--leaf); color: #fff; }
+      :host { display: grid; grid-template-rows: auto auto 1fr auto; height: 100vh; background: var(--paper); }
+      header { display: flex; flex-wrap: wrap; align-items: center; gap: 0.4rem 1.2rem; padding: 0.45rem 1rem; background: var(--leaf); color: #fff; }
       header h1 { font-size: 1.15rem; margin: 0; }
       header h1 small { font-weight: normal; opacity: 0.85; }
       header label, header legend { font-size: 0.9rem; }
-      header select { font: inherit; padding: 0.15rem 0.3rem; border-radius: 5px; }
+      header select { font: inherit; padding: 0.15rem 0.3rem; border-radius: 5px; max-width: 14rem; }
       header fieldset { border: 0; margin: 0; padding: 0; display: flex; gap: 0.5rem; align-items: center; }
       header legend { float: left; margin-right: 0.3rem; }
-      .status { margin-left: auto; font-size: 0.82rem; opacity: 0.9; }
-      main { display: grid; grid-template-columns: minmax(17rem, 21rem) minmax(22rem, 1fr) minmax(19rem, 25rem); gap: 0.8rem; padding: 0.8rem; overflow: hidden; min-height: 0; }
-      main > * { overflow: auto; min-height: 0; }
-      .middle { display: flex; flex-direction: column; gap: 0.6rem; }
+      /* Wide: inputs | view and plots | summary above the details. Narrow: one column, in the order inputs,
+         summary, view, details (grid areas place them; the wide page reads inputs, view, then the figures). */
+      main {
+        display: grid; gap: 0.8rem; padding: 0.8rem; overflow: hidden; min-height: 0;
+        grid-template-columns: minmax(17rem, 21rem) minmax(22rem, 1fr) minmax(19rem, 25rem);
+        grid-template-areas: 'inputs view side';
+      }
+      main > * { overflow: auto; min-height: 0; min-width: 0; }
+      .left { grid-area: inputs; }
+      /* wide: summary and details scroll together in the third column; narrow: the wrapper steps aside
+         (display: contents) and each takes its own place in the single column */
+      .side { grid-area: side; display: flex; flex-direction: column; gap: 0.6rem; }
+      .summary { grid-area: summary; display: flex; flex-direction: column; gap: 0.6rem; }
+      .middle { grid-area: view; display: flex; flex-direction: column; gap: 0.6rem; }
+      .right { grid-area: details; display: flex; flex-direction: column; gap: 0.6rem; }
       fw-valve-view { flex: 1 1 auto; min-height: 320px; }
       .viewbar { display: flex; flex-wrap: wrap; gap: 0.3rem 1rem; align-items: center; font-size: 0.9rem; }
-      .viewbar fieldset { border: 0; padding: 0; margin: 0; display: flex; gap: 0.5rem; }
+      .viewbar fieldset { border: 0; padding: 0; margin: 0; display: flex; flex-wrap: wrap; gap: 0.2rem 0.5rem; }
       .viewbar legend { float: left; margin-right: 0.3rem; color: var(--muted); }
-      .notice { margin: 0 0.8rem; padding: 0.4rem 0.7rem; border-radius: 6px; display: flex; gap: 0.6rem; align-items: baseline; }
+      .notice { margin: 0 0.8rem; padding: 0.4rem 0.7rem; border-radius: 6px; display: flex; flex-wrap: wrap; gap: 0.6rem; align-items: baseline; overflow-wrap: anywhere; }
       .notice.bad { background: var(--bad-soft); border: 1px solid var(--bad); }
       .notice.good { background: var(--leaf-soft); border: 1px solid var(--leaf); }
-      .notice input { flex: 1; font: inherit; min-width: 10rem; }
+      .notice input { flex: 1; font: inherit; min-width: 10rem; max-width: 100%; }
       .notice button { margin-left: auto; }
-      .right { display: flex; flex-direction: column; gap: 0.6rem; }
       .out-of-date { margin: 0; padding: 0.25rem 0.6rem; border-radius: 5px; background: var(--bad-soft); border: 1px solid var(--bad); font-size: 0.85rem; }
       fw-valve-view.stale, fw-flow-plot.stale { opacity: 0.6; }
+      fw-cautions { z-index: 2; }
+      /* 1024 px and the like: the view column narrows before anything overlaps */
+      @media (max-width: 1180px) {
+        main { grid-template-columns: minmax(16rem, 19rem) minmax(0, 1fr) minmax(16rem, 21rem); }
+      }
       @media (max-width: 900px) {
-        :host { height: auto; }
-        main { grid-template-columns: 1fr; overflow: visible; }
-        fw-valve-view { flex: none; height: min(60vh, 420px); }
+        :host { display: block; height: auto; }
+        header { padding: 0.4rem 0.7rem; gap: 0.3rem 0.8rem; }
+        header h1 small { display: none; }
+        main { grid-template-columns: minmax(0, 1fr); grid-template-rows: none; grid-template-areas: 'inputs' 'summary' 'view' 'details'; overflow: visible; padding: 0.6rem; }
+        main > * { overflow: visible; }
+        .side { display: contents; }
+        /* a fixed height: a view sized by its content grew with every redraw */
+        fw-valve-view { flex: none; height: 320px; min-height: 0; }
         fw-cautions { position: sticky; bottom: 0; }
+        .notice { margin: 0 0.6rem; }
       }
     `,
   ];
@@ -230,7 +251,7 @@ export class FwApp extends LitElement {
     const doc = this.docsById.get(reply.id);
     for (const k of this.docsById.keys()) if (k <= reply.id) this.docsById.delete(k);
     this.result = reply.sizing;
-    this.timing = `sized in ${reply.sizeMs.toFixed(0)} ms, parts in ${reply.buildMs.toFixed(0)} ms`;
+    this.timing = `Sized in ${reply.sizeMs.toFixed(0)} ms; parts drawn in ${reply.buildMs.toFixed(0)} ms.`;
     this.setAttribute('data-size-ms', reply.sizeMs.toFixed(1));
     this.setAttribute('data-parts-ms', reply.buildMs.toFixed(1));
     if (reply.sizing.ok) {
@@ -415,7 +436,6 @@ export class FwApp extends LitElement {
           <label><input type="radio" name="units" value="metric" .checked=${this.units === 'metric'} @change=${() => this.setUnits('metric')} /> metric</label>
           <label><input type="radio" name="units" value="imperial" .checked=${this.units === 'imperial'} @change=${() => this.setUnits('imperial')} /> imperial</label>
         </fieldset>
-        <span class="status" role="status">${this.timing}</span>
       </header>
       <div>
         ${this.renderNotice()}
@@ -442,9 +462,14 @@ export class FwApp extends LitElement {
           <fw-push-plot .sizing=${good} .units=${this.units}></fw-push-plot>
           <fw-flow-plot class=${outOfDate ? 'stale' : ''} .band=${good} .units=${this.units}></fw-flow-plot>
         </div>
-        <div class="right">
-          <fw-results .result=${this.result} .lastGood=${good} .units=${this.units} .stale=${Object.keys(this.errors).length > 0 || outOfDate} @apply-way-out=${this.applyWayOut}></fw-results>
+        <div class="side">
+        <div class="summary">
+          <fw-results show="summary" .result=${this.result} .lastGood=${good} .units=${this.units} .stale=${Object.keys(this.errors).length > 0 || outOfDate} @apply-way-out=${this.applyWayOut}></fw-results>
           <fw-file-bar .disabled=${blocked !== null} .reason=${blocked ?? ''} .busy=${this.busy} @export-request=${this.exportRequest} @import-file=${this.importFile} @share-link=${this.shareLink}></fw-file-bar>
+        </div>
+        <div class="right">
+          <fw-results show="details" .result=${this.result} .lastGood=${good} .units=${this.units} .stale=${Object.keys(this.errors).length > 0 || outOfDate} .timing=${this.timing}></fw-results>
+        </div>
         </div>
       </main>
       <fw-cautions></fw-cautions>

@@ -42,6 +42,9 @@ export class FwResults extends LitElement {
       .stale { opacity: 0.55; }
       ul { margin: 0.2rem 0; padding-left: 1.2rem; }
       .band { margin: 0.2rem 0 0.5rem; }
+      .timing { color: var(--muted); font-size: 0.8rem; margin: 0.2rem 0; }
+      dl { grid-template-columns: minmax(0, 1.4fr) minmax(0, 1fr); }
+      dd { overflow-wrap: anywhere; }
     `,
   ];
 
@@ -50,14 +53,17 @@ export class FwResults extends LitElement {
   @property({ attribute: false }) lastGood: SizingSuccess | null = null;
   @property() units: UnitSystem = 'metric';
   @property({ type: Boolean }) stale = false;
+  /** which part to show: the headline and any failure ('summary'), the figures under it ('details'), or both */
+  @property() show: 'summary' | 'details' | 'all' = 'all';
+  /** how long the last sizing and parts took, said at the foot of the details (never in the page header) */
+  @property() timing = '';
 
   private wayOut(w: WayOut) {
     this.dispatchEvent(new CustomEvent<WayOut>('apply-way-out', { detail: w, bubbles: true, composed: true }));
   }
 
-  private renderSuccess(s: SizingSuccess) {
+  private renderSummary(s: SizingSuccess) {
     const u = this.units;
-    const same = Math.abs(s.inputs.headMaxM - s.inputs.headMinM) < 1e-9;
     return html`
       <section aria-label="Valve size">
         <h2>Your valve</h2>
@@ -66,7 +72,13 @@ export class FwResults extends LitElement {
           <div class="big" data-result="housing">Housing <b>${f.lengthMm(s.housing.outerDiameterMm, u)} × ${f.lengthMm(s.housing.heightMm, u)}</b></div>
           <div class="big" data-result="held-full">Holds water at <b>${f.lengthMm(s.levels.heldAtDemandMm, u)}</b></div>
         </div>
-      </section>
+      </section>`;
+  }
+
+  private renderDetails(s: SizingSuccess) {
+    const u = this.units;
+    const same = Math.abs(s.inputs.headMaxM - s.inputs.headMinM) < 1e-9;
+    return html`
       <section aria-label="Water levels">
         <h2>Water levels</h2>
         <p class="band" data-result="band-words">${flowBandWords(s, u).join(' ')}</p>
@@ -126,13 +138,23 @@ export class FwResults extends LitElement {
         <h2>What set the size</h2>
         <ul>${s.boundBy.map((b) => html`<li>${(CONSTRAINT_TEXT as Record<string, string>)[b] ?? b}</li>`)}</ul>
         ${s.warnings.map((w) => html`<div class="warn" data-warning=${w.code}>${w.message}</div>`)}
-      </section>`;
+      </section>
+      ${this.timing ? html`<p class="timing" data-timing>${this.timing}</p>` : nothing}`;
+  }
+
+  private renderSuccess(s: SizingSuccess) {
+    if (this.show === 'summary') return this.renderSummary(s);
+    if (this.show === 'details') return this.renderDetails(s);
+    return html`${this.renderSummary(s)}${this.renderDetails(s)}`;
   }
 
   override render() {
     const r = this.result;
     const failure = r && !r.ok ? r : null;
     const shown = r && r.ok ? r : this.lastGood;
+    if (this.show === 'details') {
+      return html`<div class=${failure || this.stale ? 'stale' : ''}>${shown ? this.renderDetails(shown) : nothing}</div>`;
+    }
     return html`
       ${failure
         ? html`<section class="fail" role="alert" aria-label="Cannot size">
