@@ -11,6 +11,8 @@ import { loadSaved, save } from '../lib/storage.ts';
 import { inLabels, labelFor, problemsInLabels } from '../lib/field-label.ts';
 import { keepRecent, loadRecent, recentTitle, type RecentDesign } from '../lib/recent-designs.ts';
 import { convertDocument, type UnitSystem } from '../lib/units-system.ts';
+import { isPlanDocument, loadPage, savePage, type Page } from '../lib/bench-storage.ts';
+import type { FwBenchPage, OpenValveDetail } from './fw-bench-page.ts';
 import type { BuiltReply, ExportFile } from '../worker/protocol.ts';
 import type { PartMeshes, PartTransforms } from '../worker/parts-contract.ts';
 import type { FieldInputDetail } from './fw-design-form.ts';
@@ -29,7 +31,7 @@ import './fw-cautions.ts';
 /** Wait after the last keystroke before sizing: short enough to feel live, long enough to skip half-typed numbers. */
 export const TYPING_PAUSE_MS = 40;
 
-type Notice = { kind: 'bad' | 'good'; text: string; link?: string; undo?: Doc } | null;
+type Notice = { kind: 'bad' | 'good'; text: string; link?: string; undo?: Doc; action?: { label: string; run: () => void } } | null;
 
 /** Bench rows the grower has not finished (a box still empty) are not used yet, and are not errors. */
 export function withoutBlankPoints(doc: Doc): Doc {
@@ -101,6 +103,10 @@ export class FwApp extends LitElement {
       .notice.good { background: var(--leaf-soft); border: 1px solid var(--leaf); }
       .notice input { flex: 1; font: inherit; min-width: 10rem; max-width: 100%; }
       .notice button { margin-left: auto; }
+      main[hidden] { display: none; }
+      nav.pages { display: flex; gap: 0.3rem; }
+      nav.pages button { border-color: #fff; background: transparent; color: #fff; }
+      nav.pages button[aria-pressed='true'] { background: #fff; color: var(--leaf); font-weight: 600; }
       .out-of-date { margin: 0; padding: 0.25rem 0.6rem; border-radius: 5px; background: var(--bad-soft); border: 1px solid var(--bad); font-size: 0.85rem; }
       fw-valve-view.stale, fw-flow-plot.stale { opacity: 0.6; }
       fw-cautions { z-index: 2; }
@@ -138,14 +144,21 @@ export class FwApp extends LitElement {
   @state() private timing = '';
   /** designs set aside when a link, a preset or a file replaced them (newest first) */
   @state() private recent: RecentDesign[] = [];
+  /** which page is open: one valve, or the whole bench */
+  @state() private page: Page = 'valve';
+  @state() private benchLoaded = false;
 
   @query('fw-valve-view') private viewer!: FwValveView;
+  @query('fw-bench-page') private benchPage!: FwBenchPage | null;
 
   /** set before connecting to run the builds somewhere else (tests) */
   workerFactory: WorkerFactory | undefined;
 
   private client: BuildClient | null = null;
-  private presetList: Preset[] = presets();
+  private allPresets: Preset[] = presets();
+  /** valve designs; the plan presets open on the bench page */
+  private presetList: Preset[] = this.allPresets.filter((p) => !isPlanDocument(p.doc));
+  private benchPresets: Preset[] = this.allPresets.filter((p) => isPlanDocument(p.doc));
   private typingTimer: ReturnType<typeof setTimeout> | null = null;
   private lastEditAt = 0;
   private firstBuildAfterEdit = 0;
@@ -182,6 +195,7 @@ export class FwApp extends LitElement {
     }
     this.evaluate();
     this.openFromHash();
+    if (loadPage(globalThis.localStorage) === 'bench') void this.showPage('bench');
     globalThis.addEventListener?.('hashchange', this.onHashChange);
   }
 
@@ -299,16 +313,50 @@ export class FwApp extends LitElement {
     this.evaluate();
   }
 
+  /** Switch pages; the bench page loads on its first visit and then stays, so neither page loses its state. */
+  private async showPage(page: Page): Promise<void> {
+    if (page === 'bench' && !this.benchLoaded) {
+      await import('./fw-bench-page.ts');
+      this.benchLoaded = true;
+    }
+    this.page = page;
+    savePage(globalThis.localStorage, page);
+    await this.updateComplete;
+  }
+
+  /** A plan (the plan preset, a plan file) opens on the bench page, never in the valve form. */
+  private async openOnBench(doc: Record<string, unknown>, from: string): Promise<void> {
+    await this.showPage('bench');
+    this.benchPage?.openPlan(doc, from);
+    this.notice = null;
+  }
+
+  /** A group's valve from the bench, as a new design: the one on screen is kept under "Earlier designs". */
+  private openGroupValve(e: CustomEvent<OpenValveDetail>): void {
+    const { doc, name } = e.detail;
+    this.replaceDoc(convertDocument(doc, ALL_FIELDS, this.units), `Opened the valve of the bench group "${name}".`, `the bench group "${name}"`);
+    void this.showPage('valve');
+  }
+
   private choosePreset(id: string): void {
+    const bench = this.benchPresets.find((p) => p.id === id);
+    if (bench) {
+      void this.openOnBench(bench.doc, `the bench "${bench.title}"`);
+      this.presetId = '';
+      this.requestUpdate();
+      return;
+    }
     const preset = this.presetList.find((p) => p.id === id);
     if (!preset) return;
     this.replaceDoc(convertDocument(preset.doc, ALL_FIELDS, this.units), `Started from "${preset.title}".`, `the preset "${preset.title}"`);
     this.presetId = id;
+    if (this.page !== 'valve') void this.showPage('valve');
   }
 
   private openRecent(index: number): void {
     const r = this.recent[index];
     if (r) this.replaceDoc(r.doc, 'Opened an earlier design.', 'an earlier design');
+    if (r && this.page !== 'valve') void this.showPage('valve');
   }
 
   /**
@@ -369,6 +417,14 @@ export class FwApp extends LitElement {
       this.notice = { kind: 'bad', text: `${file.name} is not a design file (it is not readable JSON). Your current design is unchanged.` };
       return;
     }
+    if (isPlanDocument(doc)) {
+      this.notice = {
+        kind: 'good',
+        text: `${file.name} is a whole-bench plan, not a single valve, so it was not put in the valve form. Your current design is unchanged.`,
+        action: { label: 'Open it on the bench page', run: () => void this.openOnBench(doc as Record<string, unknown>, file.name) },
+      };
+      return;
+    }
     const parsed = parseDesign(doc);
     if (!parsed.ok) {
       this.notice = { kind: 'bad', text: `${file.name} was not opened: ${errorList(parsed.errors)} Your current design is unchanged.` };
@@ -400,6 +456,7 @@ export class FwApp extends LitElement {
     return html`<div class="notice ${n.kind}" role=${n.kind === 'bad' ? 'alert' : 'status'} data-notice=${n.kind}>
       <span>${n.text}</span>
       ${n.link ? html`<input readonly aria-label="Share link" .value=${n.link} @focus=${(e: FocusEvent) => (e.target as HTMLInputElement).select()} />` : nothing}
+      ${n.action ? html`<button data-notice-action @click=${n.action.run}>${n.action.label}</button>` : nothing}
       ${n.undo ? html`<button data-undo @click=${() => this.replaceDoc(n.undo!, 'Your previous design is back.', 'going back')}>Put back my previous design</button>` : nothing}
       <button @click=${() => (this.notice = null)}>Dismiss</button>
     </div>`;
@@ -413,10 +470,17 @@ export class FwApp extends LitElement {
     return html`
       <header>
         <h1>floatwright <small>float valve workbench</small></h1>
+        <nav class="pages" aria-label="Pages">
+          <button data-page="valve" aria-pressed=${this.page === 'valve' ? 'true' : 'false'} @click=${() => this.showPage('valve')}>One valve</button>
+          <button data-page="bench" aria-pressed=${this.page === 'bench' ? 'true' : 'false'} @click=${() => this.showPage('bench')}>Whole bench</button>
+        </nav>
         <label>Start from
           <select @change=${(e: Event) => this.choosePreset((e.target as HTMLSelectElement).value)} aria-label="Start from a ready-made design">
             <option value="" ?selected=${this.presetId === ''}>(your design)</option>
             ${this.presetList.map((p) => html`<option value=${p.id} ?selected=${p.id === this.presetId}>${p.title}</option>`)}
+            ${this.benchPresets.length
+              ? html`<optgroup label="Whole benches (open on the bench page)">${this.benchPresets.map((p) => html`<option value=${p.id}>${p.title}</option>`)}</optgroup>`
+              : nothing}
           </select>
         </label>
         ${this.recent.length
@@ -441,7 +505,7 @@ export class FwApp extends LitElement {
         ${this.renderNotice()}
         ${formErrors.length ? html`<div class="notice bad" role="alert">${formErrors.map(([k, m]) => html`<div>${labelFor(k)}: ${inLabels(m)}</div>`)}</div>` : nothing}
       </div>
-      <main>
+      <main ?hidden=${this.page !== 'valve'}>
         <div class="left">
           <fw-design-form .doc=${this.doc} .units=${this.units} .errors=${this.errors} @field-input=${this.fieldInput}></fw-design-form>
         </div>
@@ -472,6 +536,9 @@ export class FwApp extends LitElement {
         </div>
         </div>
       </main>
+      ${this.benchLoaded
+        ? html`<fw-bench-page ?hidden=${this.page !== 'bench'} .units=${this.units} .starter=${this.benchPresets[0]?.doc ?? null} @open-valve=${this.openGroupValve}></fw-bench-page>`
+        : nothing}
       <fw-cautions></fw-cautions>
     `;
   }

@@ -52,7 +52,7 @@ export function exportFiles(kind: ExportKind, sizing: SizingSuccess, document: u
 }
 
 /** The parts on plates no larger than the design's bed: one 3MF, or numbered ones when they need more than one. */
-function plates(base: string, meshes: PartMeshes, document: unknown, sizing: SizingSuccess): ExportFile[] {
+export function plates(base: string, meshes: PartMeshes, document: unknown, sizing: SizingSuccess): ExportFile[] {
   const title = document && typeof document === 'object' && typeof (document as { name?: unknown }).name === 'string' ? (document as { name: string }).name : 'floatwright valve';
   const bed = printBedMm(sizing.inputs);
   const plate = { ...PLATE, plateWidthMm: bed.widthMm, plateDepthMm: bed.depthMm };

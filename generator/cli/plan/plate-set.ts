@@ -1,17 +1,16 @@
 /**
- * The plan's combined plate set: every part of every valve to print (each
- * design's housing, float, nozzle and pin, times its quantity) packed onto as
- * few build plates as the shelf packing allows, one 3MF per plate
- * (`plates/plate-01.3mf`, ...). The meshes are read back from the design
- * folders' binary STL files and welded by exact position, so the plates hold
- * exactly the parts the folders hold.
+ * The plan's combined plate set on disk (packing and 3MF in
+ * generator/solids/mesh/plate-set-files.ts). The meshes are read back from the
+ * design folders' binary STL files and welded by exact position, so the plates
+ * hold exactly the parts the folders hold.
  */
 import { mkdir, readFile, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
-import { meshBounds, packPlates, write3mf, type IndexedMesh } from '../../solids/mesh/index.ts';
+import type { IndexedMesh } from '../../solids/mesh/index.ts';
+import { PLATE_SET_BED, plateSetFiles, type PlateSetDesignMeshes } from '../../solids/mesh/plate-set-files.ts';
 
 /** A 256 mm square bed (common practice for a mid-size printer), 10 mm between parts. */
-export const PLATE = { plateWidthMm: 256, plateDepthMm: 256, spacingMm: 10 } as const;
+export const PLATE = PLATE_SET_BED;
 
 /** A binary STL (80-byte header, uint32 count, 50 bytes a triangle) welded into an indexed mesh. */
 export function readStlBinary(bytes: Uint8Array): IndexedMesh {
@@ -49,24 +48,15 @@ export interface PlateSetDesign {
 
 /** Writes root/plates/plate-NN.3mf, none larger than the bed (default PLATE), and returns their paths relative to root. */
 export async function writePlateSet(root: string, designs: readonly PlateSetDesign[], bed?: { widthMm: number; depthMm: number }): Promise<string[]> {
-  const items: { name: string; mesh: IndexedMesh; widthMm: number; depthMm: number }[] = [];
+  const withMeshes: PlateSetDesignMeshes[] = [];
   for (const d of designs) {
-    for (const [part, file] of Object.entries(d.stl)) {
-      const mesh = readStlBinary(await readFile(join(root, file)));
-      const b = meshBounds(mesh);
-      for (let k = 1; k <= d.quantity; k++) {
-        items.push({ name: `${d.id} ${part} ${k}/${d.quantity}`, mesh, widthMm: b.max[0] - b.min[0], depthMm: b.max[1] - b.min[1] });
-      }
-    }
+    const meshes: Record<string, IndexedMesh> = {};
+    for (const [part, file] of Object.entries(d.stl)) meshes[part] = readStlBinary(await readFile(join(root, file)));
+    withMeshes.push({ id: d.id, quantity: d.quantity, meshes });
   }
-  const bedPlate = { ...PLATE, ...(bed ? { plateWidthMm: bed.widthMm, plateDepthMm: bed.depthMm } : {}) };
-  const plates = packPlates(items, bedPlate).map((g) => g.map((i) => items[i]));
-
   await mkdir(join(root, 'plates'), { recursive: true });
   const written: string[] = [];
-  for (const [n, plate] of plates.entries()) {
-    const file = `plates/plate-${String(n + 1).padStart(2, '0')}.3mf`;
-    const bytes = write3mf(plate.map(({ name, mesh }) => ({ name, mesh })), { ...bedPlate, title: `floatwright plan, plate ${n + 1} of ${plates.length}` });
+  for (const { file, bytes } of plateSetFiles(withMeshes, bed)) {
     await writeFile(join(root, file), bytes);
     written.push(file);
   }
