@@ -14,7 +14,7 @@
  * branching pipes after White, Fluid Mechanics ch. 6).
  */
 import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
-import { existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -132,7 +132,7 @@ describe.skipIf(!haveChromium)('bench page in Chromium', () => {
     await waitSolvedAfter(before);
     expect(await page.locator('[data-result-group]').count()).toBe(5);
     // move it 25 m along the main with 4 containers: it then gets too little with everything open
-    const row = page.locator('fieldset[data-group="4"]');
+    const row = page.locator('details[data-group="4"]');
     const samples: number[] = [];
     for (const [label, value] of [['How many', '4'], ['Distance along the main', '25']] as const) {
       const box = row.getByLabel(label);
@@ -150,6 +150,25 @@ describe.skipIf(!haveChromium)('bench page in Chromium', () => {
     expect(await page.locator('[data-drawn-group="4"]').textContent()).toContain('STARVES');
     expect(await page.locator('[data-starving-summary]').textContent()).toContain('new group 5');
     await shot('bench-02-starving-1400');
+  });
+
+  it('names the box by its label when a value is wrong, never a document path', async () => {
+    const box = page.locator('details[data-group="4"]').getByLabel('Floor height');
+    const id = await solvedId();
+    await box.fill('abc');
+    await waitSolvedAfter(id);
+    const problems = page.locator('[data-problems]');
+    await expect.poll(() => problems.count()).toBe(1);
+    expect(await problems.textContent()).toContain('Floor height of "new group 5"');
+    const text = await bench().evaluate((el) => (el.shadowRoot as ShadowRoot).textContent ?? '');
+    expect(text).not.toMatch(/containers\.\d|floorElevation|tank\.full/);
+    expect(await page.getByRole('button', { name: 'Download every file (zip)' }).isDisabled()).toBe(true);
+    await shot('bench-04-bad-value-1400');
+    const again = await solvedId();
+    await box.fill('0');
+    await waitSolvedAfter(again);
+    await waitSettled();
+    expect(await problems.count()).toBe(0);
   });
 
   it('exports one zip with every file set, the plates and the plan report', async () => {
@@ -180,14 +199,52 @@ describe.skipIf(!haveChromium)('bench page in Chromium', () => {
     expect(strFromU8(entries['plan-report.md']!)).toContain('new group 5: gets');
   });
 
+  it('shows the bench in imperial units and back', async () => {
+    const box = page.locator('details[data-group="4"]').getByLabel('Distance along the main');
+    const id = await solvedId();
+    await page.getByLabel('imperial').check();
+    await waitSolvedAfter(id);
+    // 25 m / 0.3048 m per foot (NIST SP 811: the foot is exactly 0.3048 m) = 82.02 ft
+    await expect.poll(() => box.inputValue()).toBe('82.02');
+    expect(await page.locator('[data-drawn-group="4"]').textContent()).toMatch(/82\.02 ft along/);
+    expect(await page.locator('[data-result-group="4"]').textContent()).toMatch(/gal\/h/);
+    await shot('bench-05-imperial-1400');
+    const back = await solvedId();
+    await page.getByLabel('metric').check();
+    await waitSolvedAfter(back);
+    await expect.poll(() => box.inputValue()).toBe('25');
+    await waitSettled();
+  });
+
   it('opens a group\u2019s valve on the valve page as a new design, the earlier one kept', async () => {
     await page.locator('[data-open-valve="0"]').click();
     await page.locator('main').waitFor({ state: 'visible' });
-    expect(await page.getByLabel('Design name').inputValue().catch(() => 'top tier')).toContain('top tier');
     expect(await page.getByText('Opened the valve of the bench group "top tier"').count()).toBe(1);
     expect(await page.locator('[data-recent]').count()).toBe(1);
     await page.locator('button[data-page="bench"]').click();
     await bench().waitFor({ state: 'visible' });
+  });
+
+  it('offers the bench page for a plan file opened on the valve page', async () => {
+    await page.locator('button[data-page="valve"]').click();
+    await page.locator('main').waitFor({ state: 'visible' });
+    const plan = JSON.parse(readFileSync(join(ROOT, 'presets/plan-rooftop-shelf.json'), 'utf8')) as { name: string; containers: unknown[] };
+    plan.name = 'Two shelves';
+    plan.containers = plan.containers.slice(0, 2);
+    const file = join(outDir, 'two-shelves.json');
+    writeFileSync(file, JSON.stringify(plan));
+    await page.locator('fw-file-bar input[type="file"]').setInputFiles(file);
+    const offer = page.locator('button[data-notice-action]');
+    await offer.waitFor({ timeout: 10_000 });
+    expect(await page.getByText('unknown key').count()).toBe(0);
+    await offer.click();
+    await bench().waitFor({ state: 'visible' });
+    await expect.poll(() => page.locator('[data-result-group]').count()).toBe(2);
+    // the bench it replaced is kept and comes back with one click
+    const id = await solvedId();
+    await page.locator('button[data-undo]').click();
+    await waitSolvedAfter(id);
+    await expect.poll(() => page.locator('[data-result-group]').count()).toBe(5);
   });
 
   it('keeps the bench through a reload', async () => {
@@ -201,12 +258,26 @@ describe.skipIf(!haveChromium)('bench page in Chromium', () => {
     it(`lays out at ${size.width} px without sideways overflow`, async () => {
       await page.setViewportSize({ width: size.width, height: size.height });
       await page.waitForTimeout(300);
-      const widths = await page.evaluate(() => ({ doc: document.documentElement.scrollWidth, body: document.body.scrollWidth, view: window.innerWidth }));
+      const widths = await page.evaluate(() => {
+        // the widest boxes, through the shadow roots, to name the culprit when something overflows
+        const wide: string[] = [];
+        const walk = (root: Document | ShadowRoot) => {
+          for (const el of Array.from(root.querySelectorAll('*'))) {
+            const r = el.getBoundingClientRect();
+            if (r.right > window.innerWidth + 0.5 && r.width > 0) wide.push(`${el.tagName.toLowerCase()}.${(el as HTMLElement).className} ${Math.round(r.right)}`);
+            if (el.shadowRoot) walk(el.shadowRoot);
+          }
+        };
+        walk(document);
+        return { doc: document.documentElement.scrollWidth, body: document.body.scrollWidth, view: window.innerWidth, wide: wide.slice(0, 8) };
+      });
+      if (widths.doc > widths.view) console.log('[e2e] wider than the screen:', widths.wide.join('; '));
       expect(widths.doc).toBeLessThanOrEqual(widths.view);
       expect(widths.body).toBeLessThanOrEqual(widths.view);
       if (size.width === 390) {
         const id = await solvedId();
-        const box = page.locator('fieldset[data-group="4"]').getByLabel('Distance along the main');
+        if (!(await page.locator('details[data-group="4"]').evaluate((d) => (d as HTMLDetailsElement).open))) await page.locator('details[data-group="4"] > summary').click();
+        const box = page.locator('details[data-group="4"]').getByLabel('Distance along the main');
         await box.fill('');
         await box.pressSequentially('24', { delay: 40 });
         await waitSolvedAfter(id);

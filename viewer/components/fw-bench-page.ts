@@ -67,9 +67,15 @@ export class FwBenchPage extends LitElement {
       input { font: inherit; padding: 0.2rem 0.35rem; border: 1px solid var(--line); border-radius: 5px; min-width: 0; width: 100%; box-sizing: border-box; }
       input[aria-invalid='true'] { border-color: var(--bad); background: var(--bad-soft); }
       .err { color: var(--bad); font-size: 0.78rem; }
-      fieldset.group { border: 1px solid var(--line); border-radius: 8px; margin: 0; padding: 0.4rem 0.7rem 0.6rem; background: var(--panel); }
-      fieldset.group legend { font-weight: 600; padding: 0 0.3rem; }
-      fieldset.group.starving { border-color: var(--bad); }
+      details.group { border: 1px solid var(--line); border-radius: 8px; background: var(--panel); }
+      details.group > summary { cursor: pointer; padding: 0.4rem 0.7rem; display: flex; flex-wrap: wrap; gap: 0.1rem 0.6rem; align-items: baseline; }
+      details.group > summary b { font-weight: 600; }
+      details.group > summary span { color: var(--muted); font-size: 0.85rem; }
+      details.group > summary .flag { color: var(--bad); font-weight: 700; font-size: 0.85rem; }
+      details.group > summary:focus-visible { outline: 3px solid #e0a030; }
+      details.group fieldset { border: 0; margin: 0; padding: 0 0.7rem 0.6rem; min-width: 0; }
+      details.group.starving { border-color: var(--bad); }
+      details.group.wrong { border-color: var(--bad); background: var(--bad-soft); }
       .rowbar { display: flex; flex-wrap: wrap; gap: 0.4rem; margin-top: 0.4rem; }
       .primary { background: var(--leaf); color: #fff; }
       .primary:hover { background: #335a2b; }
@@ -126,6 +132,8 @@ export class FwBenchPage extends LitElement {
   private solvedPlanText = '';
   private planTexts = new Map<number, string>();
   private shownUnits: UnitSystem | null = null;
+  /** groups unfolded by the grower (by position); a group with a problem always shows its boxes */
+  private unfolded = new Set<number>();
 
   override connectedCallback(): void {
     super.connectedCallback();
@@ -152,7 +160,7 @@ export class FwBenchPage extends LitElement {
     // a switch of units rewrites the boxes in the new units (the plan keeps its unit with every value)
     if (changed.has('units') && this.shownUnits !== null && this.shownUnits !== this.units) {
       this.plan = convertPlan(this.plan, this.units);
-      saveBench(globalThis.localStorage, this.plan);
+      this.edited(0);
     }
     this.shownUnits = this.units;
   }
@@ -222,6 +230,7 @@ export class FwBenchPage extends LitElement {
     const last = rows[rows.length - 1] ?? {};
     const row: Doc = { ...structuredClone(last), name: freeName(this.plan), count: 1 };
     this.plan = { ...this.plan, containers: [...rows, row] };
+    this.unfolded.add(rows.length);
     this.notice = { kind: 'good', text: `Added "${row.name}", a copy of the last group: set its floor height and distance along the main.` };
     this.edited(0);
   }
@@ -230,6 +239,7 @@ export class FwBenchPage extends LitElement {
     const rows = rowsOf(this.plan);
     const before = this.plan;
     this.plan = { ...this.plan, containers: rows.filter((_, k) => k !== i) };
+    this.unfolded = new Set([...this.unfolded].filter((k) => k !== i).map((k) => (k > i ? k - 1 : k)));
     this.notice = { kind: 'good', text: `Removed "${String(rows[i]?.name ?? `group ${i + 1}`)}".`, undo: before };
     this.edited(0);
   }
@@ -328,9 +338,23 @@ export class FwBenchPage extends LitElement {
     </label>`;
   }
 
+  /** One line for a folded group: how many, the floor height, the distance along the main, as typed. */
+  private groupLine(row: Doc): string {
+    const shown = (path: string) => {
+      const f = GROUP_FIELDS.find((g) => g.path === path)!;
+      const text = benchDisplay(getAt(row, path), f, this.units);
+      const unit = unitOf(f, this.units);
+      return text === '' ? '?' : /[a-z]/i.test(text) ? text : `${text} ${unit}`;
+    };
+    const count = Number(row?.count ?? 1);
+    return `${Number.isFinite(count) ? count : '?'} × floor ${shown('floorElevation')}, ${shown('mainLength')} along the main`;
+  }
+
   private renderInputs() {
     const rows = rowsOf(this.plan);
     const flagged = new Set((this.solved?.groups ?? []).filter((g) => g.starving).map((g) => g.index));
+    const wrong = new Set(this.errors.map((e) => /^containers\.(\d+)/.exec(e.field)?.[1]).filter((k) => k !== undefined).map(Number));
+    const few = rows.length <= 2;
     return html`<section aria-label="Bench inputs">
       <div class="card">
         <h2>Tank and main</h2>
@@ -338,13 +362,28 @@ export class FwBenchPage extends LitElement {
         <div class="fields">${TANK_FIELDS.map((f) => this.renderBox(f.path, f, `tank-${f.path}`))}</div>
       </div>
       <h2>Container groups</h2>
-      <p class="intro">A group is one or more identical containers on one tee of the main.</p>
+      <p class="intro">A group is one or more identical containers on one tee of the main. Click a group to see or change its boxes.</p>
       ${rows.map(
-        (row, i) => html`<fieldset class="group ${flagged.has(i) ? 'starving' : ''}" data-group=${i}>
-          <legend>Group ${i + 1}${typeof row?.name === 'string' && row.name.trim() ? `: ${row.name}` : ''}</legend>
-          <div class="fields">${GROUP_FIELDS.map((f) => this.renderBox(`containers.${i}.${f.path}`, f, `g${i}-${f.path}`))}</div>
-          <div class="rowbar"><button data-remove-group=${i} @click=${() => this.removeGroup(i)}>Remove this group</button></div>
-        </fieldset>`,
+        (row, i) => html`<details
+          class="group ${flagged.has(i) ? 'starving' : ''} ${wrong.has(i) ? 'wrong' : ''}"
+          data-group=${i}
+          ?open=${few || wrong.has(i) || this.unfolded.has(i)}
+          @toggle=${(e: Event) => {
+            if ((e.target as HTMLDetailsElement).open) this.unfolded.add(i);
+            else this.unfolded.delete(i);
+          }}
+        >
+          <summary>
+            <b>Group ${i + 1}${typeof row?.name === 'string' && row.name.trim() ? `: ${row.name}` : ''}</b>
+            <span>${this.groupLine(row)}</span>
+            ${flagged.has(i) ? html`<span class="flag">starves</span>` : nothing}
+            ${wrong.has(i) ? html`<span class="flag">to correct</span>` : nothing}
+          </summary>
+          <fieldset aria-label="Group ${i + 1}">
+            <div class="fields">${GROUP_FIELDS.map((f) => this.renderBox(`containers.${i}.${f.path}`, f, `g${i}-${f.path}`))}</div>
+            <div class="rowbar"><button data-remove-group=${i} @click=${() => this.removeGroup(i)}>Remove this group</button></div>
+          </fieldset>
+        </details>`,
       )}
       <div class="rowbar">
         <button class="primary" data-add-group @click=${this.addGroup}>Add a group</button>
