@@ -49,6 +49,8 @@ export class FwBenchDrawing extends LitElement {
       .name { font-weight: 600; }
       .note { fill: var(--muted); font-size: 11px; }
       p { margin: 0.3rem 0 0; font-size: 0.82rem; color: var(--muted); }
+      .slide { display: none; }
+      @media (max-width: 1180px) { .slide { display: block; } }
     `,
   ];
 
@@ -80,7 +82,7 @@ export class FwBenchDrawing extends LitElement {
     const colX = (i: number) => LEFT + TANK_W + 40 + COLUMN_W * i + COLUMN_W / 2;
     const ordered = [...groups].sort((a, b) => a.mainLengthM - b.mainLengthM || a.index - b.index);
     const mainEnd = colX(ordered.length - 1);
-    return html`<div class="scroll"><svg viewBox="0 0 ${width} ${height}" style="min-width:${Math.round(width * 0.72)}px" role="img" aria-label="Side view of the bench: the tank, the main and each group at its height">
+    return html`<div class="scroll"><svg viewBox="0 0 ${width} ${height}" style="min-width:${Math.round(width * 0.8)}px" role="img" aria-label="Side view of the bench: the tank, the main and each group at its height">
       <g class="axis">
         ${ticks.map((v) => svg`<line class="grid" x1=${LEFT} x2=${width - 10} y1=${y(v * unitM)} y2=${y(v * unitM)}></line>
           <text x=${LEFT - 6} y=${y(v * unitM) + 4} text-anchor="end">${Number(v.toFixed(6))} ${imperial ? 'ft' : 'm'}</text>`)}
@@ -121,6 +123,7 @@ export class FwBenchDrawing extends LitElement {
         </g>`;
       })}
     </svg></div>
+    <p class="slide">Slide the drawing sideways to see every group.</p>
     <p>Heights to scale (lines every ${Number(step.toFixed(6))} ${imperial ? 'ft' : 'm'} above your reference level); the groups stand in their order along the main, with their distance from the tank written under the main. Triangle: the valve's nozzle; blue: the water held. Flows with a full tank.</p>`;
   }
 }

@@ -132,6 +132,7 @@ export class FwBenchPage extends LitElement {
   private solvedPlanText = '';
   private planTexts = new Map<number, string>();
   private shownUnits: UnitSystem | null = null;
+  private beforeSwitch: { units: UnitSystem; plan: Doc; converted: Doc } | null = null;
   /** groups unfolded by the grower (by position); a group with a problem always shows its boxes */
   private unfolded = new Set<number>();
 
@@ -159,10 +160,24 @@ export class FwBenchPage extends LitElement {
   protected override willUpdate(changed: Map<string, unknown>): void {
     // a switch of units rewrites the boxes in the new units (the plan keeps its unit with every value)
     if (changed.has('units') && this.shownUnits !== null && this.shownUnits !== this.units) {
-      this.plan = convertPlan(this.plan, this.units);
+      // switching back with no edit in between restores the exact values (no drift from 4-digit rounding)
+      const back = this.beforeSwitch;
+      if (back && back.units === this.units && back.converted === this.plan) {
+        this.plan = back.plan;
+        this.beforeSwitch = null;
+      } else {
+        const converted = convertPlan(this.plan, this.units);
+        this.beforeSwitch = { units: this.shownUnits, plan: this.plan, converted };
+        this.plan = converted;
+      }
       this.edited(0);
     }
     this.shownUnits = this.units;
+  }
+
+  protected override updated(): void {
+    // for tests and timing: whether a change is still being worked out
+    this.toggleAttribute('data-pending', this.pending || this.timer !== null);
   }
 
   /**
