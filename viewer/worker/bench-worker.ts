@@ -4,7 +4,6 @@
  * sized, the flows alone and shared) and makes the bench's zip, off the page.
  * One plan at a time; the page sends only the newest.
  */
-import { loadManifold } from '../../generator/solids/mesh/index.ts';
 import { benchView, solveBench } from './bench-solve.ts';
 import type { BenchReply, BenchRequest } from './bench-protocol.ts';
 
@@ -22,7 +21,7 @@ async function handle(req: BenchRequest): Promise<void> {
   }
   if (!solved.ok) throw new Error('the bench has problems to correct first');
   if (!solved.result.ok) throw new Error('no valve size fits some groups, so there are no files to make');
-  await loadManifold();
+  // the geometry kernel, the part builders and the writers load on the first export: the drawing never needs them
   const { benchZip } = await import('./bench-export.ts');
   const name = (req.plan as { name?: unknown } | null)?.name;
   const file = await benchZip(solved.result, typeof name === 'string' ? name : 'bench');
