@@ -225,10 +225,11 @@ export class FwBenchPage extends LitElement {
     this.pending = newer || this.timer !== null;
     this.setAttribute('data-solve-ms', reply.solveMs.toFixed(1));
     await this.updateComplete;
-    if (reply.id >= this.firstAfterEdit && this.lastEditAt > 0) {
+    const editAt = this.lastEditAt;
+    if (reply.id >= this.firstAfterEdit && editAt > 0) {
       // input-to-redraw: last keystroke to the drawing and figures updated from a solve that includes it
       const at = await new Promise<number>((r) => requestAnimationFrame(() => r(performance.now())));
-      this.setAttribute('data-input-to-redraw-ms', (at - this.lastEditAt).toFixed(1));
+      if (this.lastEditAt === editAt) this.setAttribute('data-input-to-redraw-ms', (at - editAt).toFixed(1));
     }
     this.setAttribute('data-solved-id', String(reply.id));
     this.setAttribute('data-bench', reply.ok ? 'solved' : 'problems');
