@@ -141,4 +141,21 @@ describe('regressions found by applying the ways out (sizing.property.test.ts)',
     const fixed = parseDesign({ ...doc, level: { target: level.value }, ...(/together/.test(level.message) && foot ? { limits: { maxOuterDiameter: foot.value } } : {}) });
     expect(fixed.ok && sizeDesign(fixed.inputs).ok).toBe(true);
   });
+
+  it('a level and foot offered together size when applied together (was: 118.5 mm with a 207 mm foot, which needed 210 mm; soak seed 1004493665 #244)', () => {
+    const doc = {
+      supply: { headMax: '11.251042719655233 mm' }, level: { target: '103.70254816985906 mm' },
+      seal: { pad: 'rubber 80A', indentation: 0.05 }, limits: { maxOuterDiameter: '40.31629805966736 mm' },
+    };
+    const parsed = parseDesign(doc);
+    if (!parsed.ok) throw new Error(JSON.stringify(parsed.errors));
+    const result = sizeDesign(parsed.inputs);
+    expect(result.ok).toBe(false);
+    if (result.ok) return;
+    const level = result.waysOut.find((w) => w.field === 'level.target')!;
+    const foot = result.waysOut.find((w) => w.field === 'limits.maxOuterDiameter')!;
+    expect(level.message).toBe(foot.message);
+    const fixed = parseDesign({ ...doc, level: { target: level.value }, limits: { maxOuterDiameter: foot.value } });
+    expect(fixed.ok && sizeDesign(fixed.inputs).ok).toBe(true);
+  });
 });
