@@ -125,8 +125,9 @@ describe('fw-bench-page', () => {
     const page = await mountPage();
     const root = page.shadowRoot!;
     const inputs = [...root.querySelectorAll('input[data-field]')] as HTMLInputElement[];
-    expect(inputs.length).toBe(3 + 4 * GROUP_FIELDS.length);
+    expect(inputs.length).toBe(1 + 3 + 4 * GROUP_FIELDS.length); // the bench name, the tank and main, four groups
     for (const input of inputs) expect(input.closest('label'), input.dataset.field).not.toBeNull();
+    expect((root.querySelector('textarea[data-field="notes"]') as HTMLTextAreaElement).value).toContain('200 L tank'); // the preset's notes on show
     const flagged = [...root.querySelectorAll('[data-starving]')].map((p) => p.textContent ?? '');
     expect(flagged.length).toBeGreaterThan(0);
     for (const text of flagged) expect(text).toMatch(/^Starves: gets \d+ % of its own flow/);

@@ -64,6 +64,7 @@ export class FwBenchPage extends LitElement {
       label.box span.unit { color: var(--muted); }
       label.box small { color: var(--muted); font-size: 0.75rem; }
       .entry { display: flex; align-items: center; gap: 0.3rem; }
+      textarea { font: inherit; padding: 0.2rem 0.35rem; border: 1px solid var(--line); border-radius: 5px; width: 100%; box-sizing: border-box; resize: vertical; }
       input { font: inherit; padding: 0.2rem 0.35rem; border: 1px solid var(--line); border-radius: 5px; min-width: 0; width: 100%; box-sizing: border-box; }
       input[aria-invalid='true'] { border-color: var(--bad); background: var(--bad-soft); }
       .err { color: var(--bad); font-size: 0.78rem; }
@@ -241,6 +242,11 @@ export class FwBenchPage extends LitElement {
     this.edited();
   }
 
+  private setText(path: 'name' | 'notes', text: string): void {
+    this.plan = setPlanAt(this.plan, path, text === '' ? undefined : text);
+    this.edited();
+  }
+
   private addGroup(): void {
     const rows = rowsOf(this.plan);
     const last = rows[rows.length - 1] ?? {};
@@ -372,6 +378,19 @@ export class FwBenchPage extends LitElement {
     const wrong = new Set(this.errors.map((e) => /^containers\.(\d+)/.exec(e.field)?.[1]).filter((k) => k !== undefined).map(Number));
     const few = rows.length <= 2;
     return html`<section aria-label="Bench inputs">
+      <div class="card">
+        <div class="fields">
+          <label class="box"><span>Bench name</span>
+            <input data-field="name" .value=${typeof this.plan.name === 'string' ? this.plan.name : ''} @input=${(e: Event) => this.setText('name', (e.target as HTMLInputElement).value)} />
+            <small>names the zip and the report</small>
+            ${this.errorFor('name') ? html`<span class="err" role="alert">${this.errorFor('name')}</span>` : nothing}
+          </label>
+        </div>
+        <label class="box"><span>Notes <small>(optional)</small></span>
+          <textarea data-field="notes" rows="2" .value=${typeof this.plan.notes === 'string' ? this.plan.notes : ''} @input=${(e: Event) => this.setText('notes', (e.target as HTMLTextAreaElement).value)}></textarea>
+          ${this.errorFor('notes') ? html`<span class="err" role="alert">${this.errorFor('notes')}</span>` : nothing}
+        </label>
+      </div>
       <div class="card">
         <h2>Tank and main</h2>
         <p class="intro">Every height is measured from one reference level of your choice, such as the ground or the deck.</p>

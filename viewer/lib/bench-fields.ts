@@ -88,6 +88,8 @@ export function benchLabelFor(path: string, plan: unknown): string {
     return `${label} of ${who}`;
   }
   if (path === 'containers') return 'Container groups';
+  if (path === 'name') return 'Bench name';
+  if (path === 'notes') return 'Notes';
   if (path.startsWith('design')) return 'A setting shared by every group';
   if (path === 'starvingShare') return 'Starving share';
   return 'The bench';
