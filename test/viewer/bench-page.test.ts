@@ -152,6 +152,19 @@ describe('fw-bench-page', () => {
     expect((sent as { name: string }).name).toBe('middle tier');
   });
 
+  it('adds a group as a copy of the last, unfolded, its floor height box focused', async () => {
+    const page = await mountPage();
+    const root = page.shadowRoot!;
+    const done = settled(page);
+    (root.querySelector('[data-add-group]') as HTMLButtonElement).click();
+    await page.updateComplete;
+    await page.updateComplete;
+    expect((root.querySelector('details[data-group="4"]') as HTMLDetailsElement).open).toBe(true);
+    expect((root.activeElement as HTMLInputElement | null)?.dataset.field).toBe('containers.4.floorElevation');
+    await done;
+    expect(root.querySelectorAll('[data-result-group]').length).toBe(5);
+  });
+
   it('opens a kept bench before the preset', async () => {
     saveBench(localStorage, { ...PRESET, containers: (PRESET.containers as unknown[]).slice(0, 1) });
     const page = await mountPage();

@@ -255,6 +255,8 @@ export class FwBenchPage extends LitElement {
     this.unfolded.add(rows.length);
     this.notice = { kind: 'good', text: `Added "${row.name}", a copy of the last group: set its floor height and distance along the main.` };
     this.edited(0);
+    // the new group's first box to change gets the focus (on a phone the notice is a screen away)
+    void this.updateComplete.then(() => (this.renderRoot.querySelector(`input[data-field="containers.${rows.length}.floorElevation"]`) as HTMLInputElement | null)?.focus());
   }
 
   private removeGroup(i: number): void {
