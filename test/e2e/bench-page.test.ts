@@ -213,7 +213,9 @@ describe.skipIf(!haveChromium)('bench page in Chromium', () => {
         expect(stl, `${d.id} ${part}`).toBeTruthy();
         expect(checkBinaryStl(entries[stl!]!).closed, `${stl} closed`).toBe(true);
       }
-      expect(d.files.some((f) => f.endsWith('build-sheet.html'))).toBe(true);
+      // named as `floatwright plan --out` names them
+      for (const end of [`${d.id}-plate.3mf`, `${d.id}-design.json`, `${d.id}-build-sheet.md`, `${d.id}-build-sheet.html`]) expect(d.files.some((f) => f.endsWith(end)), end).toBe(true);
+      expect(strFromU8(entries[d.files.find((f) => f.endsWith('build-sheet.html'))!]!)).toContain('Low pressure only');
       for (const f of d.files) expect(names).toContain(f);
     }
     expect(plan.plates.length).toBeGreaterThan(0);

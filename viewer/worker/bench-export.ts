@@ -8,9 +8,9 @@
 import { strToU8, zipSync } from 'fflate';
 import { documentWithHeads, planHtml, planJson, planMarkdown, planReport, type PlanResult } from '../../generator/plan/index.ts';
 import { buildParts } from '../../generator/solids/index.ts';
-import { plateSetFiles } from '../../generator/solids/mesh/plate-set-files.ts';
+import { plateSetFiles, type PlateSetDesignMeshes } from '../../generator/solids/mesh/plate-set-files.ts';
 import { printBedMm } from '../../generator/sizing/parts/print-bed.ts';
-import { buildSheet } from './sheet-source.ts';
+import { buildSheetHtml, buildSheetMarkdown } from '../../generator/doc/build-sheet.ts';
 import { plates, stlFile } from './export-files.ts';
 import { PART_NAMES, type PartMeshes } from './parts-contract.ts';
 import type { ExportFile } from './protocol.ts';
@@ -23,7 +23,7 @@ export function folderSlug(text: string): string {
 export async function benchZip(result: PlanResult, name = 'bench'): Promise<ExportFile> {
   const entries: Record<string, Uint8Array> = {};
   const files: Record<string, string[]> = {};
-  const designs: { id: string; quantity: number; meshes: Record<string, PartMeshes[keyof PartMeshes] & object> }[] = [];
+  const designs: PlateSetDesignMeshes[] = [];
   const used = new Set<string>();
   for (const d of result.designs) {
     const first = result.containers.find((c) => c.index === d.containerIndices[0])!;
@@ -33,11 +33,15 @@ export async function benchZip(result: PlanResult, name = 'bench'): Promise<Expo
     const doc = result.plan.containers.find((c) => c.index === first.index)!.document;
     const document = { ...documentWithHeads(doc, first.headMaxM, first.headMinM), name: `${d.id}: ${first.name} (print ${d.quantity})` };
     const meshes = (await buildParts(d.sizing, { quality: 'export' })) as PartMeshes;
+    // the files as `floatwright plan` names them (generator/solids/write-design-files.ts): <id>-<part>.stl, <id>-plate.3mf, ...
+    const plateFiles = plates(d.id, meshes, document, d.sizing);
+    const sheetFiles = { stl: Object.fromEntries(PART_NAMES.map((p) => [p, `${d.id}-${p}.stl`])), plate3mf: plateFiles[0]!.name };
     const set: ExportFile[] = [
       ...PART_NAMES.map((p) => stlFile(d.id, p, meshes)),
-      ...plates(d.id, meshes, document, d.sizing),
-      { name: `${d.id}-build-sheet.html`, mime: 'text/html', bytes: strToU8(buildSheet(d.sizing, document, d.id)) },
-      { name: `${d.id}.json`, mime: 'application/json', bytes: strToU8(`${JSON.stringify(document, null, 2)}\n`) },
+      ...plateFiles,
+      { name: `${d.id}-design.json`, mime: 'application/json', bytes: strToU8(`${JSON.stringify(document, null, 2)}\n`) },
+      { name: `${d.id}-build-sheet.md`, mime: 'text/markdown', bytes: strToU8(buildSheetMarkdown(d.sizing, document, sheetFiles)) },
+      { name: `${d.id}-build-sheet.html`, mime: 'text/html', bytes: strToU8(buildSheetHtml(d.sizing, document, sheetFiles)) },
     ];
     files[d.id] = set.map((f) => `${folder}/${f.name}`);
     for (const f of set) entries[`${folder}/${f.name}`] = f.bytes;
