@@ -316,6 +316,8 @@ export class FwApp extends LitElement {
   /** Switch pages; the bench page loads on its first visit and then stays, so neither page loses its state. */
   private async showPage(page: Page): Promise<void> {
     if (page === 'bench' && !this.benchLoaded) {
+      // the bench worker loads beside the page's code, not after it
+      (await import('../lib/bench-client.ts')).startBenchWorker();
       await import('./fw-bench-page.ts');
       this.benchLoaded = true;
     }

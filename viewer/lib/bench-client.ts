@@ -8,7 +8,21 @@ import type { ExportFile } from '../worker/protocol.ts';
 
 export type BenchWorkerFactory = () => Worker;
 
-export const defaultBenchWorker: BenchWorkerFactory = () => new Worker(new URL('../worker/bench-worker.ts', import.meta.url), { type: 'module' });
+const newBenchWorker = () => new Worker(new URL('../worker/bench-worker.ts', import.meta.url), { type: 'module' });
+let early: Worker | null = null;
+
+/** Start the bench worker now, while the bench page's code loads (idempotent; a no-op where workers are missing). */
+export function startBenchWorker(): void {
+  if (early || typeof Worker === 'undefined') return;
+  early = newBenchWorker();
+}
+
+/** The worker started early, once; a new one after that. */
+export const defaultBenchWorker: BenchWorkerFactory = () => {
+  const w = early ?? newBenchWorker();
+  early = null;
+  return w;
+};
 
 type Planned = Extract<BenchReply, { type: 'planned' }>;
 
