@@ -44,7 +44,7 @@ const MIN_HEAD_M = 0.005;
  * `converged` is false.
  *
  * Example: tank surface 2.4 m, floor 0.3 m, 45 mm level, defaults: the tip
- * settles near 79.8 mm in 2 steps, so H_max is near 2.020 m (checked to 0.5 mm in
+ * settles near 82.3 mm in 2 steps, so H_max is near 2.018 m (checked to 0.5 mm in
  * test/plan/single.test.ts; it moves when the sizing's defaults do).
  * Source: fixed-point iteration (Burden and Faires, Numerical Analysis, sec. 2.2), from memory.
  */
