@@ -8,60 +8,12 @@
  * messages are in role="alert" / role="status" regions (source: W3C).
  */
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { sizeDesign } from '../../generator/sizing/size-design.ts';
-import type { WorkerReply, WorkerRequest } from '../../viewer/worker/protocol.ts';
+import type { WorkerRequest } from '../../viewer/worker/protocol.ts';
 import { STORAGE_KEY } from '../../viewer/lib/storage.ts';
 import { RECENT_KEY } from '../../viewer/lib/recent-designs.ts';
 import { encodeDesign } from '../../viewer/lib/share-link.ts';
-import '../../viewer/components/fw-app.ts';
+import { edit, mountApp, root, settle, workers, type App } from './app-harness.ts';
 
-class FakeWorker {
-  sent: WorkerRequest[] = [];
-  onmessage: ((e: MessageEvent<WorkerReply>) => void) | null = null;
-  onerror: ((e: ErrorEvent) => void) | null = null;
-  postMessage(req: WorkerRequest) {
-    this.sent.push(req);
-  }
-  /** answer every build request sent so far with the real sizing; exports with the document they were given */
-  answer() {
-    const pending = this.sent.splice(0);
-    for (const req of pending) {
-      const data: WorkerReply =
-        req.type === 'build'
-          ? { type: 'built', id: req.id, sizing: sizeDesign(req.inputs), meshes: null, transforms: null, sizeMs: 1, buildMs: 0 }
-          : { type: 'exported', id: req.id, files: [{ name: 'design.json', mime: 'application/json', bytes: new TextEncoder().encode(JSON.stringify(req.document)) }] };
-      this.onmessage?.({ data } as MessageEvent<WorkerReply>);
-    }
-  }
-  terminate() {}
-}
-
-type App = HTMLElement & { updateComplete: Promise<unknown>; workerFactory: unknown };
-let workers: FakeWorker[] = [];
-
-async function mountApp(): Promise<App> {
-  workers = [];
-  const app = document.createElement('fw-app') as App;
-  app.workerFactory = () => {
-    const w = new FakeWorker();
-    workers.push(w);
-    return w as unknown as Worker;
-  };
-  document.body.append(app);
-  await app.updateComplete;
-  return app;
-}
-
-/** Answer the builds until nothing is pending, and let the screen catch up. */
-async function settle(app: App) {
-  for (let i = 0; i < 5; i++) {
-    for (const w of workers) w.answer();
-    await new Promise((r) => setTimeout(r, 60)); // the typing pause (40 ms) and Lit's update
-    await app.updateComplete;
-  }
-}
-
-const root = (app: App) => app.shadowRoot!;
 const fileBar = (app: App) => root(app).querySelector('fw-file-bar')! as HTMLElement & { updateComplete: Promise<unknown> };
 const notice = (app: App) => root(app).querySelector('[data-notice]')?.textContent?.replace(/\s+/g, ' ') ?? '';
 
@@ -125,13 +77,6 @@ describe('opening a link or a preset keeps the current design', () => {
 });
 
 describe('exports come from the design on screen', () => {
-  async function edit(app: App, path: string, value: string) {
-    const form = root(app).querySelector('fw-design-form')!;
-    const input = form.shadowRoot!.querySelector(`[name="${path}"]`) as HTMLInputElement;
-    input.value = value;
-    input.dispatchEvent(new Event('input'));
-    await app.updateComplete;
-  }
   const buttons = (app: App) => [...fileBar(app).shadowRoot!.querySelectorAll('button')].filter((b) => !/share/i.test(b.textContent ?? ''));
 
   it('while a change is being sized, every file button is off with the reason and the view is marked out of date; then the export holds the new value', async () => {

@@ -3,7 +3,9 @@ import { customElement, query, state } from 'lit/decorators.js';
 import { parseDesign } from '../../generator/doc/schema.ts';
 import type { SizingResult, SizingSuccess, WayOut } from '../../generator/sizing/result.ts';
 import { BuildClient, type WorkerFactory } from '../lib/build-client.ts';
-import { getAt, setAt, type Doc } from '../lib/doc-path.ts';
+import { setAt, type Doc } from '../lib/doc-path.ts';
+import { docToSize } from '../lib/doc-to-size.ts';
+import { placeErrors } from '../lib/place-errors.ts';
 import { ALL_FIELDS } from '../lib/form-fields.ts';
 import { presets, type Preset } from '../lib/presets.ts';
 import { decodeDesign, designFromHash, shareUrl } from '../lib/share-link.ts';
@@ -33,15 +35,6 @@ export const TYPING_PAUSE_MS = 40;
 
 type Notice = { kind: 'bad' | 'good'; text: string; link?: string; undo?: Doc; action?: { label: string; run: () => void } } | null;
 
-/** Bench rows the grower has not finished (a box still empty) are not used yet, and are not errors. */
-export function withoutBlankPoints(doc: Doc): Doc {
-  const points = getAt(doc, 'seal.calibration');
-  if (!Array.isArray(points)) return doc;
-  const blank = (v: unknown) => v === undefined || v === null || (typeof v === 'string' && v.trim() === '');
-  const kept = points.filter((p) => !(p && typeof p === 'object' && (blank((p as Doc).head) || blank((p as Doc).mass))));
-  return setAt(doc, 'seal.calibration', kept.length ? kept : undefined);
-}
-
 function download(file: { name: string; mime: string; bytes: Uint8Array }): void {
   const url = URL.createObjectURL(new Blob([file.bytes as BlobPart], { type: file.mime }));
   const a = document.createElement('a');
@@ -58,7 +51,7 @@ const errorList = problemsInLabels;
 /** Why a saved design cannot be used (a damaged browser store), or null when it parses. */
 function savedProblem(doc: Doc): string | null {
   try {
-    const parsed = parseDesign(withoutBlankPoints(doc));
+    const parsed = parseDesign(docToSize(doc));
     return parsed.ok ? null : errorList(parsed.errors);
   } catch {
     return 'it is damaged.';
@@ -165,6 +158,9 @@ export class FwApp extends LitElement {
   /** the document each build request came from */
   private docsById = new Map<number, Doc>();
   private lastGoodDoc: Doc | null = null;
+  /** when each box was last typed in (a count of edits), so an error between two boxes lands on the one changed */
+  private editedAt = new Map<string, number>();
+  private edits = 0;
   private beforeSwitch: { units: UnitSystem; doc: Doc; convertedDoc: Doc } | null = null;
   private readonly onHashChange = () => this.openFromHash();
 
@@ -215,7 +211,7 @@ export class FwApp extends LitElement {
       this.notice = { kind: 'bad', text: `The shared link could not be used: ${decoded.message} Your current design is unchanged.` };
       return;
     }
-    const parsed = parseDesign(decoded.doc);
+    const parsed = parseDesign(docToSize(decoded.doc as Doc));
     if (!parsed.ok) {
       this.notice = { kind: 'bad', text: `The shared link holds a design with problems, so it was not opened. ${errorList(parsed.errors)} Your current design is unchanged.` };
       return;
@@ -241,6 +237,7 @@ export class FwApp extends LitElement {
 
   private fieldInput(e: CustomEvent<FieldInputDetail>): void {
     this.doc = setAt(this.doc, e.detail.path, e.detail.value);
+    this.editedAt.set(e.detail.path, ++this.edits);
     this.lastEditAt = performance.now();
     this.firstBuildAfterEdit = Infinity;
     if (this.typingTimer) clearTimeout(this.typingTimer);
@@ -250,9 +247,9 @@ export class FwApp extends LitElement {
   /** Check the document; when it is good, ask the worker to size and build it. */
   private evaluate(): void {
     this.typingTimer = null;
-    const parsed = parseDesign(withoutBlankPoints(this.doc));
+    const parsed = parseDesign(docToSize(this.doc));
     if (!parsed.ok) {
-      this.errors = Object.fromEntries(parsed.errors.map((e) => [e.field, e.message]));
+      this.errors = placeErrors(Object.fromEntries(parsed.errors.map((e) => [e.field, e.message])), this.editedAt);
       return;
     }
     this.errors = {};
@@ -382,7 +379,8 @@ export class FwApp extends LitElement {
 
   private async exportRequest(e: CustomEvent<ExportRequest>): Promise<void> {
     const good = this.lastGood;
-    const doc = this.lastGoodDoc;
+    // the files hold the design as sized (a half-filled bench row or a lone refill box is left out, as the sizing did)
+    const doc = this.lastGoodDoc && docToSize(this.lastGoodDoc);
     const blocked = this.exportBlock();
     if (blocked || !good || !doc) {
       this.notice = { kind: 'bad', text: `No files were made. ${blocked ?? 'Sizing…'}` };
@@ -427,7 +425,7 @@ export class FwApp extends LitElement {
       };
       return;
     }
-    const parsed = parseDesign(doc);
+    const parsed = parseDesign(doc && typeof doc === 'object' && !Array.isArray(doc) ? docToSize(doc as Doc) : doc);
     if (!parsed.ok) {
       this.notice = { kind: 'bad', text: `${file.name} was not opened: ${errorList(parsed.errors)} Your current design is unchanged.` };
       return;
@@ -436,7 +434,7 @@ export class FwApp extends LitElement {
   }
 
   private async shareLink(): Promise<void> {
-    const doc = this.lastGoodDoc ?? this.doc;
+    const doc = docToSize(this.lastGoodDoc ?? this.doc);
     const link = shareUrl(location.href, doc);
     let copied = false;
     try {

@@ -5,9 +5,14 @@ import { AUTO_PAD, findPad, padNames } from '../../generator/sizing/seal/pads.ts
 import { getAt, type Doc } from '../lib/doc-path.ts';
 import { FIELD_GROUPS } from '../lib/form-fields.ts';
 import { MATERIAL_DENSITY_FIELD, OTHER_FILAMENT, materialChoice, otherFilamentValue } from '../lib/material-choice.ts';
+import { fieldDefault } from '../lib/field-default.ts';
+import { labelFor } from '../lib/field-label.ts';
+import { REFILL_BOXES, loneRefillBox } from '../lib/lone-refill-box.ts';
 import { displayText, documentValue, unitFor, type FieldDef, type UnitSystem } from '../lib/units-system.ts';
 import { shared } from './shared-styles.ts';
 import './fw-bench-points.ts';
+
+const otherRefillBox = (path: string) => REFILL_BOXES.find((p) => p !== path)!;
 
 export interface FieldInputDetail {
   path: string;
@@ -28,7 +33,10 @@ export class FwDesignForm extends LitElement {
       .box { display: flex; align-items: center; gap: 0.35rem; }
       input, select { font: inherit; padding: 0.25rem 0.4rem; border: 1px solid #b9b3a0; border-radius: 5px; width: 8.5rem; background: #fff; }
       .unit { color: var(--muted); min-width: 2.2rem; flex: none; white-space: nowrap; }
-      .hint { color: var(--muted); font-size: 0.8rem; }
+      .note { color: var(--muted); font-size: 0.8rem; }
+      .note:empty { display: none; }
+      .reset { padding: 0.1rem 0.45rem; font-size: 0.8rem; flex: none; }
+      input::placeholder { color: #8d8a80; font-style: italic; }
       .field.bad input { border-color: var(--bad); background: var(--bad-soft); }
       .msg { color: var(--bad); font-size: 0.82rem; margin-top: 0.15rem; }
     `,
@@ -52,24 +60,38 @@ export class FwDesignForm extends LitElement {
     const unit = unitFor(def, this.units);
     const error = this.errors[def.path];
     const raw = getAt(this.doc, def.path);
+    const fallback = fieldDefault(def, this.doc, this.units);
+    const typed = raw !== undefined && raw !== '';
+    const waiting = loneRefillBox(this.doc) === def.path;
     return html`<div class="field ${error ? 'bad' : ''}">
-      <label for=${id}>${def.label}</label>
+      <label for=${id} id="${id}-label">${def.label}</label>
       <div class="box">
         <input
           id=${id}
           name=${def.path}
           inputmode="decimal"
           autocomplete="off"
+          placeholder=${fallback?.placeholder ?? nothing}
           .value=${displayText(raw, def, this.units)}
           aria-invalid=${error ? 'true' : 'false'}
-          aria-describedby="${id}-unit ${id}-msg"
+          aria-describedby="${id}-unit ${id}-note ${id}-msg"
           @input=${(e: InputEvent) => this.emit(def.path, documentValue((e.target as HTMLInputElement).value, def, this.units) ?? emptyValue)}
         />
         <span class="unit" id="${id}-unit">${unit}</span>
-        ${def.hint ? html`<span class="hint">${def.hint}</span>` : nothing}
+        ${fallback && typed
+          ? html`<button class="reset" data-reset=${def.path} aria-label="Back to the default" aria-describedby="${id}-label ${id}-note" title=${fallback.note}
+              @click=${() => this.resetField(def, id)}>↺ default</button>`
+          : nothing}
       </div>
+      <div class="note" id="${id}-note">${[def.hint && def.hint[0].toUpperCase() + def.hint.slice(1), waiting ? `Not used until "${labelFor(otherRefillBox(def.path))}" is given too.` : fallback?.note].filter(Boolean).join('. ')}</div>
       <div class="msg" id="${id}-msg" role=${error ? 'alert' : nothing}>${error ?? ''}</div>
     </div>`;
+  }
+
+  /** A blank box takes its default; the focus stays in the box, to type another value straight away. */
+  private resetField(def: FieldDef, id: string): void {
+    this.emit(def.path, undefined);
+    void this.updateComplete.then(() => this.renderRoot.querySelector<HTMLInputElement>(`#${id}`)?.focus());
   }
 
   /** the grower's own filament, kept while a table one is picked, so picking "other" again brings it back */

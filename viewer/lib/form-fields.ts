@@ -15,9 +15,9 @@ export const FIELD_GROUPS: readonly FieldGroup[] = [
     intro: 'Heights of the tank water surface above the valve nozzle.',
     fields: [
       { path: 'supply.headMax', label: 'Tank full: water height above the valve', kind: 'head', metric: 'm', imperial: 'ft', hint: 'also takes kPa or psi' },
-      { path: 'supply.headMin', label: 'Tank low: water height above the valve', kind: 'head', metric: 'm', imperial: 'ft', optional: true, hint: 'blank: same as full' },
-      { path: 'supply.tubeInnerDiameter', label: 'Feed tube, inside width', kind: 'length', metric: 'mm', imperial: 'in' },
-      { path: 'supply.tubeLength', label: 'Feed tube, length', kind: 'length', metric: 'm', imperial: 'ft' },
+      { path: 'supply.headMin', label: 'Tank low: water height above the valve', kind: 'head', metric: 'm', imperial: 'ft', optional: true, blankFrom: 'supply.headMax' },
+      { path: 'supply.tubeInnerDiameter', label: 'Feed tube, inside width', kind: 'length', metric: 'mm', imperial: 'in', optional: true },
+      { path: 'supply.tubeLength', label: 'Feed tube, length', kind: 'length', metric: 'm', imperial: 'ft', optional: true },
     ],
   },
   {
@@ -26,9 +26,9 @@ export const FIELD_GROUPS: readonly FieldGroup[] = [
     fields: [
       { path: 'level.target', label: 'Water depth to hold', kind: 'length', metric: 'mm', imperial: 'in', hint: 'above the container floor' },
       { path: 'limits.maxOuterDiameter', label: 'Widest valve that fits', kind: 'length', metric: 'mm', imperial: 'in', optional: true },
-      { path: 'reservoir.area', label: 'Water surface area', kind: 'area', metric: 'm2', imperial: 'ft2', optional: true, hint: 'for the refill time' },
-      { path: 'reservoir.rise', label: 'Refill depth', kind: 'length', metric: 'mm', imperial: 'in', optional: true, hint: 'for the refill time' },
-      { path: 'container.overflow', label: 'Overflow height', kind: 'length', metric: 'mm', imperial: 'in', optional: true, hint: 'above the floor; the valve shuts at least 10 mm lower' },
+      { path: 'reservoir.area', label: 'Water surface area', kind: 'area', metric: 'm2', imperial: 'ft2', optional: true, hint: 'for the refill time', blankMeans: 'no refill time' },
+      { path: 'reservoir.rise', label: 'Refill depth', kind: 'length', metric: 'mm', imperial: 'in', optional: true, hint: 'for the refill time', blankMeans: 'no refill time' },
+      { path: 'container.overflow', label: 'Overflow height', kind: 'length', metric: 'mm', imperial: 'in', optional: true, hint: 'above the floor; the valve shuts at least 10 mm lower', blankMeans: 'not checked' },
     ],
   },
   {

@@ -21,6 +21,10 @@ export interface FieldDef {
   metric: string;
   imperial: string;
   optional?: boolean;
+  /** an optional box without a default value: the path of the box a blank one copies (default none) */
+  blankFrom?: string;
+  /** an optional box without a default value: what a blank one means, in a few words (default none) */
+  blankMeans?: string;
 }
 
 /** Unit a bare number means in the document, per field (the schema's FIELD_UNITS). */
