@@ -100,7 +100,7 @@ function pushIssue(ctx: Ctx, input: unknown, message: string, path: PropertyKey[
 
 /** Message for a required value that is missing. */
 export function missingMessage(spec: QuantitySpec, kind: QuantityKind): string {
-  return `missing; give ${spec.label}${spec.example ? `, e.g. "${spec.example}"` : `: ${expectedHint(kind, spec.unit)}`}.`;
+  return `missing; give ${spec.label}${spec.example ? `, for example "${spec.example}"` : `: ${expectedHint(kind, spec.unit)}`}.`;
 }
 
 /** Parse one value of a field: the Measured value, or a message. Range is checked when `checkLimits` is set. */

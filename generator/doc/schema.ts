@@ -178,7 +178,7 @@ const materialField = z.unknown().optional().transform((raw, ctx): MaterialChoic
     }
     const { name, density } = parsed.data;
     if (!name || name.trim() === '') {
-      ctx.issues.push({ code: 'custom', input: value, path: ['name'], message: 'missing; give your material a name, e.g. "PETG-CF".' });
+      ctx.issues.push({ code: 'custom', input: value, path: ['name'], message: 'missing; give your material a name, for example "PETG-CF".' });
       return z.NEVER;
     }
     return { name, densityKgM3: density.si, tableName: null, densityShown: density.shown };

@@ -303,7 +303,7 @@ export function parsePlan(doc: unknown): PlanParse {
     const c = rows[i];
     if (c) {
       if (c.name === undefined || c.name.trim() === '') {
-        errors.push({ field: `${at}.name`, message: 'missing; give each container a name, e.g. "top shelf".' });
+        errors.push({ field: `${at}.name`, message: 'missing; give each container a name, for example "top shelf".' });
       } else if (names.has(nameKey(c.name))) {
         // compared as people read them: case, spaces and Unicode form do not make two names (refused, not merged:
         // rows with one name would share one line of the report and one folder name)

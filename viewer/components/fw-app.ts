@@ -154,6 +154,7 @@ export class FwApp extends LitElement {
   private benchPresets: Preset[] = this.allPresets.filter((p) => isPlanDocument(p.doc));
   private typingTimer: ReturnType<typeof setTimeout> | null = null;
   private lastEditAt = 0;
+  private checks = 0;
   private firstBuildAfterEdit = 0;
   /** the document each build request came from */
   private docsById = new Map<number, Doc>();
@@ -247,13 +248,17 @@ export class FwApp extends LitElement {
   /** Check the document; when it is good, ask the worker to size and build it. */
   private evaluate(): void {
     this.typingTimer = null;
+    // for tests: each check counted, so a test knows its keystroke has been judged
+    this.setAttribute('data-checked', String(++this.checks));
     const parsed = parseDesign(docToSize(this.doc));
     if (!parsed.ok) {
-      this.errors = placeErrors(Object.fromEntries(parsed.errors.map((e) => [e.field, e.message])), this.editedAt);
+      // each box shows its own problem; other boxes it mentions are named by their labels
+      this.errors = placeErrors(Object.fromEntries(parsed.errors.map((e) => [e.field, inLabels(e.message)])), this.editedAt);
       return;
     }
     this.errors = {};
     const id = this.client!.build(parsed.inputs);
+    this.setAttribute('data-asked-build-id', String(id));
     this.docsById.set(id, this.doc);
     if (this.firstBuildAfterEdit === Infinity) this.firstBuildAfterEdit = id;
   }
@@ -503,7 +508,7 @@ export class FwApp extends LitElement {
       </header>
       <div>
         ${this.renderNotice()}
-        ${formErrors.length ? html`<div class="notice bad" role="alert">${formErrors.map(([k, m]) => html`<div>${labelFor(k)}: ${inLabels(m)}</div>`)}</div>` : nothing}
+        ${formErrors.length ? html`<div class="notice bad" role="alert">${formErrors.map(([k, m]) => html`<div>${labelFor(k)}: ${m}</div>`)}</div>` : nothing}
       </div>
       <main ?hidden=${this.page !== 'valve'}>
         <div class="left">

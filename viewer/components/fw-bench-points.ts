@@ -1,6 +1,7 @@
 import { LitElement, css, html } from 'lit';
 import { customElement, property } from 'lit/decorators.js';
 import { CALIBRATION_HEAD, CALIBRATION_MASS, displayText, documentValue, unitFor, type UnitSystem } from '../lib/units-system.ts';
+import { labelFor } from '../lib/field-label.ts';
 import { shared } from './shared-styles.ts';
 
 type Point = { head?: unknown; mass?: unknown };
@@ -66,7 +67,7 @@ export class FwBenchPoints extends LitElement {
             </tbody>
           </table>`
         : ''}
-      ${messages.map(([k, m]) => html`<div class="msg" role="alert">${k}: ${m}</div>`)}
+      ${messages.map(([k, m]) => html`<div class="msg" role="alert">${labelFor(k)}: ${m}</div>`)}
       ${this.points.some((p) => !p.head || !p.mass) ? html`<p>A row with an empty box is not used until both are filled in.</p>` : ''}
       <button @click=${() => this.change([...this.points, { head: '', mass: '' }])}>Add a bench point</button>
     </fieldset>`;

@@ -2,21 +2,11 @@ import { LitElement, css, html, nothing } from 'lit';
 import { customElement, property } from 'lit/decorators.js';
 import { CONSTRAINT_TEXT } from '../../generator/sizing/layout/constraint-text.ts';
 import type { SizingResult, SizingSuccess, WayOut } from '../../generator/sizing/result.ts';
+import { inLabels, labelFor } from '../lib/field-label.ts';
 import * as f from '../lib/format.ts';
 import type { UnitSystem } from '../lib/units-system.ts';
 import { flowBandWords } from './fw-flow-plot.ts';
 import { shared } from './shared-styles.ts';
-
-/** Document paths in plain words, for ways out. */
-const FIELD_WORDS: Record<string, string> = {
-  'level.target': 'water depth to hold',
-  'supply.headMax': 'tank full height',
-  'supply.headMin': 'tank low height',
-  'nozzle.sealDiameter': 'nozzle lip width',
-  'nozzle.orifice': 'nozzle hole',
-  'supply.tubeInnerDiameter': 'feed tube width',
-  'limits.maxOuterDiameter': 'widest valve that fits',
-};
 
 /**
  * The sized valve in numbers, or why it cannot be sized with one-click ways out.
@@ -136,8 +126,8 @@ export class FwResults extends LitElement {
       </section>
       <section aria-label="What set the size">
         <h2>What set the size</h2>
-        <ul>${s.boundBy.map((b) => html`<li>${(CONSTRAINT_TEXT as Record<string, string>)[b] ?? b}</li>`)}</ul>
-        ${s.warnings.map((w) => html`<div class="warn" data-warning=${w.code}>${w.message}</div>`)}
+        <ul>${s.boundBy.map((b) => html`<li>${inLabels((CONSTRAINT_TEXT as Record<string, string>)[b] ?? b)}</li>`)}</ul>
+        ${s.warnings.map((w) => html`<div class="warn" data-warning=${w.code}>${inLabels(w.message)}</div>`)}
       </section>
       ${this.timing ? html`<p class="timing" data-timing>${this.timing}</p>` : nothing}`;
   }
@@ -159,11 +149,11 @@ export class FwResults extends LitElement {
       ${failure
         ? html`<section class="fail" role="alert" aria-label="Cannot size">
             <h2>No valve fits these numbers</h2>
-            <ul>${failure.reasons.map((x) => html`<li>${x.message}</li>`)}</ul>
+            <ul>${failure.reasons.map((x) => html`<li>${inLabels(x.message)}</li>`)}</ul>
             ${failure.waysOut.length
               ? html`<div class="ways"><p>Any one of these would work:</p>
                   ${failure.waysOut.map(
-                    (w) => html`<button data-way-out=${w.field} @click=${() => this.wayOut(w)}>Set ${[w, ...(w.also ?? [])].map((c) => `${FIELD_WORDS[c.field] ?? c.field} to ${c.value}`).join(' and ')}: ${w.message}</button>`,
+                    (w) => html`<button data-way-out=${w.field} @click=${() => this.wayOut(w)}>Set ${[w, ...(w.also ?? [])].map((c) => `"${labelFor(c.field)}" to ${c.value}`).join(' and ')}: ${w.message}</button>`,
                   )}</div>`
               : nothing}
             ${shown ? html`<p>Below: the last design that worked.</p>` : nothing}
