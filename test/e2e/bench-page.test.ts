@@ -13,45 +13,13 @@
  * half the flow alone, generator/plan/plan-network.ts, energy equation for
  * branching pipes after White, Fluid Mechanics ch. 6).
  */
-import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
-import { existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
-import { createServer } from 'node:net';
-import { tmpdir } from 'node:os';
+import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { strFromU8, unzipSync } from 'fflate';
-import { chromium, type BrowserContext, type Page } from 'playwright-core';
+import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { checkBinaryStl } from './stl-check.ts';
-
-const CHROMIUM = '/usr/bin/chromium';
-const haveChromium = existsSync(CHROMIUM);
-const ROOT = new URL('../..', import.meta.url).pathname;
-const SHOTS = join(ROOT, 'test-output');
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const server = createServer();
-    server.once('error', reject);
-    server.listen(0, '127.0.0.1', () => {
-      const port = (server.address() as { port: number }).port;
-      server.close(() => resolve(port));
-    });
-  });
-}
-
-async function waitForServer(url: string, child: ChildProcess, timeoutMs: number): Promise<void> {
-  const start = Date.now();
-  for (;;) {
-    if (child.exitCode !== null) throw new Error(`vite preview exited with ${child.exitCode}`);
-    try {
-      if ((await fetch(url)).ok) return;
-    } catch {
-      // not up yet
-    }
-    if (Date.now() - start > timeoutMs) throw new Error(`vite preview did not answer at ${url}`);
-    await new Promise((r) => setTimeout(r, 150));
-  }
-}
+import { ROOT, SHOTS, haveChromium, serveWorkbench, type ServedWorkbench } from './served-workbench.ts';
 
 const SIZES = [
   { name: '1400', width: 1400, height: 900 },
@@ -60,40 +28,17 @@ const SIZES = [
 ] as const;
 
 describe.skipIf(!haveChromium)('bench page in Chromium', () => {
-  let outDir = '';
-  let userDir = '';
-  let preview: ChildProcess | null = null;
+  let served: ServedWorkbench;
   let context: BrowserContext;
   let page: Page;
   let url = '';
 
   beforeAll(async () => {
-    mkdirSync(SHOTS, { recursive: true });
-    outDir = mkdtempSync(join(tmpdir(), 'fw-e2e-bench-dist-'));
-    userDir = mkdtempSync(join(tmpdir(), 'fw-e2e-bench-chromium-'));
-    const vite = join(ROOT, 'node_modules/vite/bin/vite.js');
-    const built = spawnSync(process.execPath, [vite, 'build', '--outDir', outDir, '--emptyOutDir', '--logLevel', 'warn'], { cwd: ROOT, encoding: 'utf8' });
-    if (built.status !== 0) throw new Error(`vite build failed:\n${built.stdout}\n${built.stderr}`);
-    const port = await freePort();
-    preview = spawn(process.execPath, [vite, 'preview', '--outDir', outDir, '--port', String(port), '--strictPort', '--host', '127.0.0.1'], { cwd: ROOT, stdio: 'ignore' });
-    url = `http://127.0.0.1:${port}/`;
-    await waitForServer(url, preview, 20_000);
-    context = await chromium.launchPersistentContext(userDir, {
-      executablePath: CHROMIUM,
-      headless: true,
-      acceptDownloads: true,
-      viewport: { width: 1400, height: 900 },
-      args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
-    });
-    page = context.pages()[0] ?? (await context.newPage());
-    page.on('pageerror', (e) => console.error('[page error]', e.message));
+    served = await serveWorkbench('e2e-bench');
+    ({ context, page, url } = served);
   });
 
-  afterAll(async () => {
-    await context?.close();
-    preview?.kill();
-    for (const dir of [outDir, userDir]) if (dir) rmSync(dir, { recursive: true, force: true });
-  });
+  afterAll(async () => served?.close());
 
   const bench = () => page.locator('fw-bench-page');
   const shot = (name: string) => page.screenshot({ path: join(SHOTS, `${name}.png`), fullPage: true });
@@ -258,9 +203,7 @@ describe.skipIf(!haveChromium)('bench page in Chromium', () => {
     const plan = JSON.parse(readFileSync(join(ROOT, 'presets/plan-rooftop-shelf.json'), 'utf8')) as { name: string; containers: unknown[] };
     plan.name = 'Two shelves';
     plan.containers = plan.containers.slice(0, 2);
-    const file = join(outDir, 'two-shelves.json');
-    writeFileSync(file, JSON.stringify(plan));
-    await page.locator('fw-file-bar input[type="file"]').setInputFiles(file);
+    await page.locator('fw-file-bar input[type="file"]').setInputFiles({ name: 'two-shelves.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(plan)) });
     const offer = page.locator('button[data-notice-action]');
     await offer.waitFor({ timeout: 10_000 });
     expect(await page.getByText('unknown key').count()).toBe(0);

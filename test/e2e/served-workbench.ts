@@ -13,6 +13,10 @@ import { chromium, type BrowserContext, type Page } from 'playwright-core';
 
 export const CHROMIUM = '/usr/bin/chromium';
 export const haveChromium = existsSync(CHROMIUM);
+if (!haveChromium) {
+  if (process.env.CI) throw new Error(`${CHROMIUM} is missing: CI must install Debian's chromium (apt-get install -y chromium) to run the browser tests.`);
+  console.warn(`[e2e] SKIPPED: ${CHROMIUM} not found. Install it with: apt-get update && apt-get install -y chromium`);
+}
 export const ROOT = new URL('../..', import.meta.url).pathname;
 /** screenshots land here (ignored by git): look at them after changing the screen */
 export const SHOTS = join(ROOT, 'test-output');

@@ -7,90 +7,26 @@
  * inch (25.4 mm exactly, NIST SP 811), and the sizing's own published worked
  * scale from DESIGN (2.2 m of head, 45 mm level: a float of roughly 54 mm across).
  */
-import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
-import { existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
-import { createServer } from 'node:net';
-import { tmpdir } from 'node:os';
+import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { unzipSync } from 'fflate';
-import { chromium, type BrowserContext, type Page } from 'playwright-core';
+import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { checkBinaryStl } from './stl-check.ts';
-
-const CHROMIUM = '/usr/bin/chromium';
-const haveChromium = existsSync(CHROMIUM);
-if (!haveChromium) {
-  if (process.env.CI) throw new Error(`${CHROMIUM} is missing: CI must install Debian's chromium (apt-get install -y chromium) to run the browser tests.`);
-  console.warn(`[e2e] SKIPPED: ${CHROMIUM} not found. Install it with: apt-get update && apt-get install -y chromium`);
-}
-
-const ROOT = new URL('../..', import.meta.url).pathname;
-const SHOTS = join(ROOT, 'test-output');
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const server = createServer();
-    server.once('error', reject);
-    server.listen(0, '127.0.0.1', () => {
-      const port = (server.address() as { port: number }).port;
-      server.close(() => resolve(port));
-    });
-  });
-}
-
-function waitForServer(url: string, child: ChildProcess, timeoutMs: number): Promise<void> {
-  const start = Date.now();
-  return new Promise((resolve, reject) => {
-    const tick = async () => {
-      if (child.exitCode !== null) return reject(new Error(`vite preview exited with ${child.exitCode}`));
-      try {
-        const res = await fetch(url);
-        if (res.ok) return resolve();
-      } catch {
-        // not up yet
-      }
-      if (Date.now() - start > timeoutMs) return reject(new Error(`vite preview did not answer at ${url}`));
-      setTimeout(tick, 150);
-    };
-    tick();
-  });
-}
+import { SHOTS, haveChromium, serveWorkbench, type ServedWorkbench } from './served-workbench.ts';
 
 describe.skipIf(!haveChromium)('workbench in Chromium', () => {
-  let outDir = '';
-  let userDir = '';
-  let preview: ChildProcess | null = null;
+  let served: ServedWorkbench;
   let context: BrowserContext;
   let page: Page;
   let url = '';
 
   beforeAll(async () => {
-    mkdirSync(SHOTS, { recursive: true });
-    outDir = mkdtempSync(join(tmpdir(), 'fw-e2e-dist-'));
-    userDir = mkdtempSync(join(tmpdir(), 'fw-e2e-chromium-'));
-    const vite = join(ROOT, 'node_modules/vite/bin/vite.js');
-    const built = spawnSync(process.execPath, [vite, 'build', '--outDir', outDir, '--emptyOutDir', '--logLevel', 'warn'], { cwd: ROOT, encoding: 'utf8' });
-    if (built.status !== 0) throw new Error(`vite build failed:\n${built.stdout}\n${built.stderr}`);
-    const port = await freePort();
-    preview = spawn(process.execPath, [vite, 'preview', '--outDir', outDir, '--port', String(port), '--strictPort', '--host', '127.0.0.1'], { cwd: ROOT, stdio: 'ignore' });
-    url = `http://127.0.0.1:${port}/`;
-    await waitForServer(url, preview, 20_000);
-    context = await chromium.launchPersistentContext(userDir, {
-      executablePath: CHROMIUM,
-      headless: true,
-      acceptDownloads: true,
-      viewport: { width: 1400, height: 900 },
-      args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
-    });
-    page = context.pages()[0] ?? (await context.newPage());
-    page.on('pageerror', (e) => console.error('[page error]', e.message));
+    served = await serveWorkbench('e2e');
+    ({ context, page, url } = served);
   });
 
-  afterAll(async () => {
-    await context?.close();
-    preview?.kill();
-    for (const dir of [outDir, userDir]) if (dir) rmSync(dir, { recursive: true, force: true });
-  });
+  afterAll(async () => served?.close());
 
   const app = () => page.locator('fw-app');
   const shot = (name: string) => page.screenshot({ path: join(SHOTS, `${name}.png`) });
