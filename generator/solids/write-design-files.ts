@@ -21,6 +21,7 @@ import { randomBytes } from 'node:crypto';
 import { lstat, mkdir, rename, rm, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import { buildSheetHtml, buildSheetMarkdown } from '../doc/build-sheet.ts';
+import { fileStem } from '../doc/file-stem.ts';
 import type { NormalizedDoc } from '../doc/schema.ts';
 import type { SizingSuccess } from '../sizing/result.ts';
 import { printBedMm } from '../sizing/parts/print-bed.ts';
@@ -70,14 +71,7 @@ const BASE_NAME_PATTERN = /^[A-Za-z0-9][A-Za-z0-9._-]{0,79}$/;
 
 /** A file-safe base name from the design's name ("Rooftop planter tubs" -> "rooftop-planter-tubs"). */
 export function baseNameFor(document: NormalizedDoc): string {
-  const slug = (document.name ?? '')
-    .toLowerCase()
-    .normalize('NFKD')
-    .replace(/[^a-z0-9]+/g, '-')
-    .replace(/^-+|-+$/g, '')
-    .slice(0, 48)
-    .replace(/-+$/, '');
-  return slug || 'float-valve';
+  return fileStem(document.name, { fallback: 'float-valve' });
 }
 
 /** The parts on plates no larger than the bed (packPlates): one 3MF per plate. */

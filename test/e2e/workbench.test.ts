@@ -109,11 +109,15 @@ describe.skipIf(!haveChromium)('workbench in Chromium', () => {
     await page.getByLabel('cut open').check();
   });
 
-  it('exports an STL that is a closed solid, and a zip of every part', async () => {
+  it('exports an STL that is a closed solid, and a zip of every part, named after the valve (accents dropped, Unicode NFKD)', async () => {
+    const named = await buildId();
+    await page.locator('#f-name').fill("Tomates d'été");
+    await waitBuildAfter(named);
+    expect(await page.locator('[data-file-stem]').textContent()).toBe('Files are named tomates-d-ete-…');
     const [download] = await Promise.all([page.waitForEvent('download', { timeout: 30_000 }), page.locator('button[data-part="float"]').click()]);
     const stl = new Uint8Array(readFileSync((await download.path())!));
     const check = checkBinaryStl(stl);
-    expect(download.suggestedFilename()).toMatch(/float\.stl$/);
+    expect(download.suggestedFilename()).toBe('tomates-d-ete-float.stl');
     expect(check.closed).toBe(true);
     expect(check.volumeMm3).toBeGreaterThan(0);
     expect(check.min[2]).toBeCloseTo(0, 3); // resting on the bed
@@ -126,7 +130,11 @@ describe.skipIf(!haveChromium)('workbench in Chromium', () => {
       expect(checkBinaryStl(entries[name!]).closed, `${part} closed`).toBe(true);
     }
     expect(names.some((n) => n.endsWith('.3mf'))).toBe(true);
-    expect(names.some((n) => n.endsWith('.json'))).toBe(true);
+    expect(names).toContain('tomates-d-ete-design.json');
+    expect(zipDownload.suggestedFilename()).toBe('tomates-d-ete.zip');
+    const [saved] = await Promise.all([page.waitForEvent('download', { timeout: 30_000 }), page.getByRole('button', { name: 'Save design file' }).click()]);
+    expect(saved.suggestedFilename()).toBe('tomates-d-ete-design.json');
+    expect(JSON.parse(readFileSync((await saved.path())!, 'utf8')).name).toBe("Tomates d'été");
   });
 
   it('opens the build sheet with the cautions in a tab to print', async () => {

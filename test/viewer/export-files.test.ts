@@ -13,7 +13,7 @@ import { baseName, exportFiles } from '../../viewer/worker/export-files.ts';
 import { checkBinaryStl } from '../e2e/stl-check.ts';
 
 describe('export files', async () => {
-  const doc = { name: 'Bench 2, left', supply: { headMax: '1.8 m' }, level: { target: '50 mm' } };
+  const doc = { name: 'Bench 2, côté gauche', supply: { headMax: '1.8 m' }, level: { target: '50 mm' } };
   const p = parseDesign(doc);
   if (!p.ok) throw new Error('bad doc');
   const sizing = sizeDesign(p.inputs);
@@ -21,13 +21,14 @@ describe('export files', async () => {
   const meshes = await buildParts(sizing, { quality: 'export' });
 
   it('names files after the design', () => {
-    expect(baseName(doc)).toBe('floatwright-bench-2-left');
+    expect(baseName(doc)).toBe('bench-2-cote-gauche'); // accents dropped (Unicode NFKD, UAX #15)
     expect(baseName({})).toBe('floatwright-valve');
+    expect(baseName({ name: '¿?' })).toBe('floatwright-valve');
   });
 
   it('writes each part as a closed binary STL resting on the bed', () => {
     const [file] = exportFiles('stl', sizing, doc, meshes, 'housing');
-    expect(file.name).toBe('floatwright-bench-2-left-housing.stl');
+    expect(file.name).toBe('bench-2-cote-gauche-housing.stl');
     const check = checkBinaryStl(file.bytes);
     expect(check.closed).toBe(true);
     expect(check.volumeMm3).toBeGreaterThan(0);
@@ -40,12 +41,12 @@ describe('export files', async () => {
     const names = Object.keys(entries).sort();
     expect(names).toHaveLength(7);
     for (const part of ['housing', 'float', 'nozzle', 'pin']) {
-      const stl = entries[`floatwright-bench-2-left-${part}.stl`];
+      const stl = entries[`bench-2-cote-gauche-${part}.stl`];
       expect(checkBinaryStl(stl).closed, part).toBe(true);
     }
-    expect(JSON.parse(strFromU8(entries['floatwright-bench-2-left.json']))).toEqual(doc);
-    expect(strFromU8(entries['floatwright-bench-2-left-build-sheet.html'])).toContain('Low pressure only');
-    const plate = unzipSync(entries['floatwright-bench-2-left-plate.3mf']);
+    expect(JSON.parse(strFromU8(entries['bench-2-cote-gauche-design.json']))).toEqual(doc);
+    expect(strFromU8(entries['bench-2-cote-gauche-build-sheet.html'])).toContain('Low pressure only');
+    const plate = unzipSync(entries['bench-2-cote-gauche-plate.3mf']);
     expect(Object.keys(plate)).toEqual(expect.arrayContaining(['[Content_Types].xml', '_rels/.rels', '3D/3dmodel.model']));
     expect(strFromU8(plate['3D/3dmodel.model']).match(/<object /g)).toHaveLength(4);
   });

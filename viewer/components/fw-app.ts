@@ -5,6 +5,7 @@ import type { SizingResult, SizingSuccess, WayOut } from '../../generator/sizing
 import { BuildClient, type WorkerFactory } from '../lib/build-client.ts';
 import { setAt, type Doc } from '../lib/doc-path.ts';
 import { docToSize } from '../lib/doc-to-size.ts';
+import { fileStem } from '../../generator/doc/file-stem.ts';
 import { placeErrors } from '../lib/place-errors.ts';
 import { ALL_FIELDS } from '../lib/form-fields.ts';
 import { presets, type Preset } from '../lib/presets.ts';
@@ -392,7 +393,8 @@ export class FwApp extends LitElement {
       return;
     }
     if (e.detail.kind === 'json') {
-      download({ name: 'floatwright-design.json', mime: 'application/json', bytes: new TextEncoder().encode(JSON.stringify(doc, null, 2) + '\n') });
+      // named as the zip names it: <stem>-design.json
+      download({ name: `${fileStem(doc.name)}-design.json`, mime: 'application/json', bytes: new TextEncoder().encode(JSON.stringify(doc, null, 2) + '\n') });
       return;
     }
     this.busy = e.detail.kind === 'sheet' ? 'Writing the build sheet…' : 'Making your files at print quality…';

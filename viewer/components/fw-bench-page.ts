@@ -3,6 +3,7 @@ import { customElement, property, state } from 'lit/decorators.js';
 import { BenchClient, type BenchWorkerFactory } from '../lib/bench-client.ts';
 import { GROUP_FIELDS, TANK_FIELDS, benchDisplay, benchInLabels, benchLabelFor, benchValue, convertPlan, setPlanAt, unitOf, type BenchField } from '../lib/bench-fields.ts';
 import { isPlanDocument, loadBench, loadPreviousBench, saveBench, savePreviousBench } from '../lib/bench-storage.ts';
+import { fileStem } from '../../generator/doc/file-stem.ts';
 import { getAt, type Doc } from '../lib/doc-path.ts';
 import { flowLph, headM, lengthMm, minutes } from '../lib/format.ts';
 import type { UnitSystem } from '../lib/units-system.ts';
@@ -299,8 +300,7 @@ export class FwBenchPage extends LitElement {
   }
 
   private saveFile(): void {
-    const name = typeof this.plan.name === 'string' && this.plan.name.trim() ? this.plan.name.trim() : 'bench';
-    const slug = name.toLowerCase().normalize('NFKD').replace(/[\u0300-\u036f]/g, '').replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '') || 'bench';
+    const slug = fileStem(this.plan.name, { fallback: 'bench' });
     download({ name: `floatwright-plan-${slug}.json`, mime: 'application/json', bytes: new TextEncoder().encode(`${JSON.stringify(this.plan, null, 2)}\n`) });
   }
 

@@ -5,6 +5,7 @@ import { AUTO_PAD, findPad, padNames } from '../../generator/sizing/seal/pads.ts
 import { getAt, type Doc } from '../lib/doc-path.ts';
 import { FIELD_GROUPS } from '../lib/form-fields.ts';
 import { MATERIAL_DENSITY_FIELD, OTHER_FILAMENT, materialChoice, otherFilamentValue } from '../lib/material-choice.ts';
+import { fileStem } from '../../generator/doc/file-stem.ts';
 import { fieldDefault } from '../lib/field-default.ts';
 import { labelFor } from '../lib/field-label.ts';
 import { REFILL_BOXES, loneRefillBox } from '../lib/lone-refill-box.ts';
@@ -185,7 +186,8 @@ export class FwDesignForm extends LitElement {
         <div class="field ${nameError ? 'bad' : ''}">
           <label for="f-name">Name (used for the file names)</label>
           <input id="f-name" name="name" style="width: 100%; box-sizing: border-box" maxlength="80" autocomplete="off" .value=${typeof name === 'string' ? name : ''}
-            aria-describedby="f-name-msg" @input=${(e: InputEvent) => this.emit('name', (e.target as HTMLInputElement).value || undefined)} />
+            aria-describedby="f-name-note f-name-msg" @input=${(e: InputEvent) => this.emit('name', (e.target as HTMLInputElement).value || undefined)} />
+          <div class="note" id="f-name-note" data-file-stem>${`Files are named ${fileStem(name)}-…`}</div>
           <div class="msg" id="f-name-msg">${nameError ?? ''}</div>
         </div>
       </fieldset>

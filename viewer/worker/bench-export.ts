@@ -11,14 +11,11 @@ import { buildParts } from '../../generator/solids/index.ts';
 import { plateSetFiles, type PlateSetDesignMeshes } from '../../generator/solids/mesh/plate-set-files.ts';
 import { printBedMm } from '../../generator/sizing/parts/print-bed.ts';
 import { buildSheetHtml, buildSheetMarkdown } from '../../generator/doc/build-sheet.ts';
+import { fileStem } from '../../generator/doc/file-stem.ts';
 import { plates, stlFile } from './export-files.ts';
 import { PART_NAMES, type PartMeshes } from './parts-contract.ts';
 import type { ExportFile } from './protocol.ts';
 
-/** A folder name from a group name: "Top tier" -> "top-tier" (accents dropped). */
-export function folderSlug(text: string): string {
-  return text.toLowerCase().normalize('NFKD').replace(/[\u0300-\u036f]/g, '').replace(/[^a-z0-9]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 40) || 'design';
-}
 
 export async function benchZip(result: PlanResult, name = 'bench'): Promise<ExportFile> {
   const entries: Record<string, Uint8Array> = {};
@@ -27,7 +24,7 @@ export async function benchZip(result: PlanResult, name = 'bench'): Promise<Expo
   const used = new Set<string>();
   for (const d of result.designs) {
     const first = result.containers.find((c) => c.index === d.containerIndices[0])!;
-    let folder = `${d.id}-${folderSlug(first.name)}`;
+    let folder = `${d.id}-${fileStem(first.name, { fallback: 'design', maxLength: 40 })}`;
     while (used.has(folder)) folder += '-x';
     used.add(folder);
     const doc = result.plan.containers.find((c) => c.index === first.index)!.document;
@@ -59,5 +56,5 @@ export async function benchZip(result: PlanResult, name = 'bench'): Promise<Expo
   entries['plan-report.md'] = strToU8(planMarkdown(report));
   entries['plan-report.html'] = strToU8(planHtml(report));
   entries['plan.json'] = strToU8(`${JSON.stringify(planJson(result, files, { plates: plateNames }), null, 2)}\n`);
-  return { name: `floatwright-${folderSlug(name) || 'bench'}.zip`, mime: 'application/zip', bytes: zipSync(entries, { level: 6 }) };
+  return { name: `floatwright-${fileStem(name, { fallback: 'bench' })}.zip`, mime: 'application/zip', bytes: zipSync(entries, { level: 6 }) };
 }

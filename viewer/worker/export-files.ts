@@ -6,6 +6,7 @@ import { meshBounds } from '../../generator/solids/mesh/mesh-bounds.ts';
 import { packPlates } from '../../generator/solids/mesh/pack-plates.ts';
 import { printBedMm } from '../../generator/sizing/parts/print-bed.ts';
 import type { SizingSuccess } from '../../generator/sizing/result.ts';
+import { fileStem } from '../../generator/doc/file-stem.ts';
 import { buildSheet } from './sheet-source.ts';
 import { PART_NAMES, type PartMeshes, type PartName } from './parts-contract.ts';
 import type { ExportFile, ExportKind } from './protocol.ts';
@@ -13,10 +14,9 @@ import type { ExportFile, ExportKind } from './protocol.ts';
 /** The 3MF plate: the design's bed (print.bed, 220 x 220 mm by default, common practice), 8 mm between parts. */
 export const PLATE = { plateWidthMm: 220, plateDepthMm: 220, spacingMm: 8 };
 
+/** The stem of every file of a design: its name made file-safe ("Tomates d'été" -> "tomates-d-ete"), else "floatwright-valve". */
 export function baseName(document: unknown): string {
-  const name = document && typeof document === 'object' ? (document as { name?: unknown }).name : undefined;
-  const slug = typeof name === 'string' ? name.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '').slice(0, 40) : '';
-  return slug ? `floatwright-${slug}` : 'floatwright-valve';
+  return fileStem(document && typeof document === 'object' ? (document as { name?: unknown }).name : undefined);
 }
 
 export function stlFile(base: string, part: PartName, meshes: PartMeshes): ExportFile {
@@ -45,7 +45,7 @@ export function exportFiles(kind: ExportKind, sizing: SizingSuccess, document: u
       }
       for (const p of plates(base, m, document, sizing)) entries[p.name] = p.bytes;
       entries[`${base}-build-sheet.html`] = strToU8(buildSheet(sizing, document, base));
-      entries[`${base}.json`] = strToU8(JSON.stringify(document, null, 2) + '\n');
+      entries[`${base}-design.json`] = strToU8(JSON.stringify(document, null, 2) + '\n');
       return [{ name: `${base}.zip`, mime: 'application/zip', bytes: zipSync(entries, { level: 6 }) }];
     }
   }

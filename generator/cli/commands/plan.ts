@@ -11,6 +11,7 @@ import { availableParallelism } from 'node:os';
 import { basename, dirname, join } from 'node:path';
 import type { FieldError } from '../../doc/fields.ts';
 import { ROOT_FIELD } from '../../doc/fields.ts';
+import { fileStem } from '../../doc/file-stem.ts';
 import { parsePlan, PLAN_ROOT_FIELD } from '../../plan/schema.ts';
 import { solvePlan } from '../../plan/solve-plan.ts';
 import { documentWithHeads, planJson } from '../../plan/plan-json.ts';
@@ -67,9 +68,7 @@ const STYLE = { command: 'plan', subject: 'the plan', help: HELP, allowPositiona
 const inputErrors = (errors: FieldError[], json: boolean, io: Io, subject?: string) => reportInputErrors(STYLE, errors, json, io, subject);
 
 /** A folder name from a container name: "top tier" -> "top-tier". */
-function slug(text: string): string {
-  return text.toLowerCase().normalize('NFKD').replace(/[^a-z0-9]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 40) || 'design';
-}
+const slug = (text: string) => fileStem(text, { fallback: 'design', maxLength: 40 });
 
 /** A progress bar on standard error, only for a person at a terminal. */
 function progressBar(io: Io, enabled: boolean) {
