@@ -28,6 +28,10 @@ export const DESIGN_FLAGS = [
   { flag: 'pad', path: 'seal.pad', help: 'seal pad from the table, e.g. "sponge grade 2" or "rubber 40A" (default auto: the softest sponge that fits)', example: 'sponge-2' },
   { flag: 'overflow', path: 'container.overflow', help: 'height of the container overflow above its floor (the valve shuts 10 mm below it at least)', example: '80mm' },
   { flag: 'demand', path: 'container.demand', help: "the plants' peak use (default 3 L/day; also gal/day, L/h)", example: '5L/day' },
+  { flag: 'rim-height', path: 'container.rimHeight', help: 'top of the container wall above its floor (only then can the valve hang from the rim)', example: '350mm' },
+  { flag: 'container-wall', path: 'container.wallThickness', help: 'container wall thickness at the rim (default 3 mm)', example: '2.5mm' },
+  { flag: 'architecture', path: 'valve.architecture', help: 'auto (least plastic), direct, or lever (the float on an arm)', example: 'lever' },
+  { flag: 'mount', path: 'valve.mount', help: 'auto, floor, or rim (hung from the container rim; needs --rim-height)', example: 'rim' },
 ] as const;
 
 /** parseArgs options for --design and the design flags. */

@@ -205,6 +205,24 @@ export function resolveHead(reading: HeadReading, densityKgM3: number, spec: Qua
   return problem ? { ok: false, message: problem } : { ok: true, measured: { si: headM, shown } };
 }
 
+/**
+ * A field that takes one word from a short list (case and surrounding spaces ignored), e.g.
+ * `valve.mount`: "auto" | "floor" | "rim". Absent: `fallback`. Anything else is refused with
+ * the words it takes, each with what it means.
+ */
+export function choiceField<T extends string>(label: string, choices: readonly { value: T; means: string }[], fallback: T): z.ZodType<T> {
+  return z.unknown().optional().transform((raw, ctx): T => {
+    if (raw === undefined) return fallback;
+    if (typeof raw === 'string') {
+      const found = choices.find((c) => c.value === raw.trim().toLowerCase());
+      if (found) return found.value;
+    }
+    const list = choices.map((c) => `"${c.value}" (${c.means})`).join(', ');
+    pushIssue(ctx, raw, `${showInput(raw)} is not ${label}; give one of ${list}.`);
+    return z.NEVER;
+  }) as unknown as z.ZodType<T>;
+}
+
 /** A short text field with a length limit. */
 export function textField(label: string, maxLength: number): z.ZodType<string | undefined> {
   return z.unknown().optional().transform((raw, ctx): string | undefined => {

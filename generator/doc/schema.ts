@@ -9,13 +9,15 @@
  */
 import { z } from 'zod';
 import { HEAD_CAP_M, STANDARD_GRAVITY, WATER_DENSITY_20C, WATER_VISCOSITY_20C } from '../sizing/constants.ts';
-import type { CalibrationPoint, DesignInputs } from '../sizing/inputs.ts';
+import type { Architecture, CalibrationPoint, DesignInputs, Mount } from '../sizing/inputs.ts';
+import { RIM_HEIGHT_RANGE_MM, WALL_THICKNESS_RANGE_MM } from '../sizing/rim/rim-input-problems.ts';
 import { fitSealCalibration, headsDefineSlope } from '../sizing/hydrostatics/fit-seal-calibration.ts';
 import { DEFAULT_MATERIAL_NAME, findMaterial, materialNames } from '../sizing/materials.ts';
 import { AUTO_PAD, PADS, findPad, padNames } from '../sizing/seal/pads.ts';
 import { chooseSeal } from '../sizing/seal/choose-seal.ts';
 import {
   checkRange,
+  choiceField,
   densityField,
   forceField,
   headField,
@@ -66,6 +68,8 @@ export const FIELD_UNITS = {
   'reservoir.rise': 'mm',
   'container.overflow': 'mm',
   'container.demand': 'L/day',
+  'container.rimHeight': 'mm',
+  'container.wallThickness': 'mm',
   'print.bed.width': 'mm',
   'print.bed.depth': 'mm',
 } as const;
@@ -89,7 +93,16 @@ export const DEFAULT_DOCUMENT = {
   print: { material: DEFAULT_MATERIAL_NAME, wall: '2.25 mm', lineWidth: '0.45 mm', bed: '220 x 220 mm' },
   limits: { maxOuterDiameter: '120 mm' },
   reserve: 1.5,
+  valve: { architecture: 'auto', mount: 'auto' },
 } as const;
+
+/**
+ * The container's wall at the rim when the document gives none (container.wallThickness): 3 mm. Buckets,
+ * tubs and totes are mostly 2 to 3 mm at the rim (common practice, from memory). The hanger's gap is the
+ * wall plus a print clearance each side; its clamp screw takes up a thinner wall, but a thicker one will
+ * not go in, so the default sits at the thick end: measure yours.
+ */
+export const DEFAULT_CONTAINER_WALL_MM = 3;
 
 /**
  * The plants' peak use when the document gives none (container.demand): 3 L a day, a container of two or
@@ -111,7 +124,7 @@ export const FIELD_SPECS = {
   headMin: { unit: 'm', label: 'the lowest supply head', min: 0, minExclusive: true, max: HEAD_CAP_M, note: LOW_PRESSURE_NOTE },
   tubeInnerDiameter: { unit: 'mm', label: 'the supply tube inner diameter', min: 1, max: 25 },
   tubeLength: { unit: 'm', label: 'the supply tube length', min: 0, max: 100 },
-  target: { unit: 'mm', label: 'the target level (water depth above the container floor)', min: 5, max: 250, example: '40 mm' },
+  target: { unit: 'mm', label: 'the target level (water depth above the container floor)', min: 5, max: 300, example: '40 mm' },
   liquidDensity: { unit: 'kg/m3', label: 'the liquid density', min: 900, max: 1300 },
   viscosity: { unit: 'mPa s', label: 'the liquid viscosity', min: 0.2, max: 100 },
   orifice: { unit: 'mm', label: 'the nozzle orifice', min: 0.5, max: 6 },
@@ -132,6 +145,11 @@ export const FIELD_SPECS = {
   overflow: { unit: 'mm', label: 'the overflow height (above the container floor)', min: 10, max: 2000, example: '60 mm' },
   demand: { unit: 'L/day', label: "the plants' peak use (container demand)", min: 0, max: 5000, example: '3 L/day' },
   bedSide: { unit: 'mm', label: 'a bed side', min: 50, max: 1000, example: '220 mm' },
+  rimHeight: {
+    unit: 'mm', label: 'the rim height (top of the container wall above its floor; only then can the valve hang from the rim)',
+    ...RIM_HEIGHT_RANGE_MM, example: '350 mm',
+  },
+  containerWall: { unit: 'mm', label: "the container's wall thickness at the rim", ...WALL_THICKNESS_RANGE_MM, example: '3 mm' },
 } satisfies Record<string, QuantitySpec>;
 
 export const MAX_CALIBRATION_POINTS = 20;
@@ -269,6 +287,18 @@ const calibrationField = z
   })
   .optional();
 
+/** valve.architecture and valve.mount: the words they take and what each means (for the refusal). */
+export const ARCHITECTURE_CHOICES: readonly { value: Architecture | 'auto'; means: string }[] = [
+  { value: 'auto', means: 'floatwright picks the one with the least plastic' },
+  { value: 'direct', means: 'the float pushes the pad straight up' },
+  { value: 'lever', means: 'the float rides on an arm that multiplies its push' },
+];
+export const MOUNT_CHOICES: readonly { value: Mount | 'auto'; means: string }[] = [
+  { value: 'auto', means: 'floatwright picks; the rim only when container.rimHeight is given' },
+  { value: 'floor', means: 'it stands on the container floor' },
+  { value: 'rim', means: 'it hangs from the container rim on a slotted stem' },
+];
+
 const documentShape = {
   name: textField('the name', MAX_NAME_LENGTH),
   notes: textField('the notes', MAX_NOTES_LENGTH),
@@ -316,7 +346,13 @@ const documentShape = {
   container: section({
     overflow: optionalQuantityField('length', S.overflow),
     demand: optionalQuantityField('flow', S.demand),
+    rimHeight: optionalQuantityField('length', S.rimHeight),
+    wallThickness: optionalQuantityField('length', S.containerWall),
   }).optional(),
+  valve: section({
+    architecture: choiceField('a valve architecture', ARCHITECTURE_CHOICES, D.valve.architecture),
+    mount: choiceField('a valve mount', MOUNT_CHOICES, D.valve.mount),
+  }).prefault(EMPTY),
 };
 
 /** The document written out in full: every value in its field's unit, defaults filled in. Parses back to the same inputs. */
@@ -332,7 +368,8 @@ export interface NormalizedDoc {
   limits: { maxOuterDiameter: string };
   reserve: number;
   reservoir?: { area: string; rise: string };
-  container?: { overflow?: string; demand?: string };
+  container?: { overflow?: string; demand?: string; rimHeight?: string; wallThickness?: string };
+  valve: { architecture: Architecture | 'auto'; mount: Mount | 'auto' };
 }
 
 export interface ParsedDesign {
@@ -399,12 +436,24 @@ export const designSchema = section(documentShape).transform((doc, ctx): ParsedD
       `missing; give reservoir.${missing} together with reservoir.${other} (both are needed for a fill time), or leave both out.`);
   }
 
+  // the rim: the valve hangs from it, so it cannot hold a level above it; a rim mount needs one
+  const rimHeight = container?.rimHeight ?? null;
+  if (rimHeight && rimHeight.si < doc.level.target.si * (1 - 1e-12)) {
+    fail(ctx, ['container', 'rimHeight'], rimHeight.shown,
+      `${rimHeight.shown} is below level.target (${normalizedText(doc.level.target.si, 'mm')}); the valve hangs from the rim, so the rim must be at least as high as the level it holds.`);
+  }
+  if (!rimHeight && doc.valve.mount === 'rim') {
+    fail(ctx, ['container', 'rimHeight'], undefined,
+      `missing; valve.mount "rim" hangs the valve from the container's rim: give the rim height, the top of its wall above the floor, e.g. "${S.rimHeight.example}".`);
+  }
+
   if (ctx.issues.length > issuesBefore || !headMaxResult.ok || !headMin) return z.NEVER;
 
   const area = reservoir?.area ?? null;
   const rise = reservoir?.rise ?? null;
   const overflow = container?.overflow ?? null;
   const demand = container?.demand ?? null;
+  const containerWall = container?.wallThickness ?? null;
   const inputs: DesignInputs = {
     headMaxM: headMaxResult.measured.si,
     headMinM: headMin.si,
@@ -431,6 +480,10 @@ export const designSchema = section(documentShape).transform((doc, ctx): ParsedD
     demandM3s: demand ? demand.si : DEFAULT_DEMAND_M3S,
     bedWidthM: print.bed.widthM,
     bedDepthM: print.bed.depthM,
+    architecture: doc.valve.architecture,
+    mount: doc.valve.mount,
+    rimHeightM: rimHeight ? rimHeight.si : null,
+    containerWallM: containerWall ? containerWall.si : DEFAULT_CONTAINER_WALL_MM / 1e3,
     retiredFields,
   };
   // The sizing fits F = F_seat + A rho g H to the bench points (one point: A alone, F_seat from the pad model);
@@ -482,14 +535,18 @@ export const designSchema = section(documentShape).transform((doc, ctx): ParsedD
     ...(area && rise
       ? { reservoir: { area: normalizedText(area.si, U['reservoir.area']), rise: normalizedText(rise.si, U['reservoir.rise']) } }
       : {}),
-    ...(overflow || demand
+    ...(overflow || demand || rimHeight || containerWall
       ? {
           container: {
             ...(overflow ? { overflow: normalizedText(overflow.si, U['container.overflow']) } : {}),
             ...(demand ? { demand: normalizedText(demand.si, U['container.demand']) } : {}),
+            ...(rimHeight ? { rimHeight: normalizedText(rimHeight.si, U['container.rimHeight']) } : {}),
+            // the wall counts only with a rim: written out then, default or not, so the file says what was used
+            ...(containerWall || rimHeight ? { wallThickness: normalizedText(inputs.containerWallM, U['container.wallThickness']) } : {}),
           },
         }
       : {}),
+    valve: { architecture: inputs.architecture, mount: inputs.mount },
   };
   return { inputs, document };
 });

@@ -10,6 +10,11 @@ export interface CalibrationPoint {
   massKg: number;
 }
 
+/** The valve's kind: the float pushing the pad straight up (direct) or on an arm that multiplies its push (lever). */
+export type Architecture = 'direct' | 'lever';
+/** Where the valve stands: on the container floor, or hung from its rim on a slotted stem. */
+export type Mount = 'floor' | 'rim';
+
 export interface DesignInputs {
   /** tank water surface above the nozzle tip, highest, m (H_max) */
   headMaxM: number;
@@ -60,6 +65,14 @@ export interface DesignInputs {
   /** printer bed, m (plates never exceed it) */
   bedWidthM: number;
   bedDepthM: number;
+  /** valve.architecture: fixed by the grower, or 'auto' (the sizing picks the least plastic) */
+  architecture: Architecture | 'auto';
+  /** valve.mount: fixed by the grower, or 'auto'; the rim is only considered when rimHeightM is given */
+  mount: Mount | 'auto';
+  /** container rim (top of its wall) above the floor, m, or null when not given */
+  rimHeightM: number | null;
+  /** container wall thickness at the rim, m (the document's default when not given) */
+  containerWallM: number;
   /** document fields that were read but no longer mean anything (a first-version file); the sizing warns */
   retiredFields: string[];
 }

@@ -32,6 +32,8 @@ const SPEC_OF: Record<string, { spec: Spec; si: number; input: keyof DesignInput
   'seal.padThickness': { spec: FIELD_SPECS.padThickness, si: 1e-3, input: 'padThicknessM' },
   'container.overflow': { spec: FIELD_SPECS.overflow, si: 1e-3, input: 'overflowM' },
   'container.demand': { spec: FIELD_SPECS.demand, si: 1e-3 / 86400, input: 'demandM3s' },
+  'container.rimHeight': { spec: FIELD_SPECS.rimHeight, si: 1e-3, input: 'rimHeightM' },
+  'container.wallThickness': { spec: FIELD_SPECS.containerWall, si: 1e-3, input: 'containerWallM' },
 };
 
 /**

@@ -61,6 +61,11 @@ describe('defaults', () => {
       demandM3s: 3e-3 / 86400,
       bedWidthM: 0.22, // 220 x 220 mm, a common hobby printer bed (common practice)
       bedDepthM: 0.22,
+      // valve.architecture and valve.mount: "auto", the sizing picks; no rim unless given
+      architecture: 'auto',
+      mount: 'auto',
+      rimHeightM: null,
+      containerWallM: 0.003, // DEFAULT_CONTAINER_WALL_MM: buckets and totes 2 to 3 mm at the rim (common practice)
       retiredFields: [],
     });
   });
@@ -185,8 +190,10 @@ describe('refusals name the field, the value and the range', () => {
   });
 
   it.each([
-    ['level.target', '4 mm', 'from 5 mm to 250 mm'],
-    ['level.target', '30 cm', 'from 5 mm to 250 mm'],
+    ['level.target', '4 mm', 'from 5 mm to 300 mm'],
+    ['level.target', '31 cm', 'from 5 mm to 300 mm'],
+    ['container.rimHeight', '5 mm', 'from 10 mm to 1000 mm'],
+    ['container.wallThickness', '30 mm', 'from 0.5 mm to 25 mm'],
     ['liquid.density', '1.4 g/cm3', 'from 900 kg/m3 to 1300 kg/m3'],
     ['nozzle.orifice', '0.3 mm', 'from 0.5 mm to 6 mm'],
     ['nozzle.sealDiameter', '31 mm', 'from 1 mm to 30 mm'],
@@ -301,10 +308,52 @@ describe('reusable field machinery (for later documents)', () => {
 
   it('writes ranges and finds close keys', () => {
     expect(rangeText(FIELD_SPECS.headMax)).toBe('more than 0 m and at most 3.05 m');
-    expect(rangeText(FIELD_SPECS.target)).toBe('from 5 mm to 250 mm');
+    expect(rangeText(FIELD_SPECS.target)).toBe('from 5 mm to 300 mm');
     expect(closestKey('tubelength', ['tubeLength', 'headMax'])).toBe('tubeLength');
     expect(closestKey('zzzzzz', ['tubeLength', 'headMax'])).toBeUndefined();
     expect(scanForbiddenKeys({ a: [{ b: 1 }] })).toEqual([]);
+  });
+});
+
+describe('valve.architecture, valve.mount, container.rimHeight and wallThickness (issue 13)', () => {
+  it('take auto, direct, lever / auto, floor, rim in any case; absent: auto; written back', () => {
+    const d = ok(parseDesign({ ...MINIMAL, valve: { architecture: ' Lever ', mount: 'FLOOR' } }));
+    expect(d.inputs.architecture).toBe('lever');
+    expect(d.inputs.mount).toBe('floor');
+    expect(d.document.valve).toEqual({ architecture: 'lever', mount: 'floor' });
+    expect(ok(parseDesign(MINIMAL)).document.valve).toEqual({ architecture: 'auto', mount: 'auto' });
+    const again = ok(parseDesign(d.document));
+    expect(again.inputs).toEqual(d.inputs);
+  });
+  it('refuse a word they do not take, naming the field and listing the words', () => {
+    const a = errorFor({ ...MINIMAL, valve: { architecture: 'siphon' } }, 'valve.architecture');
+    for (const w of ['"siphon"', '"auto"', '"direct"', '"lever"']) expect(a).toContain(w);
+    expect(errorFor({ ...MINIMAL, valve: { mount: 3 } }, 'valve.mount')).toContain('"rim"');
+    expect(errorFor({ ...MINIMAL, valve: { mount: 'rim', kind: 'lever' } }, 'valve.kind')).toContain('architecture, mount');
+  });
+  it('a rim height: in any length unit, written back with the wall (default 3 mm) used with it', () => {
+    // 1 ft = 304.8 mm exactly (NIST SP 811)
+    const d = ok(parseDesign({ ...MINIMAL, container: { rimHeight: '1 ft' } }));
+    expect(d.inputs.rimHeightM).toBeCloseTo(0.3048, 12);
+    expect(d.inputs.containerWallM).toBeCloseTo(0.003, 12);
+    expect(d.document.container).toEqual({ rimHeight: '304.8 mm', wallThickness: '3 mm' });
+    const w = ok(parseDesign({ ...MINIMAL, container: { rimHeight: '300 mm', wallThickness: '0.1 in' } }));
+    expect(w.inputs.containerWallM).toBeCloseTo(0.00254, 12);
+    expect(ok(parseDesign(w.document)).inputs).toEqual(w.inputs);
+  });
+  it('refuses a rim below the target level, naming container.rimHeight, the value and the level', () => {
+    const m = errorFor({ supply: { headMax: '1.5 m' }, level: { target: '250 mm' }, container: { rimHeight: '180 mm' } }, 'container.rimHeight');
+    expect(m).toContain('180 mm');
+    expect(m).toContain('level.target (250 mm)');
+    // at the level itself it is taken (the sizing then says whether a valve fits under it)
+    expect(ok(parseDesign({ supply: { headMax: '1.5 m' }, level: { target: '250 mm' }, container: { rimHeight: '25 cm' } })).inputs.rimHeightM).toBeCloseTo(0.25, 12);
+  });
+  it('a rim mount asked for with no rim height is refused on container.rimHeight', () => {
+    expect(errorFor({ ...MINIMAL, valve: { mount: 'rim' } }, 'container.rimHeight')).toMatch(/^missing; valve.mount "rim"/);
+    expect(ok(parseDesign({ ...MINIMAL, valve: { mount: 'rim' }, container: { rimHeight: '150 mm' } })).inputs.mount).toBe('rim');
+  });
+  it('takes a 300 mm level (deep-water buckets; issue 13)', () => {
+    expect(ok(parseDesign({ supply: { headMax: '1.5 m' }, level: { target: '300 mm' } })).inputs.targetLevelM).toBeCloseTo(0.3, 12);
   });
 });
 

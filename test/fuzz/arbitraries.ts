@@ -324,7 +324,9 @@ const RANGES: readonly { path: string; min: number; max: number; minExclusive?: 
   { path: 'supply.headMax', min: 0, max: 3.05, minExclusive: true, unit: 'm' },
   { path: 'supply.tubeInnerDiameter', min: 1, max: 25, unit: 'mm' },
   { path: 'supply.tubeLength', min: 0, max: 100, unit: 'm' },
-  { path: 'level.target', min: 5, max: 250, unit: 'mm' },
+  { path: 'level.target', min: 5, max: 300, unit: 'mm' },
+  { path: 'container.rimHeight', min: 10, max: 1000, unit: 'mm' },
+  { path: 'container.wallThickness', min: 0.5, max: 25, unit: 'mm' },
   { path: 'liquid.density', min: 900, max: 1300, unit: 'kg/m3' },
   { path: 'liquid.viscosity', min: 0.2, max: 100, unit: 'mPa s' },
   { path: 'nozzle.sealDiameter', min: 1, max: 30, unit: 'mm' },
@@ -336,6 +338,8 @@ const RANGES: readonly { path: string; min: number; max: number; minExclusive?: 
   { path: 'reserve', min: 1, max: 5, unit: '' },
 ];
 export const RANGE_PATHS = RANGES.map((r) => r.path);
+/** Optional fields of the document that take null for "not given". */
+const NULL_MEANS_NOT_GIVEN: readonly string[] = ['container.rimHeight', 'container.wallThickness'];
 
 /** Junk for a quantity field (each must be refused with a message naming the field). */
 export const JUNK_VALUES: readonly unknown[] = [
@@ -368,7 +372,8 @@ export function outsideValue(): fc.Arbitrary<Mutation> {
 export function junkValue(): fc.Arbitrary<Mutation> {
   return fc
     .record({ path: fc.constantFrom(...RANGE_PATHS, 'supply.headMin', 'nozzle.orifice', 'seal.indentation', 'print.wall'), value: fc.constantFrom(...JUNK_VALUES) })
-    .map(({ path, value }) => ({ field: path, value, kind: 'junk' as const }));
+    // in these optional fields an explicit null means "not given" (as for container.overflow): junk there is the text "null"
+    .map(({ path, value }) => ({ field: path, value: value === null && NULL_MEANS_NOT_GIVEN.includes(path) ? 'null' : value, kind: 'junk' as const }));
 }
 
 /** Set a dotted path in a copy of `doc` (sections created as needed). */

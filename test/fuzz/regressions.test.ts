@@ -102,8 +102,8 @@ describe('regressions found by the rejection properties (one field junk or out o
       expect(Object.is(parsed.inputs.tubeLengthM, 0) || parsed.inputs.tubeLengthM === 0).toBe(true);
       expect(() => sizeDesign(parsed.inputs)).not.toThrow();
     }
-    const high = parseDesign({ supply: { headMax: '2 m' }, level: { target: '25.0000000001 cm' } });
-    expect(high.ok && high.inputs.targetLevelM).toBe(0.25);
+    const high = parseDesign({ supply: { headMax: '2 m' }, level: { target: '30.0000000001 cm' } });
+    expect(high.ok && high.inputs.targetLevelM).toBe(0.3); // the bound, 300 mm (issue 13 raised it from 250)
   });
 });
 

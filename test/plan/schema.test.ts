@@ -56,7 +56,7 @@ describe('plan document', () => {
 
   it('maps level.target back to the container', () => {
     const errors = errorsOf({ ...base, containers: [row('a', '0.5 m', { level: '900 mm' })] });
-    expect(errors).toEqual([{ field: 'containers.0.level', message: expect.stringMatching(/^"900 mm" is too high; the target level .* from 5 mm to 250 mm/) }]);
+    expect(errors).toEqual([{ field: 'containers.0.level', message: expect.stringMatching(/^"900 mm" is too high; the target level .* from 5 mm to 300 mm/) }]);
     expect(errorsOf({ ...base, containers: [{ name: 'a', floorElevation: '0.5 m' }] })[0]!.field).toBe('containers.0.level');
   });
 

@@ -28,6 +28,10 @@ export function defaultInputs(over: Partial<DesignInputs> = {}): DesignInputs {
     demandM3s: 3e-3 / 86400,
     bedWidthM: 0.22,
     bedDepthM: 0.22,
+    architecture: 'auto',
+    mount: 'auto',
+    rimHeightM: null,
+    containerWallM: 0.003,
     retiredFields: [],
     ...over,
   };

@@ -21,12 +21,15 @@ const OTHER_LABELS: [RegExp, (m: RegExpExecArray) => string][] = [
   [/^liquid\.density$/, () => 'Liquid density'],
   [/^liquid\.viscosity$/, () => 'Liquid viscosity'],
   [/^container\.demand$/, () => 'Plants\u2019 use per day'],
+  // issue 13's choices, until the form has boxes for them (container.rimHeight reads "Rim height" by its key)
+  [/^valve\.architecture$/, () => 'Valve kind (direct or on an arm)'],
+  [/^valve\.mount$/, () => 'Valve stands on the floor or hangs from the rim'],
   [/^name$/, () => 'Design name'],
   [/^notes$/, () => 'Notes'],
 ];
 
 /** The sections of the design document; a dotted word starting with one of these in a message is a path. */
-const DOCUMENT_PATH = /\b(?:supply|level|limits|reservoir|print|nozzle|seal|liquid|container)\.[A-Za-z]+(?:\.[A-Za-z0-9]+)*\b/g;
+const DOCUMENT_PATH = /\b(?:supply|level|limits|reservoir|print|nozzle|seal|liquid|container|valve)\.[A-Za-z]+(?:\.[A-Za-z0-9]+)*\b/g;
 
 /** "rimHeight" -> "Rim height": a key no box is labelled for yet, still said in words. */
 function keyInWords(path: string): string {
