@@ -12,6 +12,7 @@
 import { join } from 'node:path';
 import type { Locator, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { GLOSSARY, type TermKey } from '../../generator/doc/glossary.ts';
 import { SHOTS, haveChromium, serveWorkbench, visibleTexts, type ServedWorkbench } from './served-workbench.ts';
 
 /** A dotted document path as the CLI and the files write it: "supply.headMax", "seal.calibration.mass". */
@@ -64,10 +65,10 @@ describe.skipIf(!haveChromium)('plain words on the valve page, in Chromium', () 
     expect(await pathsOnScreen('on opening')).toEqual([]);
     // every box there is: two bench points and the grower's own filament bring their boxes on screen
     await page.getByRole('button', { name: 'Add a bench point' }).click();
-    await page.getByLabel('Tank height, point 1').fill('0.8');
+    await page.getByLabel('Head, point 1').fill('0.8');
     await page.getByLabel('Weight, point 1').fill('31');
     await page.getByRole('button', { name: 'Add a bench point' }).click();
-    await page.getByLabel('Tank height, point 2').fill('2.1');
+    await page.getByLabel('Head, point 2').fill('2.1');
     await restore(page.getByLabel('Weight, point 2'), '66');
     await page.getByLabel('Filament', { exact: true }).selectOption({ label: 'other filament…' });
     await expect.poll(() => page.getByLabel('Filament density').count()).toBe(1);
@@ -136,5 +137,79 @@ describe.skipIf(!haveChromium)('plain words on the valve page, in Chromium', () 
     await page.setViewportSize({ width: 1400, height: 900 });
     await head.fill(oldHead);
     await restore(level, oldLevel);
+  });
+
+  /** The element the keyboard focus is on, through shadow roots: its fw-term's key, if it is a glossary word. */
+  const focusedTerm = () =>
+    page.evaluate(() => {
+      let el = document.activeElement;
+      while (el?.shadowRoot?.activeElement) el = el.shadowRoot.activeElement;
+      return el?.getAttribute('data-term') ?? null;
+    });
+  const tooltipOf = (key: TermKey) => page.locator(`fw-term[term="${key}"] [role="tooltip"]`).first();
+
+  it('explains every glossary word the page uses, on keyboard focus and on hover, and Escape hides it', async () => {
+    await page.setViewportSize({ width: 1400, height: 900 });
+    const text = (await visibleTexts(page)).join(' ');
+    const used = (Object.keys(GLOSSARY) as TermKey[]).filter((key) => new RegExp(`\\b${GLOSSARY[key].name}\\b`, 'i').test(text));
+    // the trade words of issue 12 are on the page, and many more
+    for (const key of ['head', 'nozzle-hole', 'throttle-band', 'spare-lift', 'pad-squeeze'] as TermKey[]) expect(used).toContain(key);
+    for (const key of used) {
+      const terms = page.locator(`fw-term[term="${key}"]`);
+      expect(await terms.count(), `"${GLOSSARY[key].name}" is explained somewhere on the page`).toBeGreaterThan(0);
+      // the explanation is tied to the word: aria-describedby names the tooltip beside it
+      const word = terms.first().locator('[data-term]');
+      const tip = tooltipOf(key);
+      expect(await word.getAttribute('aria-describedby')).toBe(await tip.getAttribute('id'));
+      expect((await tip.textContent())!.length).toBeGreaterThan(40);
+    }
+    // keyboard: from the name box, Tab reaches "head" in the tank group's intro, and its explanation shows
+    await page.getByLabel('Name (used for the file names)').focus();
+    await page.keyboard.press('Tab');
+    expect(await focusedTerm()).toBe('head');
+    await expect.poll(() => tooltipOf('head').isVisible()).toBe(true);
+    expect(await tooltipOf('head').textContent()).toContain(GLOSSARY.head.explain);
+    await page.screenshot({ path: join(SHOTS, 'words-04-term-focus-1400.png') });
+    await page.keyboard.press('Escape');
+    await expect.poll(() => tooltipOf('head').isVisible()).toBe(false);
+    await page.keyboard.press('Tab');
+    expect(await focusedTerm()).toBe('tank-full');
+    await expect.poll(() => tooltipOf('tank-full').isVisible()).toBe(true);
+    expect(await tooltipOf('head').isVisible()).toBe(false);
+    // hover alone shows it too
+    await page.getByLabel('Name (used for the file names)').focus();
+    await page.locator('fw-term[term="nozzle-hole"] [data-term]').first().hover();
+    await expect.poll(() => tooltipOf('nozzle-hole').isVisible()).toBe(true);
+    expect(await tooltipOf('nozzle-hole').textContent()).toContain('orifice');
+    await page.mouse.move(0, 0);
+    await expect.poll(() => tooltipOf('nozzle-hole').isVisible()).toBe(false);
+  });
+
+  it('keeps an explanation on screen at 1024 and 390 px, and writes powers of units raised (m², not m2)', async () => {
+    for (const [width, height] of [[1024, 768], [390, 844]]) {
+      await page.setViewportSize({ width, height });
+      const marker = page.locator('fw-term[term="spare-lift"] [data-term]').first();
+      await page.getByLabel('Name (used for the file names)').focus(); // a fresh focus: placed for this width
+      await marker.scrollIntoViewIfNeeded();
+      await marker.focus();
+      const tip = tooltipOf('spare-lift');
+      await expect.poll(() => tip.isVisible()).toBe(true);
+      const box = (await tip.boundingBox())!;
+      expect(box.x, `left edge at ${width} px`).toBeGreaterThanOrEqual(0);
+      expect(box.x + box.width, `right edge at ${width} px`).toBeLessThanOrEqual(width);
+      expect(box.y + box.height, `bottom edge at ${width} px`).toBeLessThanOrEqual(height);
+      await page.screenshot({ path: join(SHOTS, `words-05-term-${width}.png`) });
+      expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(width);
+    }
+    await page.setViewportSize({ width: 1400, height: 900 });
+    const area = page.getByLabel('Water surface area');
+    const old = await area.inputValue();
+    await enter(area, '99999');
+    const texts = await visibleTexts(page);
+    // the box's unit and its message: square metres written m² (ISO 80000-1 writes powers of units as superscripts)
+    expect(texts).toContain('m²');
+    expect(texts.join(' ')).toMatch(/m² is too high|too high.*m²/);
+    expect(texts.filter((t) => /\b(mm|cm|m|in|ft)[23]\b/.test(t))).toEqual([]);
+    await restore(area, old);
   });
 });

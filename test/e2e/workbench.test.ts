@@ -188,10 +188,10 @@ describe.skipIf(!haveChromium)('workbench in Chromium', () => {
     // DESIGN's example bench points: 31 g stops the flow at 0.8 m, 66 g at 2.1 m (our own scenario)
     const add = page.getByRole('button', { name: 'Add a bench point' });
     await add.click();
-    await page.getByLabel('Tank height, point 1').fill('0.8');
+    await page.getByLabel('Head, point 1').fill('0.8');
     await page.getByLabel('Weight, point 1').fill('31');
     await add.click();
-    await page.getByLabel('Tank height, point 2').fill('2.1');
+    await page.getByLabel('Head, point 2').fill('2.1');
     await page.getByLabel('Weight, point 2').fill('66');
     // Two points fit F = F_pre + A_eff rho g H exactly (DESIGN "Sizing model"): by hand,
     // slope = (0.066 - 0.031) kg x 9.80665 / 1.3 m = 0.26402 N/m, A_eff = slope / (998.2 x 9.80665) = 26.97 mm2,

@@ -18,7 +18,7 @@ describe('field labels in messages', () => {
   it('gives every box its on-screen label, bench rows their row, and a setting with no box its name in words', () => {
     for (const f of ALL_FIELDS) expect(labelFor(f.path)).toBe(f.label);
     expect(labelFor('seal.calibration.1.mass')).toBe('Weight, point 2');
-    expect(labelFor('seal.calibration.0.head')).toBe('Tank height, point 1');
+    expect(labelFor('seal.calibration.0.head')).toBe('Head, point 1');
     expect(labelFor('print.bed')).toBe('Printer bed size');
     expect(labelFor('container.rimHeight')).toBe('Rim height');
     expect(labelFor('design')).toBe('The design');

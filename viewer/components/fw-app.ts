@@ -11,7 +11,7 @@ import { ALL_FIELDS } from '../lib/form-fields.ts';
 import { presets, type Preset } from '../lib/presets.ts';
 import { decodeDesign, designFromHash, shareUrl } from '../lib/share-link.ts';
 import { loadSaved, save } from '../lib/storage.ts';
-import { inLabels, labelFor, problemsInLabels } from '../lib/field-label.ts';
+import { labelFor, problemsInLabels, shownMessage } from '../lib/field-label.ts';
 import { keepRecent, loadRecent, recentTitle, type RecentDesign } from '../lib/recent-designs.ts';
 import { convertDocument, type UnitSystem } from '../lib/units-system.ts';
 import { isPlanDocument, loadPage, savePage, type Page } from '../lib/bench-storage.ts';
@@ -254,7 +254,7 @@ export class FwApp extends LitElement {
     const parsed = parseDesign(docToSize(this.doc));
     if (!parsed.ok) {
       // each box shows its own problem; other boxes it mentions are named by their labels
-      this.errors = placeErrors(Object.fromEntries(parsed.errors.map((e) => [e.field, inLabels(e.message)])), this.editedAt);
+      this.errors = placeErrors(Object.fromEntries(parsed.errors.map((e) => [e.field, shownMessage(e.message)])), this.editedAt);
       return;
     }
     this.errors = {};

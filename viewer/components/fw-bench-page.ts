@@ -1,3 +1,4 @@
+import { superscriptUnits } from '../../generator/doc/superscript-units.ts';
 import { LitElement, css, html, nothing } from 'lit';
 import { customElement, property, state } from 'lit/decorators.js';
 import { BenchClient, type BenchWorkerFactory } from '../lib/bench-client.ts';
@@ -344,7 +345,7 @@ export class FwBenchPage extends LitElement {
   private renderBox(path: string, f: BenchField, id: string) {
     const err = this.errorFor(path);
     const unit = unitOf(f, this.units);
-    const shownUnit = unit.replace(/2$/, '²');
+    const shownUnit = superscriptUnits(unit);
     return html`<label class="box">
       <span>${f.label}${f.optional ? html` <small>(optional)</small>` : nothing}</span>
       <span class="entry">

@@ -3,12 +3,13 @@ import { customElement, property } from 'lit/decorators.js';
 import { CALIBRATION_HEAD, CALIBRATION_MASS, displayText, documentValue, unitFor, type UnitSystem } from '../lib/units-system.ts';
 import { labelFor } from '../lib/field-label.ts';
 import { shared } from './shared-styles.ts';
+import './fw-term.ts';
 
 type Point = { head?: unknown; mass?: unknown };
 
 /**
  * Bench calibration: the grower hangs weights on a pad under the nozzle and
- * notes, for a few tank heights, the smallest weight that stopped the flow.
+ * notes, for a few heads, the smallest weight that stopped the flow.
  * Emits `points-change` with the whole new list.
  */
 @customElement('fw-bench-points')
@@ -47,15 +48,15 @@ export class FwBenchPoints extends LitElement {
     const mu = unitFor(CALIBRATION_MASS, this.units);
     const messages = Object.entries(this.errors).filter(([k]) => k.startsWith('seal.calibration'));
     return html`<fieldset>
-      <legend>Bench test of your pad (optional)</legend>
-      <p>Hold the pad under the nozzle, hang weights on it, and note the smallest weight that stops the flow at two or more tank heights. The sizing then uses your pad instead of the book values.</p>
+      <legend>Bench test of your pad (optional)<fw-term marker term="bench-points"></fw-term></legend>
+      <p>Hold the pad under the nozzle, hang weights on it, and note the smallest weight that stops the flow at two or more heads. The sizing then uses your pad instead of the book values.</p>
       ${this.points.length
         ? html`<table>
-            <thead><tr><th id="bp-h">Tank height (${hu})</th><th id="bp-m">Weight (${mu})</th><th></th></tr></thead>
+            <thead><tr><th id="bp-h"><fw-term term="head">Head</fw-term> (${hu})</th><th id="bp-m">Weight (${mu})</th><th></th></tr></thead>
             <tbody>
               ${this.points.map(
                 (p, i) => html`<tr>
-                  <td><input aria-label="Tank height, point ${i + 1}" name="cal-head-${i}" .value=${displayText(p.head, { ...CALIBRATION_HEAD, path: `seal.calibration.${i}.head` }, this.units)}
+                  <td><input aria-label="Head, point ${i + 1}" name="cal-head-${i}" .value=${displayText(p.head, { ...CALIBRATION_HEAD, path: `seal.calibration.${i}.head` }, this.units)}
                     aria-invalid=${this.errors[`seal.calibration.${i}.head`] ? 'true' : 'false'}
                     @input=${(e: InputEvent) => this.edit(i, 'head', (e.target as HTMLInputElement).value)} /></td>
                   <td><input aria-label="Weight, point ${i + 1}" name="cal-mass-${i}" .value=${displayText(p.mass, { ...CALIBRATION_MASS, path: `seal.calibration.${i}.mass` }, this.units)}

@@ -7,7 +7,9 @@ import { FIELD_GROUPS } from '../lib/form-fields.ts';
 import { MATERIAL_DENSITY_FIELD, OTHER_FILAMENT, materialChoice, otherFilamentValue } from '../lib/material-choice.ts';
 import { fileStem } from '../../generator/doc/file-stem.ts';
 import { fieldDefault } from '../lib/field-default.ts';
+import { superscriptUnits } from '../../generator/doc/superscript-units.ts';
 import { labelFor } from '../lib/field-label.ts';
+import { markTerms } from '../lib/mark-terms.ts';
 import { REFILL_BOXES, loneRefillBox } from '../lib/lone-refill-box.ts';
 import { displayText, documentValue, unitFor, type FieldDef, type UnitSystem } from '../lib/units-system.ts';
 import { shared } from './shared-styles.ts';
@@ -31,6 +33,8 @@ export class FwDesignForm extends LitElement {
       .intro { color: var(--muted); font-size: 0.85rem; margin: 0 0 0.4rem; }
       .field { margin: 0.45rem 0; }
       label { display: block; font-size: 0.9rem; }
+      .label-row { display: flex; align-items: baseline; }
+      .label-row label { display: inline; }
       .box { display: flex; align-items: center; gap: 0.35rem; }
       input, select { font: inherit; padding: 0.25rem 0.4rem; border: 1px solid #b9b3a0; border-radius: 5px; width: 8.5rem; background: #fff; }
       .unit { color: var(--muted); min-width: 2.2rem; flex: none; white-space: nowrap; }
@@ -65,7 +69,7 @@ export class FwDesignForm extends LitElement {
     const typed = raw !== undefined && raw !== '';
     const waiting = loneRefillBox(this.doc) === def.path;
     return html`<div class="field ${error ? 'bad' : ''}">
-      <label for=${id} id="${id}-label">${def.label}</label>
+      <div class="label-row"><label for=${id} id="${id}-label">${def.label}</label>${def.term ? html`<fw-term marker term=${def.term}></fw-term>` : nothing}</div>
       <div class="box">
         <input
           id=${id}
@@ -78,13 +82,13 @@ export class FwDesignForm extends LitElement {
           aria-describedby="${id}-unit ${id}-note ${id}-msg"
           @input=${(e: InputEvent) => this.emit(def.path, documentValue((e.target as HTMLInputElement).value, def, this.units) ?? emptyValue)}
         />
-        <span class="unit" id="${id}-unit">${unit}</span>
+        <span class="unit" id="${id}-unit">${superscriptUnits(unit)}</span>
         ${fallback && typed
-          ? html`<button class="reset" data-reset=${def.path} aria-label="Back to the default" aria-describedby="${id}-label ${id}-note" title=${fallback.note}
+          ? html`<button class="reset" data-reset=${def.path} aria-label="Back to the default" aria-describedby="${id}-label ${id}-note" title=${superscriptUnits(fallback.note)}
               @click=${() => this.resetField(def, id)}>↺ default</button>`
           : nothing}
       </div>
-      <div class="note" id="${id}-note">${[def.hint && def.hint[0].toUpperCase() + def.hint.slice(1), waiting ? `Not used until "${labelFor(otherRefillBox(def.path))}" is given too.` : fallback?.note].filter(Boolean).join('. ')}</div>
+      <div class="note" id="${id}-note">${superscriptUnits([def.hint && def.hint[0].toUpperCase() + def.hint.slice(1), waiting ? `Not used until "${labelFor(otherRefillBox(def.path))}" is given too.` : fallback?.note].filter(Boolean).join('. '))}</div>
       <div class="msg" id="${id}-msg" role=${error ? 'alert' : nothing}>${error ?? ''}</div>
     </div>`;
   }
@@ -125,7 +129,7 @@ export class FwDesignForm extends LitElement {
     const error = this.errors['seal.pad'];
     const raw = getAt(this.doc, 'seal.pad');
     return html`<div class="field ${error ? 'bad' : ''}">
-      <label for="f-seal-pad">Seal pad</label>
+      <div class="label-row"><label for="f-seal-pad">Seal pad</label><fw-term marker term="seal-pad"></fw-term></div>
       <div class="box">
         <select id="f-seal-pad" name="seal.pad" aria-invalid=${error ? 'true' : 'false'} aria-describedby="f-seal-pad-msg"
           @change=${(e: Event) => {
@@ -194,7 +198,7 @@ export class FwDesignForm extends LitElement {
       ${FIELD_GROUPS.map(
       (g) => html`<fieldset>
         <legend>${g.title}</legend>
-        ${g.intro ? html`<p class="intro">${g.intro}</p>` : nothing}
+        ${g.intro ? html`<p class="intro">${markTerms(g.intro, g.introTerms ?? [])}</p>` : nothing}
         ${g.id === 'print' ? this.renderMaterial() : nothing}
         ${g.id === 'nozzle' ? this.renderPad() : nothing}
         ${g.fields.map((f) => this.renderField(f))}

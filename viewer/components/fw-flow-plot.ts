@@ -32,9 +32,9 @@ export function flowBandWords(b: FlowBand, units: UnitSystem): string[] {
   const at = (mm: number) => `${levelAxis(mm, units).toFixed(d)} ${unit}`;
   const held = b.inputs.demandLpd > 0
     ? `While the plants drink ${demandPerDay(b.inputs.demandLpd, units)}, the water stays at about ${at(b.levels.heldAtDemandMm)} with the tank full and ${at(b.levels.heldAtDemandLowTankMm)} with it low.`
-    : `With no water drawn, the water rises to the tight shut-off.`;
+    : `With no water drawn, the water rises until the valve shuts tight.`;
   return [
-    `The flow starts to ease off when the water reaches ${at(b.levels.throttleStartMm)}.`,
+    `The flow starts to ease off (the throttle band begins) when the water reaches ${at(b.levels.throttleStartMm)}.`,
     held,
     `It shuts tight at ${at(b.levels.shutOffAtHeadMaxMm)} with the tank full (${at(b.levels.shutOffAtHeadMinMm)} with it low), the highest the water can rise.`,
   ];

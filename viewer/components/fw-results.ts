@@ -2,8 +2,9 @@ import { LitElement, css, html, nothing } from 'lit';
 import { customElement, property } from 'lit/decorators.js';
 import { CONSTRAINT_TEXT } from '../../generator/sizing/layout/constraint-text.ts';
 import type { SizingResult, SizingSuccess, WayOut } from '../../generator/sizing/result.ts';
-import { inLabels, labelFor } from '../lib/field-label.ts';
+import { labelFor, shownMessage } from '../lib/field-label.ts';
 import * as f from '../lib/format.ts';
+import { markTerms } from '../lib/mark-terms.ts';
 import type { UnitSystem } from '../lib/units-system.ts';
 import { flowBandWords } from './fw-flow-plot.ts';
 import { shared } from './shared-styles.ts';
@@ -73,13 +74,13 @@ export class FwResults extends LitElement {
         <h2>Water levels</h2>
         <p class="band" data-result="band-words">${flowBandWords(s, u).join(' ')}</p>
         <dl>
-          <dt>Held while the plants drink ${f.demandPerDay(s.inputs.demandLpd, u)}, tank full (${f.headM(s.inputs.headMaxM, u)})</dt><dd data-result="held-demand-full">${f.lengthMm(s.levels.heldAtDemandMm, u)}</dd>
-          ${same ? nothing : html`<dt>The same, tank low (${f.headM(s.inputs.headMinM, u)})</dt><dd data-result="held-demand-low">${f.lengthMm(s.levels.heldAtDemandLowTankMm, u)}</dd>`}
-          <dt>Flow starts to ease off at</dt><dd data-result="throttle-start">${f.lengthMm(s.levels.throttleStartMm, u)}</dd>
+          <dt>${markTerms(`Held while the plants drink ${f.demandPerDay(s.inputs.demandLpd, u)}, tank full (${f.headM(s.inputs.headMaxM, u)})`, ['tank-full'])}</dt><dd data-result="held-demand-full">${f.lengthMm(s.levels.heldAtDemandMm, u)}</dd>
+          ${same ? nothing : html`<dt>${markTerms(`The same, tank low (${f.headM(s.inputs.headMinM, u)})`, ['tank-low'])}</dt><dd data-result="held-demand-low">${f.lengthMm(s.levels.heldAtDemandLowTankMm, u)}</dd>`}
+          <dt>${markTerms('Throttle band starts (the flow begins to ease off) at', ['throttle-band'])}</dt><dd data-result="throttle-start">${f.lengthMm(s.levels.throttleStartMm, u)}</dd>
           <dt>Half flow / a tenth / a hundredth, tank full</dt><dd>${f.lengthMm(s.levels.flow50Mm, u)} / ${f.lengthMm(s.levels.flow10Mm, u)} / ${f.lengthMm(s.levels.flow1Mm, u)}</dd>
-          <dt>Shut tight (the highest it can rise), tank full</dt><dd data-result="level-full">${f.lengthMm(s.levels.shutOffAtHeadMaxMm, u)}</dd>
+          <dt>${markTerms('Shut tight (the highest it can rise), tank full', ['shut-tight'])}</dt><dd data-result="level-full">${f.lengthMm(s.levels.shutOffAtHeadMaxMm, u)}</dd>
           ${same ? nothing : html`<dt>Shut tight, tank low</dt><dd data-result="level-low">${f.lengthMm(s.levels.shutOffAtHeadMinMm, u)}</dd>`}
-          <dt>Float lifts off its pin at</dt><dd>${f.lengthMm(s.levels.liftOffMm, u)}</dd>
+          <dt>${markTerms('Float lifts off its retainer pin at', ['retainer-pin'])}</dt><dd>${f.lengthMm(s.levels.liftOffMm, u)}</dd>
           <dt>Shallowest depth this float can hold</dt><dd>${f.lengthMm(s.levels.minimumReachableMm, u)}</dd>
         </dl>
       </section>
@@ -91,25 +92,25 @@ export class FwResults extends LitElement {
           ${same ? nothing : html`<dt>Flow, tank low</dt><dd>${f.flowLph(s.flow.atHeadMinLph, u)}</dd>`}
           ${s.fill.timeToHeldMin !== null ? html`<dt>Refill time while the plants drink</dt><dd data-result="fill-time">${f.minutes(s.fill.timeToHeldMin)}</dd>` : nothing}
           <dt>Push needed to shut, tank full</dt><dd>${f.forceN(s.closingForce.atHeadMaxN, u)}</dd>
-          <dt>Float's lift when under water</dt><dd>${f.forceN(s.float.availableForceN, u)} (${s.float.reserve.toFixed(2)}×)</dd>
-          <dt>Drain slots at the bottom</dt><dd>${s.drain.notchCount}, ${f.areaMm2(s.drain.providedAreaMm2, u)} (needs ${f.areaMm2(s.drain.requiredAreaMm2, u)})</dd>
-          <dt>Air vents on top</dt><dd>${s.vents.count} × ${f.printMm(s.vents.diameterMm)}</dd>
-          ${s.closingForce.fromCalibration ? html`<dt>Lip width from your bench test</dt><dd data-result="calibrated-lip">${f.printMm(s.closingForce.equivalentSealDiameterMm, 2)}</dd>` : nothing}
+          <dt>${markTerms("Float's lift under water, and its spare lift", ['spare-lift'])}</dt><dd data-result="spare-lift">${f.forceN(s.float.availableForceN, u)}, ${s.float.reserve.toFixed(2)}×</dd>
+          <dt>${markTerms('Drain slots at the bottom', ['drain-slots'])}</dt><dd>${s.drain.notchCount}, ${f.areaMm2(s.drain.providedAreaMm2, u)} (needs ${f.areaMm2(s.drain.requiredAreaMm2, u)})</dd>
+          <dt>${markTerms('Air vents on top', ['air-vents'])}</dt><dd>${s.vents.count} × ${f.printMm(s.vents.diameterMm)}</dd>
+          ${s.closingForce.fromCalibration ? html`<dt>${markTerms('Nozzle lip width your bench points act like', ['nozzle-lip', 'bench-points'])}</dt><dd data-result="calibrated-lip">${f.printMm(s.closingForce.equivalentSealDiameterMm, 2)}</dd>` : nothing}
         </dl>
       </section>
       <section aria-label="Seal pad and float">
         <h2>Seal pad and float</h2>
         <dl>
-          <dt>Pad${s.seal.padChosen ? ' (chosen for this valve)' : ''}</dt><dd data-result="pad">${s.seal.padMaterial}, ${f.printMm(s.seal.padThicknessMm)} thick</dd>
-          <dt>Pad squeeze when shut, tank full</dt><dd>${f.printMm(s.seal.indentationMm, 2)} (${(s.seal.strainAtSeal * 100).toFixed(0)} %)</dd>
-          <dt>Most squeeze in use (a stop holds it)</dt><dd>${(s.seal.worstStrain * 100).toFixed(0)} %</dd>
+          <dt>${markTerms(`Seal pad${s.seal.padChosen ? ' (chosen for this valve)' : ''}`, ['seal-pad'])}</dt><dd data-result="pad">${s.seal.padMaterial}, ${f.printMm(s.seal.padThicknessMm)} thick</dd>
+          <dt>${markTerms('Pad squeeze when shut, tank full', ['pad-squeeze'])}</dt><dd>${f.printMm(s.seal.indentationMm, 2)} (${(s.seal.strainAtSeal * 100).toFixed(0)} %)</dd>
+          <dt>Most pad squeeze in use (a stop holds it)</dt><dd>${(s.seal.worstStrain * 100).toFixed(0)} %</dd>
           <dt>Float shell</dt><dd>${f.printMm(s.float.shellMm, 2)}</dd>
           <dt>Float weighs dry, before the pad</dt><dd data-result="float-dry">${f.massG(s.float.dryMassG, u, 1)}</dd>
           <dt>Water the float can take in and still shut</dt><dd data-result="leak-tolerance">${s.float.leakToleranceMl.toFixed(1)} mL (each mL raises the level ${f.printMm(s.float.levelRisePerMlMm, 2)})</dd>
         </dl>
       </section>
       <section aria-label="Holding down">
-        <h2>Holding it down</h2>
+        <h2>${markTerms('Hold-down', ['hold-down'])}</h2>
         <p data-result="ballast">${s.holdDown.ballastSteelG > 0
           ? html`If the container floods the float lifts ${f.forceN(s.holdDown.upliftN, u)}: pin the foot down or add <b>${f.massG(s.holdDown.ballastSteelG, u)}</b> of steel.`
           : 'The valve is heavy enough to stay put if the container floods.'}</p>
@@ -126,8 +127,8 @@ export class FwResults extends LitElement {
       </section>
       <section aria-label="What set the size">
         <h2>What set the size</h2>
-        <ul>${s.boundBy.map((b) => html`<li>${inLabels((CONSTRAINT_TEXT as Record<string, string>)[b] ?? b)}</li>`)}</ul>
-        ${s.warnings.map((w) => html`<div class="warn" data-warning=${w.code}>${inLabels(w.message)}</div>`)}
+        <ul>${s.boundBy.map((b) => html`<li>${shownMessage((CONSTRAINT_TEXT as Record<string, string>)[b] ?? b)}</li>`)}</ul>
+        ${s.warnings.map((w) => html`<div class="warn" data-warning=${w.code}>${shownMessage(w.message)}</div>`)}
       </section>
       ${this.timing ? html`<p class="timing" data-timing>${this.timing}</p>` : nothing}`;
   }
@@ -149,7 +150,7 @@ export class FwResults extends LitElement {
       ${failure
         ? html`<section class="fail" role="alert" aria-label="Cannot size">
             <h2>No valve fits these numbers</h2>
-            <ul>${failure.reasons.map((x) => html`<li>${inLabels(x.message)}</li>`)}</ul>
+            <ul>${failure.reasons.map((x) => html`<li>${shownMessage(x.message)}</li>`)}</ul>
             ${failure.waysOut.length
               ? html`<div class="ways"><p>Any one of these would work:</p>
                   ${failure.waysOut.map(

@@ -3,11 +3,12 @@
  * "Tank full: water height above the valve"), for messages: the grower sees
  * labels, never document paths.
  */
+import { superscriptUnits } from '../../generator/doc/superscript-units.ts';
 import { ALL_FIELDS } from './form-fields.ts';
 
 /** Paths that are not plain boxes of the form (bench rows, menus), or not on the valve page at all. */
 const OTHER_LABELS: [RegExp, (m: RegExpExecArray) => string][] = [
-  [/^seal\.calibration\.(\d+)\.head$/, (m) => `Tank height, point ${Number(m[1]) + 1}`],
+  [/^seal\.calibration\.(\d+)\.head$/, (m) => `Head, point ${Number(m[1]) + 1}`],
   [/^seal\.calibration\.(\d+)\.mass$/, (m) => `Weight, point ${Number(m[1]) + 1}`],
   [/^seal\.calibration(\.\d+)?$/, () => 'Bench points'],
   [/^seal\.pad$/, () => 'Seal pad'],
@@ -53,7 +54,12 @@ export function inLabels(message: string): string {
   return message.replace(DOCUMENT_PATH, (path) => `"${labelFor(path)}"`);
 }
 
-/** Problems of a document as "Label: message" sentences. */
+/** A message as the screen shows it: boxes by their labels, units with their powers raised (m², kg/m³). */
+export function shownMessage(message: string): string {
+  return superscriptUnits(inLabels(message));
+}
+
+/** Problems of a document as "Label: message" sentences, as the screen shows them. */
 export function problemsInLabels(errors: readonly { field: string; message: string }[]): string {
-  return errors.map((e) => `${labelFor(e.field)}: ${inLabels(e.message)}`).join(' ');
+  return errors.map((e) => `${labelFor(e.field)}: ${shownMessage(e.message)}`).join(' ');
 }

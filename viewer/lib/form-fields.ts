@@ -1,10 +1,13 @@
 /** The workbench's input fields, grouped the way a grower thinks about the job. */
+import type { TermKey } from '../../generator/doc/glossary.ts';
 import type { FieldDef } from './units-system.ts';
 
 export interface FieldGroup {
   id: string;
   title: string;
   intro?: string;
+  /** glossary words explained where the intro says them (default none) */
+  introTerms?: TermKey[];
   fields: FieldDef[];
 }
 
@@ -12,11 +15,12 @@ export const FIELD_GROUPS: readonly FieldGroup[] = [
   {
     id: 'tank',
     title: 'Tank and feed line',
-    intro: 'Heights of the tank water surface above the valve nozzle.',
+    intro: "Each height is a head: how high the tank's water surface stands above the valve's nozzle.",
+    introTerms: ['head'],
     fields: [
-      { path: 'supply.headMax', label: 'Tank full: water height above the valve', kind: 'head', metric: 'm', imperial: 'ft', hint: 'also takes kPa or psi' },
-      { path: 'supply.headMin', label: 'Tank low: water height above the valve', kind: 'head', metric: 'm', imperial: 'ft', optional: true, blankFrom: 'supply.headMax' },
-      { path: 'supply.tubeInnerDiameter', label: 'Feed tube, inside width', kind: 'length', metric: 'mm', imperial: 'in', optional: true },
+      { path: 'supply.headMax', label: 'Tank full: water height above the valve', term: 'tank-full', kind: 'head', metric: 'm', imperial: 'ft', hint: 'also takes kPa or psi' },
+      { path: 'supply.headMin', label: 'Tank low: water height above the valve', term: 'tank-low', kind: 'head', metric: 'm', imperial: 'ft', optional: true, blankFrom: 'supply.headMax' },
+      { path: 'supply.tubeInnerDiameter', label: 'Feed tube, inside width', term: 'feed-tube', kind: 'length', metric: 'mm', imperial: 'in', optional: true },
       { path: 'supply.tubeLength', label: 'Feed tube, length', kind: 'length', metric: 'm', imperial: 'ft', optional: true },
     ],
   },
@@ -24,7 +28,7 @@ export const FIELD_GROUPS: readonly FieldGroup[] = [
     id: 'container',
     title: 'Container',
     fields: [
-      { path: 'level.target', label: 'Water depth to hold', kind: 'length', metric: 'mm', imperial: 'in', hint: 'above the container floor' },
+      { path: 'level.target', label: 'Water depth to hold', term: 'water-depth', kind: 'length', metric: 'mm', imperial: 'in', hint: 'above the container floor' },
       { path: 'limits.maxOuterDiameter', label: 'Widest valve that fits', kind: 'length', metric: 'mm', imperial: 'in', optional: true },
       { path: 'reservoir.area', label: 'Water surface area', kind: 'area', metric: 'm2', imperial: 'ft2', optional: true, hint: 'for the refill time', blankMeans: 'no refill time' },
       { path: 'reservoir.rise', label: 'Refill depth', kind: 'length', metric: 'mm', imperial: 'in', optional: true, hint: 'for the refill time', blankMeans: 'no refill time' },
@@ -37,17 +41,17 @@ export const FIELD_GROUPS: readonly FieldGroup[] = [
     intro: 'Print settings stay in millimetres, as your slicer uses them.',
     fields: [
       { path: 'print.wall', label: 'Housing wall', kind: 'length', metric: 'mm', imperial: 'mm', optional: true },
-      { path: 'print.lineWidth', label: 'Line width', kind: 'length', metric: 'mm', imperial: 'mm', optional: true },
+      { path: 'print.lineWidth', label: 'Line width', term: 'line-width', kind: 'length', metric: 'mm', imperial: 'mm', optional: true },
     ],
   },
   {
     id: 'nozzle',
     title: 'Nozzle and seal pad',
     fields: [
-      { path: 'nozzle.orifice', label: 'Nozzle hole', kind: 'length', metric: 'mm', imperial: 'mm', optional: true },
-      { path: 'nozzle.sealDiameter', label: 'Nozzle lip, outside width', kind: 'length', metric: 'mm', imperial: 'mm', optional: true },
+      { path: 'nozzle.orifice', label: 'Nozzle hole', term: 'nozzle-hole', kind: 'length', metric: 'mm', imperial: 'mm', optional: true },
+      { path: 'nozzle.sealDiameter', label: 'Nozzle lip, outside width', term: 'nozzle-lip', kind: 'length', metric: 'mm', imperial: 'mm', optional: true },
       { path: 'seal.padThickness', label: 'Pad thickness', kind: 'length', metric: 'mm', imperial: 'mm', optional: true },
-      { path: 'reserve', label: 'Spare lift (times the push needed)', kind: 'number', metric: '', imperial: '', optional: true },
+      { path: 'reserve', label: 'Spare lift (times the push needed)', term: 'spare-lift', kind: 'number', metric: '', imperial: '', optional: true },
     ],
   },
 ];

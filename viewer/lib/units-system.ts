@@ -8,6 +8,7 @@
 import { fractionValue, fromSi, parseQuantity, type QuantityKind } from '../../generator/doc/units.ts';
 import { shownNumber } from '../../generator/doc/shown-number.ts';
 import { FIELD_UNITS } from '../../generator/doc/schema.ts';
+import type { TermKey } from '../../generator/doc/glossary.ts';
 import { getAt, setAt, type Doc } from './doc-path.ts';
 
 export type UnitSystem = 'metric' | 'imperial';
@@ -25,6 +26,8 @@ export interface FieldDef {
   blankFrom?: string;
   /** an optional box without a default value: what a blank one means, in a few words (default none) */
   blankMeans?: string;
+  /** the glossary word the box is about, explained beside its label (default none) */
+  term?: TermKey;
 }
 
 /** Unit a bare number means in the document, per field (the schema's FIELD_UNITS). */
@@ -117,5 +120,5 @@ export function convertDocument(doc: Doc, defs: readonly FieldDef[], system: Uni
   return out;
 }
 
-export const CALIBRATION_HEAD: FieldDef = { path: 'seal.calibration.head', label: 'Tank height', kind: 'head', metric: 'm', imperial: 'ft' };
+export const CALIBRATION_HEAD: FieldDef = { path: 'seal.calibration.head', label: 'Head', kind: 'head', metric: 'm', imperial: 'ft' };
 export const CALIBRATION_MASS: FieldDef = { path: 'seal.calibration.mass', label: 'Weight that stopped the flow', kind: 'mass', metric: 'g', imperial: 'oz' };
