@@ -260,7 +260,7 @@ describe.skipIf(!haveChromium)('workbench in Chromium', () => {
     // out of range: the message on the field (range from the schema), the last good design stays
     await density.fill('9');
     await expect.poll(() => density.getAttribute('aria-invalid')).toBe('true');
-    expect(await page.locator('#f-print-material-density-msg').textContent()).toMatch(/0\.5 g\/cm3 to 3 g\/cm3/);
+    expect(await page.locator('#f-print-material-density-msg').textContent()).toMatch(/0\.5 g\/cm³ to 3 g\/cm³/); // powers raised on screen (SI Brochure 5.4.2)
     expect(await page.locator('[data-result="mass-total"]').textContent()).toBe(massGood);
     before = await buildId();
     await density.fill('1.15');
