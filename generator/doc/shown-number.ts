@@ -42,12 +42,17 @@ const DECIMALS: Record<string, number> = {
 /** At least this many significant digits, whatever the unit (0.0045 m2 stays 0.0045, not 0.005). */
 const MIN_SIGNIFICANT = 3;
 
+/** How many decimals `value` is shown with in `unit` (the unit's step, or more for three significant digits). */
+export function shownDecimals(value: number, unit: string): number {
+  if (!Number.isFinite(value) || value === 0) return DECIMALS[unit] ?? 0;
+  const forSignificant = MIN_SIGNIFICANT - 1 - Math.floor(Math.log10(Math.abs(value)));
+  return Math.max(0, Math.min(8, Math.max(DECIMALS[unit] ?? 0, forSignificant)));
+}
+
 /** `value` rounded for showing in `unit`, as a number. */
 export function roundShown(value: number, unit: string): number {
   if (!Number.isFinite(value) || value === 0) return value;
-  const forSignificant = MIN_SIGNIFICANT - 1 - Math.floor(Math.log10(Math.abs(value)));
-  const decimals = Math.min(8, Math.max(DECIMALS[unit] ?? 0, forSignificant));
-  return Number(value.toFixed(Math.max(0, decimals)));
+  return Number(value.toFixed(shownDecimals(value, unit)));
 }
 
 /** `value` rounded for showing in `unit`, as text without the unit: shownNumber(7.2178, 'ft') = "7.22". */

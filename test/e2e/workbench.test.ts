@@ -311,6 +311,59 @@ describe.skipIf(!haveChromium)('workbench in Chromium', () => {
     expect(await page.evaluate(() => new DOMParser().parseFromString('<a>\u0001</a>', 'application/xml').getElementsByTagName('parsererror').length)).toBeGreaterThan(0);
   });
 
+  it('imperial throughout, and a round trip through a share link: it opens in imperial, ways out go in inches, the build sheet is in inches and feet', async () => {
+    // our own demo design; 45 mm = 1.77 in and 2.2 m = 7.22 ft (NIST SP 811: 1 in = 25.4 mm, 1 ft = 0.3048 m)
+    const doc = { name: 'Imperial trip', supply: { headMax: '2.2 m' }, level: { target: '45 mm' } };
+    await page.goto(`${url}#design=${Buffer.from(JSON.stringify(doc)).toString('base64url')}`);
+    await waitPreviewAfter(0);
+    let before = await buildId();
+    await page.getByLabel('imperial').check();
+    await waitBuildAfter(before);
+    expect(await page.getByLabel('Water depth to hold').inputValue()).toBe('1.77');
+    expect(await page.getByLabel('Tank full: water height above the valve').inputValue()).toBe('7.22');
+    await expect.poll(() => page.locator('[data-result="level-full"]').textContent()).toBe('1.77 in');
+    expect(await page.locator('fw-push-plot svg').textContent()).toContain('float push (oz of weight)');
+    expect(await page.locator('fw-flow-plot svg').textContent()).toContain('gal/h');
+    expect(await page.locator('[data-result="leak-tolerance"]').textContent()).toMatch(/fl oz/);
+    await page.getByRole('button', { name: 'Copy share link' }).click();
+    const link = await page.getByLabel('Share link').inputValue();
+    expect(link).toContain('units=imperial');
+    // back to metric here, so only the link can bring imperial back
+    before = await buildId();
+    await page.getByLabel('metric').check();
+    await waitBuildAfter(before);
+    await page.goto('about:blank');
+    await page.goto(link);
+    await waitPreviewAfter(0);
+    expect(await page.getByLabel('imperial').isChecked()).toBe(true);
+    expect(await page.getByLabel('Water depth to hold').inputValue()).toBe('1.77');
+    await expect.poll(() => page.locator('[data-result="level-full"]').textContent()).toBe('1.77 in');
+    expect(await page.locator('[data-notice="good"]').textContent()).toContain('in imperial units');
+    // the build sheet made in the browser follows
+    const [sheet] = await Promise.all([context.waitForEvent('page', { timeout: 30_000 }), page.getByRole('button', { name: 'Build sheet' }).click()]);
+    await sheet.waitForFunction(() => document.body?.innerText.includes('Low pressure only'), null, { timeout: 20_000 });
+    const sheetText = await sheet.evaluate(() => document.body.innerText);
+    expect(sheetText).toContain('target level 1.77 in');
+    expect(sheetText).toContain('7.22 ft');
+    await sheet.screenshot({ path: join(SHOTS, '18-build-sheet-imperial.png') });
+    await sheet.close();
+    // no valve fits: the way out is written in inches, into the inch box, and it works
+    before = await buildId();
+    await page.getByLabel('Tank full: water height above the valve').fill('9.84');
+    await page.getByLabel('Water depth to hold').fill('0.39');
+    await page.waitForSelector('[data-way-out="level.target"]', { timeout: 20_000 });
+    expect(await page.locator('[data-way-out="level.target"]').textContent()).toMatch(/to \d+\.\d+ in: a target level of at least \d+\.\d+ in/);
+    await shot('19-no-fit-imperial');
+    const after = await buildId();
+    await page.locator('[data-way-out="level.target"]').click();
+    await waitBuildAfter(after);
+    await expect.poll(() => app().getAttribute('data-result')).toBe('sized');
+    expect(await page.getByLabel('Water depth to hold').inputValue()).toMatch(/^\d+\.\d\d$/);
+    before = await buildId();
+    await page.getByLabel('metric').check();
+    await waitBuildAfter(before);
+  });
+
   it('at 390x844: one column (inputs, summary, view, details), a view of fixed height, nothing wider than the screen, cautions foldable and always reachable', async () => {
     await page.setViewportSize({ width: 390, height: 844 });
     await page.goto(url);

@@ -7,9 +7,11 @@ import { setAt, type Doc } from '../lib/doc-path.ts';
 import { docToSize } from '../lib/doc-to-size.ts';
 import { fileStem } from '../../generator/doc/file-stem.ts';
 import { placeErrors } from '../lib/place-errors.ts';
+import { messageInUnits } from '../lib/message-in-units.ts';
+import { wayOutInUnits } from '../lib/way-out-in-units.ts';
 import { ALL_FIELDS } from '../lib/form-fields.ts';
 import { presets, type Preset } from '../lib/presets.ts';
-import { decodeDesign, designFromHash, shareUrl } from '../lib/share-link.ts';
+import { decodeDesign, designFromHash, shareUrl, unitsFromHash } from '../lib/share-link.ts';
 import { loadSaved, save } from '../lib/storage.ts';
 import { labelFor, problemsInLabels, shownMessage } from '../lib/field-label.ts';
 import { keepRecent, loadRecent, recentTitle, type RecentDesign } from '../lib/recent-designs.ts';
@@ -207,6 +209,7 @@ export class FwApp extends LitElement {
   private openFromHash(): void {
     const encoded = designFromHash(globalThis.location?.hash ?? '');
     if (encoded === null) return;
+    const linkUnits = unitsFromHash(location.hash);
     history.replaceState(null, '', location.pathname + location.search);
     const decoded = decodeDesign(encoded);
     if (!decoded.ok) {
@@ -218,7 +221,12 @@ export class FwApp extends LitElement {
       this.notice = { kind: 'bad', text: `The shared link holds a design with problems, so it was not opened. ${errorList(parsed.errors)} Your current design is unchanged.` };
       return;
     }
-    this.replaceDoc(decoded.doc as Doc, 'Opened the design from the link.', 'a share link');
+    // the link opens in the system it was made in; its values are shown as they were written
+    if (linkUnits && linkUnits !== this.units) {
+      this.units = linkUnits;
+      this.beforeSwitch = null;
+    }
+    this.replaceDoc(decoded.doc as Doc, linkUnits === 'imperial' ? 'Opened the design from the link, in imperial units.' : 'Opened the design from the link.', 'a share link');
   }
 
   /**
@@ -254,7 +262,8 @@ export class FwApp extends LitElement {
     const parsed = parseDesign(docToSize(this.doc));
     if (!parsed.ok) {
       // each box shows its own problem; other boxes it mentions are named by their labels
-      this.errors = placeErrors(Object.fromEntries(parsed.errors.map((e) => [e.field, shownMessage(e.message)])), this.editedAt);
+      // quantities in the page's units (an inch box's limits in inches), then as the screen shows them
+      this.errors = placeErrors(Object.fromEntries(parsed.errors.map((e) => [e.field, shownMessage(messageInUnits(e.field, e.message, this.units))])), this.editedAt);
       return;
     }
     this.errors = {};
@@ -401,7 +410,7 @@ export class FwApp extends LitElement {
     // The sheet opens in a new tab to read and print; the tab must open inside the click, before the worker answers.
     const sheetTab = e.detail.kind === 'sheet' ? globalThis.open?.('', '_blank') ?? null : null;
     try {
-      const files: ExportFile[] = await this.client!.exportFiles(good.inputs, doc, e.detail.kind, e.detail.part);
+      const files: ExportFile[] = await this.client!.exportFiles(good.inputs, doc, e.detail.kind, e.detail.part, this.units);
       for (const f of files) {
         if (sheetTab && f.mime === 'text/html') {
           sheetTab.location.href = URL.createObjectURL(new Blob([f.bytes as BlobPart], { type: 'text/html' }));
@@ -442,7 +451,7 @@ export class FwApp extends LitElement {
 
   private async shareLink(): Promise<void> {
     const doc = docToSize(this.lastGoodDoc ?? this.doc);
-    const link = shareUrl(location.href, doc);
+    const link = shareUrl(location.href, doc, this.units);
     let copied = false;
     try {
       await navigator.clipboard.writeText(link);
@@ -451,6 +460,18 @@ export class FwApp extends LitElement {
       // clipboard blocked: the link is shown to copy by hand
     }
     this.notice = { kind: 'good', text: copied ? 'Link copied. Anyone who opens it gets this design:' : 'Copy this link to share the design:', link };
+  }
+
+  private convertedResult: { from: SizingResult | null; units: UnitSystem; doc: Doc; result: SizingResult | null } | null = null;
+
+  /** The result with its ways out written in the boxes' units (an inch box gets inches), kept while nothing changes. */
+  private resultInUnits(): SizingResult | null {
+    const c = this.convertedResult;
+    if (c && c.from === this.result && c.units === this.units && c.doc === this.doc) return c.result;
+    const r = this.result;
+    const result = r && !r.ok && this.units !== 'metric' ? { ...r, waysOut: r.waysOut.map((w) => wayOutInUnits(w, this.doc, this.units)) } : r;
+    this.convertedResult = { from: r, units: this.units, doc: this.doc, result };
+    return result;
   }
 
   private setView(patch: Partial<ViewOptions>): void {
@@ -535,7 +556,7 @@ export class FwApp extends LitElement {
         </div>
         <div class="side">
         <div class="summary">
-          <fw-results show="summary" .result=${this.result} .lastGood=${good} .units=${this.units} .stale=${Object.keys(this.errors).length > 0 || outOfDate} @apply-way-out=${this.applyWayOut}></fw-results>
+          <fw-results show="summary" .result=${this.resultInUnits()} .lastGood=${good} .units=${this.units} .stale=${Object.keys(this.errors).length > 0 || outOfDate} @apply-way-out=${this.applyWayOut}></fw-results>
           <fw-file-bar .disabled=${blocked !== null} .reason=${blocked ?? ''} .busy=${this.busy} @export-request=${this.exportRequest} @import-file=${this.importFile} @share-link=${this.shareLink}></fw-file-bar>
         </div>
         <div class="right">

@@ -1,7 +1,7 @@
 import { LitElement, css, html, svg, nothing } from 'lit';
 import { customElement, property } from 'lit/decorators.js';
 import type { SizingSuccess } from '../../generator/sizing/result.ts';
-import { levelAxis } from '../lib/format.ts';
+import { levelAxis, pushAxis } from '../lib/format.ts';
 import { pushCurve } from '../lib/net-push.ts';
 import { niceStep } from '../lib/nice-step.ts';
 import type { UnitSystem } from '../lib/units-system.ts';
@@ -44,13 +44,20 @@ export class FwPushPlot extends LitElement {
     const unit = u === 'metric' ? 'mm' : 'in';
     const xs = c.points.map((p) => levelAxis(p.levelMm, u));
     const x0 = xs[0], x1 = xs[xs.length - 1];
-    const yMin = Math.min(0, ...c.points.map((p) => p.pushN));
-    const yMax = Math.max(...c.points.map((p) => p.pushN), c.closeAtHeadMaxN * 1.1);
+    // pushes in newtons (metric) or ounces of weight (imperial)
+    const push = (n: number) => pushAxis(n, u);
+    const pushUnit = u === 'metric' ? 'N' : 'oz of weight';
+    const ys = c.points.map((p) => push(p.pushN));
+    const needMax = push(c.closeAtHeadMaxN);
+    const needMin = push(c.closeAtHeadMinN);
+    const yMin = Math.min(0, ...ys);
+    const yMax = Math.max(...ys, needMax * 1.1);
     const px = (x: number) => L + ((x - x0) / (x1 - x0)) * (W - L - R);
     const py = (y: number) => T + (1 - (y - yMin) / (yMax - yMin)) * (H - T - B);
-    const path = c.points.map((p, i) => `${i ? 'L' : 'M'}${px(xs[i]).toFixed(1)},${py(p.pushN).toFixed(1)}`).join('');
+    const path = c.points.map((_, i) => `${i ? 'L' : 'M'}${px(xs[i]).toFixed(1)},${py(ys[i]).toFixed(1)}`).join('');
     const xStep = niceStep(x1 - x0);
     const yStep = niceStep(yMax - yMin, 4);
+    const yDigits = Math.max(0, -Math.floor(Math.log10(yStep) + 1e-9));
     const xTicks: number[] = [];
     for (let x = Math.ceil(x0 / xStep) * xStep; x <= x1 + 1e-9; x += xStep) xTicks.push(x);
     const yTicks: number[] = [];
@@ -61,21 +68,21 @@ export class FwPushPlot extends LitElement {
     const digits = u === 'metric' ? 1 : 2;
     return html`<figure style="margin:0">
       <svg viewBox="0 0 ${W} ${H}" role="img" aria-label="Float push against water depth. The valve holds ${heldMax.toFixed(digits)} ${unit} with the tank full${same ? '' : ` and ${heldMin.toFixed(digits)} ${unit} with the tank low`}.">
-        ${yTicks.map((y) => svg`<line class="grid" x1=${L} x2=${W - R} y1=${py(y)} y2=${py(y)}></line><text x=${L - 6} y=${py(y) + 4} text-anchor="end">${y.toFixed(2)}</text>`)}
+        ${yTicks.map((y) => svg`<line class="grid" x1=${L} x2=${W - R} y1=${py(y)} y2=${py(y)}></line><text x=${L - 6} y=${py(y) + 4} text-anchor="end">${y.toFixed(yDigits)}</text>`)}
         ${xTicks.map((x) => svg`<line class="grid" y1=${T} y2=${H - B} x1=${px(x)} x2=${px(x)}></line><text x=${px(x)} y=${H - B + 14} text-anchor="middle">${Number(x.toFixed(3))}</text>`)}
         <line class="axis" x1=${L} x2=${W - R} y1=${py(0)} y2=${py(0)}></line>
         <line class="axis" x1=${L} x2=${L} y1=${T} y2=${H - B}></line>
         <text x=${(L + W - R) / 2} y=${H - 6} text-anchor="middle">water depth in the container (${unit})</text>
-        <text transform="translate(12 ${(T + H - B) / 2}) rotate(-90)" text-anchor="middle">float push (N)</text>
-        <line class="need-max" x1=${L} x2=${W - R} y1=${py(c.closeAtHeadMaxN)} y2=${py(c.closeAtHeadMaxN)}></line>
-        <text class="lab-max" x=${L + 4} y=${py(c.closeAtHeadMaxN) - 4}>needed to shut, tank full</text>
-        ${same ? nothing : svg`<line class="need-min" x1=${L} x2=${W - R} y1=${py(c.closeAtHeadMinN)} y2=${py(c.closeAtHeadMinN)}></line>
-          <text class="lab-min" x=${L + 4} y=${py(c.closeAtHeadMinN) + 12}>needed to shut, tank low</text>`}
-        ${Number.isFinite(heldMax) ? svg`<line class="held" x1=${px(heldMax)} x2=${px(heldMax)} y1=${py(c.closeAtHeadMaxN)} y2=${H - B}></line>
-          <circle cx=${px(heldMax)} cy=${py(c.closeAtHeadMaxN)} r="4" fill="var(--bad)"></circle>
+        <text transform="translate(12 ${(T + H - B) / 2}) rotate(-90)" text-anchor="middle">float push (${pushUnit})</text>
+        <line class="need-max" x1=${L} x2=${W - R} y1=${py(needMax)} y2=${py(needMax)}></line>
+        <text class="lab-max" x=${L + 4} y=${py(needMax) - 4}>needed to shut, tank full</text>
+        ${same ? nothing : svg`<line class="need-min" x1=${L} x2=${W - R} y1=${py(needMin)} y2=${py(needMin)}></line>
+          <text class="lab-min" x=${L + 4} y=${py(needMin) + 12}>needed to shut, tank low</text>`}
+        ${Number.isFinite(heldMax) ? svg`<line class="held" x1=${px(heldMax)} x2=${px(heldMax)} y1=${py(needMax)} y2=${H - B}></line>
+          <circle cx=${px(heldMax)} cy=${py(needMax)} r="4" fill="var(--bad)"></circle>
           <text class="lab-held" x=${px(heldMax) + 4} y=${H - B - 4}>${heldMax.toFixed(digits)}</text>` : nothing}
-        ${!same && Number.isFinite(heldMin) ? svg`<line class="held" x1=${px(heldMin)} x2=${px(heldMin)} y1=${py(c.closeAtHeadMinN)} y2=${H - B}></line>
-          <circle cx=${px(heldMin)} cy=${py(c.closeAtHeadMinN)} r="4" fill="var(--warn)"></circle>
+        ${!same && Number.isFinite(heldMin) ? svg`<line class="held" x1=${px(heldMin)} x2=${px(heldMin)} y1=${py(needMin)} y2=${H - B}></line>
+          <circle cx=${px(heldMin)} cy=${py(needMin)} r="4" fill="var(--warn)"></circle>
           <text class="lab-held" x=${px(heldMin) - 4} y=${H - B - 16} text-anchor="end">${heldMin.toFixed(digits)}</text>` : nothing}
         <path class="curve" d=${path}></path>
       </svg>

@@ -3,6 +3,7 @@ import { customElement, property } from 'lit/decorators.js';
 import { CONSTRAINT_TEXT } from '../../generator/sizing/layout/constraint-text.ts';
 import type { SizingResult, SizingSuccess, WayOut } from '../../generator/sizing/result.ts';
 import { labelFor, shownMessage } from '../lib/field-label.ts';
+import { textInUnits } from '../../generator/doc/text-in-units.ts';
 import * as f from '../lib/format.ts';
 import { markTerms } from '../lib/mark-terms.ts';
 import type { UnitSystem } from '../lib/units-system.ts';
@@ -106,7 +107,7 @@ export class FwResults extends LitElement {
           <dt>Most pad squeeze in use (a stop holds it)</dt><dd>${(s.seal.worstStrain * 100).toFixed(0)} %</dd>
           <dt>Float shell</dt><dd>${f.printMm(s.float.shellMm, 2)}</dd>
           <dt>Float weighs dry, before the pad</dt><dd data-result="float-dry">${f.massG(s.float.dryMassG, u, 1)}</dd>
-          <dt>Water the float can take in and still shut</dt><dd data-result="leak-tolerance">${s.float.leakToleranceMl.toFixed(1)} mL (each mL raises the level ${f.printMm(s.float.levelRisePerMlMm, 2)})</dd>
+          <dt>Water the float can take in and still shut</dt><dd data-result="leak-tolerance">${f.leakTolerance(s.float.leakToleranceMl, s.float.levelRisePerMlMm, u)}</dd>
         </dl>
       </section>
       <section aria-label="Holding down">
@@ -122,13 +123,13 @@ export class FwResults extends LitElement {
           <dt>Float</dt><dd>${f.massG(s.mass.byPart.float, u, 1)}</dd>
           <dt>Nozzle</dt><dd>${f.massG(s.mass.byPart.nozzle, u, 1)}</dd>
           <dt>Pin</dt><dd>${f.massG(s.mass.byPart.pin, u, 1)}</dd>
-          <dt>All parts</dt><dd data-result="mass-total"><b>${f.massG(s.mass.totalG, u)}</b>, ${s.mass.filamentM.toFixed(1)} m of filament</dd>
+          <dt>All parts</dt><dd data-result="mass-total"><b>${f.massG(s.mass.totalG, u)}</b>, ${f.filamentLength(s.mass.filamentM, u)} of filament</dd>
         </dl>
       </section>
       <section aria-label="What set the size">
         <h2>What set the size</h2>
-        <ul>${s.boundBy.map((b) => html`<li>${shownMessage((CONSTRAINT_TEXT as Record<string, string>)[b] ?? b)}</li>`)}</ul>
-        ${s.warnings.map((w) => html`<div class="warn" data-warning=${w.code}>${shownMessage(w.message)}</div>`)}
+        <ul>${s.boundBy.map((b) => html`<li>${shownMessage(textInUnits((CONSTRAINT_TEXT as Record<string, string>)[b] ?? b, u))}</li>`)}</ul>
+        ${s.warnings.map((w) => html`<div class="warn" data-warning=${w.code}>${shownMessage(textInUnits(w.message, u))}</div>`)}
       </section>
       ${this.timing ? html`<p class="timing" data-timing>${this.timing}</p>` : nothing}`;
   }
@@ -150,7 +151,7 @@ export class FwResults extends LitElement {
       ${failure
         ? html`<section class="fail" role="alert" aria-label="Cannot size">
             <h2>No valve fits these numbers</h2>
-            <ul>${failure.reasons.map((x) => html`<li>${shownMessage(x.message)}</li>`)}</ul>
+            <ul>${failure.reasons.map((x) => html`<li>${shownMessage(textInUnits(x.message, this.units))}</li>`)}</ul>
             ${failure.waysOut.length
               ? html`<div class="ways"><p>Any one of these would work:</p>
                   ${failure.waysOut.map(

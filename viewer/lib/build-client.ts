@@ -5,6 +5,7 @@
  * (or hold up) the preview.
  */
 import type { DesignInputs } from '../../generator/sizing/inputs.ts';
+import type { TextUnits } from '../../generator/doc/text-in-units.ts';
 import type { BuiltReply, ExportFile, ExportKind, WorkerReply, WorkerRequest } from '../worker/protocol.ts';
 import type { PartName } from '../worker/parts-contract.ts';
 import { newBuildWorker, takeEarlyWorker } from './early-worker.ts';
@@ -35,7 +36,8 @@ export class BuildClient {
     return req.id;
   }
 
-  exportFiles(inputs: DesignInputs, document: unknown, kind: ExportKind, part?: PartName): Promise<ExportFile[]> {
+  /** `units`: the system the build sheet is written in (default metric); the parts are in millimetres either way */
+  exportFiles(inputs: DesignInputs, document: unknown, kind: ExportKind, part?: PartName, units: TextUnits = 'metric'): Promise<ExportFile[]> {
     if (!this.exporter) {
       this.exporter = this.factory();
       this.exporter.onmessage = (e: MessageEvent<WorkerReply>) => {
@@ -48,7 +50,7 @@ export class BuildClient {
     }
     const id = this.nextId++;
     const promise = new Promise<ExportFile[]>((resolve, reject) => this.exports.set(id, { resolve, reject }));
-    this.exporter.postMessage({ type: 'export', id, inputs, document, kind, part } satisfies WorkerRequest);
+    this.exporter.postMessage({ type: 'export', id, inputs, document, kind, part, units } satisfies WorkerRequest);
     return promise;
   }
 

@@ -6,6 +6,7 @@ const FOOT_M = 0.3048;
 const US_GALLON_L = 3.785411784;
 const OUNCE_G = 28.349523125;
 const STANDARD_GRAVITY = 9.80665;
+const US_FLUID_OUNCE_ML = 29.5735295625;
 
 const fixed = (x: number, digits: number) => (Number.isFinite(x) ? x.toFixed(digits) : '–');
 
@@ -58,4 +59,21 @@ export function minutes(min: number | null): string {
 /** Plot axis value of a level, in the page's unit. */
 export function levelAxis(mm: number, system: UnitSystem): number {
   return system === 'metric' ? mm : mm / INCH_MM;
+}
+
+/** Water a float can take in and still shut, and how much each unit of it raises the level (US fl oz and inches in imperial). */
+export function leakTolerance(ml: number, risePerMlMm: number, system: UnitSystem): string {
+  return system === 'metric'
+    ? `${fixed(ml, 1)} mL (each mL raises the level ${fixed(risePerMlMm, 2)} mm)`
+    : `${fixed(ml / US_FLUID_OUNCE_ML, 2)} fl oz (each fl oz raises the level ${fixed((risePerMlMm * US_FLUID_OUNCE_ML) / INCH_MM, 2)} in)`;
+}
+
+/** Filament used, in metres or feet. */
+export function filamentLength(m: number, system: UnitSystem): string {
+  return system === 'metric' ? `${fixed(m, 1)} m` : `${fixed(m / FOOT_M, 1)} ft`;
+}
+
+/** A push as a weight, for a plot axis: newtons in metric, ounces of weight in imperial. */
+export function pushAxis(n: number, system: UnitSystem): number {
+  return system === 'metric' ? n : ((n / STANDARD_GRAVITY) * 1000) / OUNCE_G;
 }

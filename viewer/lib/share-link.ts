@@ -4,6 +4,7 @@
  * document with parseDesign before using it.
  */
 export const HASH_KEY = 'design';
+export const UNITS_KEY = 'units';
 const MAX_LINK_CHARS = 20_000;
 
 export function encodeDesign(doc: unknown): string {
@@ -38,6 +39,13 @@ export function designFromHash(hash: string): string | null {
   return params.get(HASH_KEY);
 }
 
-export function shareUrl(base: string, doc: unknown): string {
-  return `${base.split('#')[0]}#${HASH_KEY}=${encodeDesign(doc)}`;
+/** The link to a design; with `units`, it opens in that system ("&units=imperial"; metric is the default). */
+export function shareUrl(base: string, doc: unknown, units?: 'metric' | 'imperial'): string {
+  return `${base.split('#')[0]}#${HASH_KEY}=${encodeDesign(doc)}${units === 'imperial' ? `&${UNITS_KEY}=imperial` : ''}`;
+}
+
+/** The unit system a link was made in, or null when it names none (links made before it did). */
+export function unitsFromHash(hash: string): 'metric' | 'imperial' | null {
+  const value = new URLSearchParams(hash.replace(/^#/, '')).get(UNITS_KEY);
+  return value === 'imperial' || value === 'metric' ? value : null;
 }

@@ -42,7 +42,7 @@ async function handle(req: WorkerRequest): Promise<void> {
   const meshes = req.kind === 'sheet' ? null : await buildParts(sizing, { quality: 'export' });
   // the writers, the build sheet and the zip load on the first export: the preview never needs them
   const { exportFiles } = await import('./export-files.ts');
-  const files = exportFiles(req.kind, sizing, req.document, meshes, req.part);
+  const files = exportFiles(req.kind, sizing, req.document, meshes, req.part, req.units);
   scope.postMessage({ type: 'exported', id: req.id, files } satisfies WorkerReply, files.map((f) => f.bytes.buffer as ArrayBuffer));
 }
 

@@ -7,6 +7,7 @@ import { packPlates } from '../../generator/solids/mesh/pack-plates.ts';
 import { printBedMm } from '../../generator/sizing/parts/print-bed.ts';
 import type { SizingSuccess } from '../../generator/sizing/result.ts';
 import { fileStem } from '../../generator/doc/file-stem.ts';
+import type { TextUnits } from '../../generator/doc/text-in-units.ts';
 import { buildSheet } from './sheet-source.ts';
 import { PART_NAMES, type PartMeshes, type PartName } from './parts-contract.ts';
 import type { ExportFile, ExportKind } from './protocol.ts';
@@ -23,7 +24,8 @@ export function stlFile(base: string, part: PartName, meshes: PartMeshes): Expor
   return { name: `${base}-${part}.stl`, mime: 'model/stl', bytes: writeStlBinary(meshes[part], { header: `floatwright ${part}, millimetres` }) };
 }
 
-export function exportFiles(kind: ExportKind, sizing: SizingSuccess, document: unknown, meshes: PartMeshes | null, part?: PartName): ExportFile[] {
+/** `units` (default metric): the system the build sheet is written in; parts and plates are in millimetres either way. */
+export function exportFiles(kind: ExportKind, sizing: SizingSuccess, document: unknown, meshes: PartMeshes | null, part?: PartName, units: TextUnits = 'metric'): ExportFile[] {
   const base = baseName(document);
   const need = () => {
     if (!meshes) throw new Error('the parts could not be built');
@@ -35,7 +37,7 @@ export function exportFiles(kind: ExportKind, sizing: SizingSuccess, document: u
     case '3mf':
       return plates(base, need(), document, sizing);
     case 'sheet':
-      return [{ name: `${base}-build-sheet.html`, mime: 'text/html', bytes: strToU8(buildSheet(sizing, document, base)) }];
+      return [{ name: `${base}-build-sheet.html`, mime: 'text/html', bytes: strToU8(buildSheet(sizing, document, base, units)) }];
     case 'zip': {
       const m = need();
       const entries: Record<string, Uint8Array> = {};
@@ -44,7 +46,7 @@ export function exportFiles(kind: ExportKind, sizing: SizingSuccess, document: u
         entries[f.name] = f.bytes;
       }
       for (const p of plates(base, m, document, sizing)) entries[p.name] = p.bytes;
-      entries[`${base}-build-sheet.html`] = strToU8(buildSheet(sizing, document, base));
+      entries[`${base}-build-sheet.html`] = strToU8(buildSheet(sizing, document, base, units));
       entries[`${base}-design.json`] = strToU8(JSON.stringify(document, null, 2) + '\n');
       return [{ name: `${base}.zip`, mime: 'application/zip', bytes: zipSync(entries, { level: 6 }) }];
     }
