@@ -12,6 +12,7 @@ import { HEAD_CAP_M, STANDARD_GRAVITY, WATER_DENSITY_20C, WATER_VISCOSITY_20C } 
 import type { Architecture, CalibrationPoint, DesignInputs, Mount } from '../sizing/inputs.ts';
 import { RIM_HEIGHT_RANGE_MM, WALL_THICKNESS_RANGE_MM } from '../sizing/rim/rim-input-problems.ts';
 import { fitSealCalibration, headsDefineSlope } from '../sizing/hydrostatics/fit-seal-calibration.ts';
+import { sameHeadClashes } from './same-head-clash.ts';
 import { DEFAULT_MATERIAL_NAME, findMaterial, materialNames } from '../sizing/materials.ts';
 import { AUTO_PAD, PADS, findPad, padNames } from '../sizing/seal/pads.ts';
 import { chooseSeal } from '../sizing/seal/choose-seal.ts';
@@ -420,6 +421,14 @@ export const designSchema = section(documentShape).transform((doc, ctx): ParsedD
     calibration.push({ headM: head.measured.si, massKg: point.mass.si });
     calibrationText.push({ head: normalizedText(head.measured.si, 'm'), mass: normalizedText(point.mass.si, 'g') });
   });
+  // two different masses at one head cannot both be right: refused on the later one's mass, naming the earlier
+  if (calibration.length === (seal.calibration ?? []).length) {
+    for (const { index, earlier } of sameHeadClashes(calibration)) {
+      const [p, q] = [calibrationText[index], calibrationText[earlier]];
+      fail(ctx, ['seal', 'calibration', index, 'mass'], undefined,
+        `${p.mass} at ${p.head}, but point ${earlier + 1} at the same head stopped the flow with ${q.mass}: at one head the pad stops the flow at one weight, so two more than 5 % apart cannot both be right. Weigh again, or remove one of them.`);
+    }
+  }
   // The sizing core fits F = F_pre + A_eff rho g H to the bench points; a fit whose area is not positive
   // (masses that fall as the head rises) cannot size a float, so it is refused here, at the door.
   const calibrationComplete = calibration.length > 0 && calibration.length === (seal.calibration ?? []).length;

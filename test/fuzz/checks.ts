@@ -291,6 +291,14 @@ export function wayOutProblems(doc: Record<string, unknown>, s: Exclude<SizingRe
 }
 
 /**
+ * Whether every problem is a refusal of the bench points: the fit on seal.calibration, or two masses at one
+ * head on the later point's mass (generator/doc/same-head-clash.ts).
+ */
+export function onlyCalibrationRefused(errors: readonly { field: string; message: string }[]): boolean {
+  return errors.every((e) => e.field === 'seal.calibration' || (/^seal\.calibration\.\d+\.mass$/.test(e.field) && /at the same head/.test(e.message)));
+}
+
+/**
  * Whether a drawn design's bench points may be refused: scattered or random points may fall with head,
  * and one head alone may too, since its fit holds the pad's own seating force, which the drawn line's
  * intercept need not reach (heads counted as written: points off the scale are never weighed).

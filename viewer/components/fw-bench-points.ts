@@ -2,6 +2,7 @@ import { LitElement, css, html } from 'lit';
 import { customElement, property } from 'lit/decorators.js';
 import { CALIBRATION_HEAD, CALIBRATION_MASS, displayText, documentValue, unitFor, type UnitSystem } from '../lib/units-system.ts';
 import { labelFor } from '../lib/field-label.ts';
+import { oneHeadNote } from '../lib/one-head-note.ts';
 import { shared } from './shared-styles.ts';
 import './fw-term.ts';
 
@@ -25,6 +26,7 @@ export class FwBenchPoints extends LitElement {
       input { font: inherit; width: 5.5rem; padding: 0.2rem 0.35rem; border: 1px solid #b9b3a0; border-radius: 5px; }
       input[aria-invalid='true'] { border-color: var(--bad); background: var(--bad-soft); }
       .msg { color: var(--bad); font-size: 0.82rem; }
+      .one-head { color: var(--ink); background: var(--warn-soft); border-left: 3px solid var(--warn); padding: 0.2rem 0.5rem; border-radius: 4px; }
       .remove { border-color: #999; color: #555; padding: 0.1rem 0.45rem; }
     `,
   ];
@@ -41,6 +43,11 @@ export class FwBenchPoints extends LitElement {
     const def = key === 'head' ? CALIBRATION_HEAD : CALIBRATION_MASS;
     const next = this.points.map((p, j) => (j === i ? { ...p, [key]: documentValue(text, def, this.units) ?? '' } : p));
     this.change(next);
+  }
+
+  private renderOneHead() {
+    const note = oneHeadNote(this.points);
+    return note ? html`<p class="one-head" role="status" data-one-head>${note}</p>` : '';
   }
 
   override render() {
@@ -69,6 +76,7 @@ export class FwBenchPoints extends LitElement {
           </table>`
         : ''}
       ${messages.map(([k, m]) => html`<div class="msg" role="alert">${labelFor(k)}: ${m}</div>`)}
+      ${this.renderOneHead()}
       ${this.points.some((p) => !p.head || !p.mass) ? html`<p>A row with an empty box is not used until both are filled in.</p>` : ''}
       <button @click=${() => this.change([...this.points, { head: '', mass: '' }])}>Add a bench point</button>
     </fieldset>`;
