@@ -12,6 +12,8 @@
 import { OVERHANG_MIN_DEG } from '../sizing/constants.ts';
 import { FOOT_FLARE_DEG, PIN_HOLE_ROOF_DEG } from '../sizing/parts/housing-spec.ts';
 import { CAUTIONS } from './cautions.ts';
+import { termLine, termsUsedIn } from './glossary.ts';
+import { superscriptUnits } from './superscript-units.ts';
 import { markdownText } from './safe-text/markdown-text.ts';
 import type { NormalizedDoc } from './schema.ts';
 import { sizingSections, type Section } from './format-sizing.ts';
@@ -64,7 +66,13 @@ interface Sheet {
   /** the seal test with the stand: empty without it */
   standSteps: string[];
   cautions: { title: string; text: string }[];
+  /** the glossary words the sheet uses, each with its explanation */
+  words: string[];
 }
+
+/** Every string inside a value (object keys left out). */
+const textsOf = (v: unknown): string[] =>
+  typeof v === 'string' ? [v] : Array.isArray(v) ? v.flatMap(textsOf) : v && typeof v === 'object' ? Object.values(v).flatMap(textsOf) : [];
 
 const f1 = (x: number) => (Math.round(x * 10) / 10).toFixed(1);
 const f2 = (x: number) => (Math.round(x * 100) / 100).toFixed(2);
@@ -106,11 +114,11 @@ function sheetContent(s: SizingSuccess, doc: NormalizedDoc, files: BuildSheetFil
           (files.withPad ? ` (${stl('pad')} is a cutting template: print it in any filament, lay it on the sheet and cut round it)` : '') +
           `; ${f2(s.mass.byPart.pad)} g, counted in the float's mass`,
       ],
-      ['Supply tube', `${doc.supply.tubeLength}`, `inner diameter ${doc.supply.tubeInnerDiameter}, pushed over the barb`],
+      ['Feed tube', `${doc.supply.tubeLength}`, `inside width ${doc.supply.tubeInnerDiameter}, pushed over the barb`],
       [
         'Inline strainer',
         '1',
-        `in the supply tube before the valve, openings finer than ${f2(P.nozzle.orificeMm * STRAINER_SHARE_OF_BORE)} mm (a third of the ${f1(P.nozzle.orificeMm)} mm bore): one grain caught on the lip holds the valve open`,
+        `in the feed tube before the valve, openings finer than ${f2(P.nozzle.orificeMm * STRAINER_SHARE_OF_BORE)} mm (a third of the ${f1(P.nozzle.orificeMm)} mm nozzle hole): one grain caught on the nozzle lip holds the valve open`,
       ],
       [
         'Hold-down',
@@ -191,33 +199,33 @@ function sheetContent(s: SizingSuccess, doc: NormalizedDoc, files: BuildSheetFil
   if (files.plate3mf) printNotes.push(`${files.plate3mf} holds every part laid out on one plate, already in print orientation.`);
 
   const steps = [
-    'Rinse every part. Look at the nozzle\'s sealing face: it must be flat and clean, with no strings or blobs; clear the orifice with a needle or a ' +
+    'Rinse every part. Look at the nozzle\'s sealing face: it must be flat and clean, with no strings or blobs; clear the nozzle hole with a needle or a ' +
       `${f1(P.nozzle.orificeMm)} mm drill turned by hand.`,
     `Push the nozzle insert into the seat from inside the housing, barb first, until its shoulder sits against the boss under the deck. The sealing face then stands ${f1(P.mount.nozzleTipZMm)} mm above the base.`,
     `Put the seal pad in the float's pocket (${f1(2 * P.float.pocketRadiusMm)} mm across, ${f1(P.float.pocketDepthMm)} mm deep); it should stand ${f1(P.float.padProudMm)} mm proud. A drop of flexible glue keeps it there.`,
     `Test the float before it goes in. Weigh it dry, without the pad: it should weigh ${f1(s.float.dryMassG)} g, within ${f1(DRY_MASS_TOLERANCE * 100)} % ` +
       `(${f1(s.float.dryMassG * (1 - DRY_MASS_TOLERANCE))} to ${f1(s.float.dryMassG * (1 + DRY_MASS_TOLERANCE))} g). Hold it fully under water for a day, ` +
       `dry the outside and weigh it again: reject it if it gained more than ${f1(SOAK_GAIN_LIMIT_G)} g. ` +
-      `(It can take in ${f1(s.float.leakToleranceMl)} mL before it no longer shuts at full tank; every mL raises the shut-off by ${f2(s.float.levelRisePerMlMm)} mm.)`,
+      `(It can take in ${f1(s.float.leakToleranceMl)} mL before it no longer shuts with the tank full; every mL raises the shut-tight level by ${f2(s.float.levelRisePerMlMm)} mm.)`,
     'Slide the float into the housing from below, flat bottom down, pad up, until its top collar slides into the sleeve under the deck (it should move freely there: the sleeve guides it and stops it).',
     `Slide the retainer pin through the two holes near the base, flat side down, head outside. The float now rests on it, ${f1(P.mount.pinTopZMm)} mm above the base, and cannot fall out.`,
-    'Push the supply tube over the barb on the deck.',
+    'Push the feed tube over the barb on the deck.',
     s.holdDown.neededN > 0
       ? `Stand the housing on the container floor and hold it down: ${f1(s.holdDown.ballastSteelG)} g of steel on the foot, or pins or screws through the anchor holes.`
       : 'Stand the housing on the container floor (anchor it if you like).',
-    `Open the supply. The valve starts to close at ${f1(s.levels.throttleStartMm)} mm and closes gradually: while the plants drink ${f1(s.inputs.demandLpd)} L a day the level holds near ${f1(s.levels.heldAtDemandMm)} mm with the tank full (${f1(s.levels.heldAtDemandLowTankMm)} mm when it runs low). With no one drinking it shuts tight at ${f1(s.levels.shutOffAtHeadMaxMm)} mm (${f1(s.levels.shutOffAtHeadMinMm)} mm at low tank), the highest it rises. Check for drips at the nozzle with the tank full.`,
+    `Open the supply. The throttle band starts at ${f1(s.levels.throttleStartMm)} mm: there the valve starts to close, and it closes gradually: while the plants drink ${f1(s.inputs.demandLpd)} L a day the level holds near ${f1(s.levels.heldAtDemandMm)} mm with the tank full (${f1(s.levels.heldAtDemandLowTankMm)} mm when it runs low). With no one drinking it shuts tight at ${f1(s.levels.shutOffAtHeadMaxMm)} mm (${f1(s.levels.shutOffAtHeadMinMm)} mm with the tank low), the highest it rises. Check for drips at the nozzle with the tank full.`,
   ];
 
   const standSteps = files.withTestStand ? standTestSteps(s) : [];
   const boundByText = CONSTRAINT_TEXT as Record<string, string>;
-  return {
+  const sheet: Sheet = {
     title: `${name}: build sheet`,
     intro: [
-      `Head ${doc.supply.headMax} (full) to ${doc.supply.headMin} (low), target level ${doc.level.target}, printed in ${material}.`,
+      `Tank full ${doc.supply.headMax} and tank low ${doc.supply.headMin} (heads above the nozzle), water depth to hold ${doc.level.target}, printed in ${material}.`,
       ...(doc.notes ? [doc.notes] : []),
     ],
     figures: sizingSections(s),
-    boundBy: s.boundBy.map((code) => `${code}: ${boundByText[code] ?? code}`),
+    boundBy: s.boundBy.map((code) => boundByText[code] ?? code),
     warnings: s.warnings.map((w) => w.message),
     bom,
     print,
@@ -226,7 +234,10 @@ function sheetContent(s: SizingSuccess, doc: NormalizedDoc, files: BuildSheetFil
     steps,
     standSteps,
     cautions: CAUTIONS.map((c) => ({ title: c.title, text: c.text })),
+    words: [],
   };
+  sheet.words = termsUsedIn(textsOf(sheet).join('\n')).map(termLine);
+  return sheet;
 }
 
 /**
@@ -240,25 +251,25 @@ function standTestSteps(s: SizingSuccess): string[] {
   const atMax = (s.closingForce.atHeadMaxN * 1000) / g;
   const atMin = (s.closingForce.atHeadMinN * 1000) / g;
   const steps = [
-    `Push a nozzle insert into the stand's seat from above, barb first, until its shoulder sits on the deck: the lip points up, as in the housing's seat turned over. Push the supply tube over the barb from below and lead it out through the opening at the foot.`,
+    `Push a nozzle insert into the stand's seat from above, barb first, until its shoulder sits on the deck: the nozzle lip points up, as in the housing's seat turned over. Push the feed tube over the barb from below and lead it out through the opening at the foot.`,
     `Put a pad in the plunger's pocket (${f1(2 * st.plunger.pocketRadiusMm)} mm across, ${f1(st.plunger.pocketDepthMm)} mm deep), with a drop of flexible glue: it faces down in use. The plunger weighs ${f1(st.plunger.massG)} g with its pad; the figure is printed on its pad face.`,
-    'Set the tank so its water surface stands at a known height above the lip (the head); measure it with a tape from the lip to the surface. Open the supply: water runs out of the nozzle and away through the slots and the foot.',
+    'Set the tank so its water surface stands at a known height above the nozzle lip (the head); measure it with a tape from the lip to the surface. Open the supply: water runs out of the nozzle and away through the slots and the foot.',
     `Lower the plunger into the guide so the pad rests on the lip. Pour water into its cup a little at a time until the drip stops and stays stopped for a minute. The cup holds ${f1(st.plunger.cupCapacityMl)} mL` +
       (st.cupCapped ? ': at high heads that may not be enough; stand a small jar on the cup for more.' : '.'),
     `Lift the plunger out with its cup and water and weigh them together: that mass, with the head, is one point. The plunger's own mass is part of it.`,
     'Repeat at a second head, as far from the first as the tank allows (two heads or more: the points give both the pad\'s seating force and the area the pressure acts on; one head gives only their sum).',
-    `Enter the points in the design document as seal.calibration, e.g. [{ "head": "0.8 m", "mass": "35 g" }, { "head": "1.6 m", "mass": "60 g" }], or in the workbench's bench points box, then size again. The model now expects about ${f1(atMin)} g at the lowest head and ${f1(atMax)} g at the highest.`,
+    `Enter the points as bench points in the workbench, or in the design file as "calibration" inside "seal", for example [{ "head": "0.8 m", "mass": "35 g" }, { "head": "1.6 m", "mass": "60 g" }], then size again. The model now expects about ${f1(atMin)} g with the tank low and ${f1(atMax)} g with it full.`,
   ];
   if (st.plunger.massG >= atMin) {
     steps.push(
-      `The plunger alone (${f1(st.plunger.massG)} g) already outweighs the ${f1(atMin)} g the model expects at the lowest head: test at heads where the drip still runs with the plunger resting on the lip.`,
+      `The plunger alone (${f1(st.plunger.massG)} g) already outweighs the ${f1(atMin)} g the model expects with the tank low: test at heads where the drip still runs with the plunger resting on the lip.`,
     );
   }
   return steps;
 }
 
-/** Every text in the Markdown sheet, ours or the grower's (name, notes, material): one line, Markdown characters escaped. */
-const mdCell = markdownText;
+/** Every text in the Markdown sheet, ours or the grower's (name, notes, material): one line, Markdown characters escaped, powers of units raised. */
+const mdCell = (text: string) => markdownText(superscriptUnits(text));
 
 function mdTable(head: string[], rows: string[][]): string[] {
   return [`| ${head.map(mdCell).join(' | ')} |`, `| ${head.map(() => '---').join(' | ')} |`, ...rows.map((r) => `| ${r.map(mdCell).join(' | ')} |`)];
@@ -273,17 +284,18 @@ export function buildSheetMarkdown(sizing: SizingSuccess, document: NormalizedDo
   for (const section of c.figures) {
     out.push(`### ${m(section.title)}`, '', ...mdTable(['quantity', 'value', 'unit'], section.rows.map((r) => [r.label, r.value, r.unit])), '');
   }
-  out.push('Bound by:', '', ...c.boundBy.map((b) => `- ${m(b)}`), '');
+  out.push('What set the size:', '', ...c.boundBy.map((b) => `- ${m(b)}`), '');
   out.push('Warnings:', '', ...(c.warnings.length ? c.warnings.map((w) => `- ${m(w)}`) : ['- none']), '');
   out.push(`## ${m(c.bom.title)}`, '', ...mdTable(c.bom.head, c.bom.rows), '');
   out.push(`## ${m(c.print.title)}`, '', `**${m(c.printFirst)}**`, '', ...mdTable(c.print.head, c.print.rows), '', ...c.printNotes.map((n) => `- ${m(n)}`), '');
   out.push('## Assembly', '', ...c.steps.map((step, i) => `${i + 1}. ${m(step)}`), '');
   if (c.standSteps.length) out.push('## Seal test with the stand', '', ...c.standSteps.map((step, i) => `${i + 1}. ${m(step)}`), '');
+  out.push('## Words on this sheet', '', ...c.words.map((w) => `- ${m(w)}`), '');
   return out.join('\n');
 }
 
 const esc = (text: string) =>
-  text.replace(/[&<>"']/g, (ch) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[ch] as string);
+  superscriptUnits(text).replace(/[&<>"']/g, (ch) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[ch] as string);
 
 function htmlTable(head: string[], rows: string[][], caption?: string): string {
   return [
@@ -316,7 +328,7 @@ export function buildSheetHtml(sizing: SizingSuccess, document: NormalizedDoc, f
     '<h2>Sizing</h2><div class="figures">',
     ...c.figures.map((s) => htmlTable(['quantity', 'value', 'unit'], s.rows.map((r) => [r.label, r.value, r.unit]), s.title)),
     '</div>',
-    `<p><strong>Bound by:</strong></p><ul>${c.boundBy.map((b) => `<li>${esc(b)}</li>`).join('')}</ul>`,
+    `<p><strong>What set the size:</strong></p><ul>${c.boundBy.map((b) => `<li>${esc(b)}</li>`).join('')}</ul>`,
     `<p><strong>Warnings:</strong></p><ul>${(c.warnings.length ? c.warnings : ['none']).map((w) => `<li>${esc(w)}</li>`).join('')}</ul>`,
     `<h2>${esc(c.bom.title)}</h2>`,
     htmlTable(c.bom.head, c.bom.rows),
@@ -328,6 +340,9 @@ export function buildSheetHtml(sizing: SizingSuccess, document: NormalizedDoc, f
     ...c.steps.map((step) => `<li>${esc(step)}</li>`),
     '</ol>',
     ...(c.standSteps.length ? ['<h2>Seal test with the stand</h2><ol>', ...c.standSteps.map((step) => `<li>${esc(step)}</li>`), '</ol>'] : []),
+    '<h2>Words on this sheet</h2><ul>',
+    ...c.words.map((w) => `<li>${esc(w)}</li>`),
+    '</ul>',
   ].join('\n');
   return `<!doctype html>\n<html lang="en">\n<head>\n<meta charset="utf-8">\n<title>${esc(c.title)}</title>\n<style>${style}</style>\n</head>\n<body>\n${body}\n</body>\n</html>\n`;
 }

@@ -38,13 +38,13 @@ export function sizingSections(result: SizingSuccess): Section[] {
   const fill = (minutes: number | null) => (minutes === null ? [] : [minutes]);
   return [
     {
-      title: 'Closing force for a tight seal (float on pad)',
+      title: 'Push needed to shut tight (float on the seal pad)',
       rows: [
-        row(`at highest head ${fixed(headMaxM, 2)} m (${fixed(pressure.atHeadMaxKPa, 1)} kPa)`, fixed(cf.atHeadMaxN, 3), 'N'),
-        row(`at lowest head ${fixed(headMinM, 2)} m (${fixed(pressure.atHeadMinKPa, 1)} kPa)`, fixed(cf.atHeadMinN, 3), 'N'),
-        row(cf.fromCalibration ? 'seating force (bench calibration fit)' : 'seating force (pad on the lip, no pressure)', fixed(cf.seatN, 3), 'N'),
+        row(`tank full, ${fixed(headMaxM, 2)} m of head (${fixed(pressure.atHeadMaxKPa, 1)} kPa)`, fixed(cf.atHeadMaxN, 3), 'N'),
+        row(`tank low, ${fixed(headMinM, 2)} m of head (${fixed(pressure.atHeadMinKPa, 1)} kPa)`, fixed(cf.atHeadMinN, 3), 'N'),
+        row(cf.fromCalibration ? 'seating push (fitted to your bench points)' : 'seating push (pad on the nozzle lip, no pressure)', fixed(cf.seatN, 3), 'N'),
         row(
-          cf.fromCalibration ? 'pressure area (bench calibration fit)' : 'pressure area (gasket-factor form)',
+          cf.fromCalibration ? 'area the water pushes on (fitted to your bench points)' : 'area the water pushes on (gasket-factor form)',
           `${fixed(cf.modelAreaMm2, 1)} (d ${fixed(cf.equivalentSealDiameterMm, 2)} mm)`,
           'mm2',
         ),
@@ -53,11 +53,11 @@ export function sizingSections(result: SizingSuccess): Section[] {
     {
       title: 'Seal pad',
       rows: [
-        row(`pad${seal.padChosen ? ' (chosen for this design)' : ''}`, seal.padMaterial),
+        row(`seal pad${seal.padChosen ? ' (chosen for this design)' : ''}`, seal.padMaterial),
         row('stiffness (compressive modulus)', fixed(seal.padStiffnessKpa, 0), 'kPa'),
-        row('squeeze at the tight seal, highest / lowest head', `${fixed(seal.indentationMm, 2)} (${percent(seal.strainAtSeal)} %) / ${fixed(seal.indentationAtHeadMinMm, 2)}`, 'mm'),
-        row('hard stop takes the push from', fixed(seal.stopIndentationMm, 2), 'mm'),
-        row('worst squeeze in service (empty tank, flooded)', percent(seal.worstStrain), '%'),
+        row('pad squeeze when shut, tank full / tank low', `${fixed(seal.indentationMm, 2)} (${percent(seal.strainAtSeal)} %) / ${fixed(seal.indentationAtHeadMinMm, 2)}`, 'mm'),
+        row('a hard stop takes the push from a pad squeeze of', fixed(seal.stopIndentationMm, 2), 'mm'),
+        row('most pad squeeze in use (empty tank, flooded)', percent(seal.worstStrain), '%'),
       ],
     },
     {
@@ -68,17 +68,17 @@ export function sizingSections(result: SizingSuccess): Section[] {
         row('displaced volume, fully submerged', fixed(fl.volumeMm3 / 1000, 1), 'cm3'),
         row('mass with pad', fixed(fl.massG, 1), 'g'),
         row('lift when fully submerged', fixed(fl.availableForceN, 3), 'N'),
-        row('reserve (lift / force at highest head)', fixed(fl.reserve, 2), 'x'),
-        row('depth at seal, highest / lowest head', `${fixed(fl.sealDepthAtHeadMaxMm, 1)} / ${fixed(fl.sealDepthAtHeadMinMm, 1)}`, 'mm'),
+        row('spare lift (lift / push needed at tank full)', fixed(fl.reserve, 2), 'x'),
+        row('depth in the water when shut, tank full / tank low', `${fixed(fl.sealDepthAtHeadMaxMm, 1)} / ${fixed(fl.sealDepthAtHeadMinMm, 1)}`, 'mm'),
         row('shell', fixed(fl.shellMm, 2), 'mm'),
-        row('water it can take in and still shut at full tank', fixed(fl.leakToleranceMl, 1), 'mL'),
-        row('shut-off rise per mL taken in', fixed(fl.levelRisePerMlMm, 2), 'mm'),
+        row('water it can take in and still shut with the tank full', fixed(fl.leakToleranceMl, 1), 'mL'),
+        row('rise of the shut-tight level per mL taken in', fixed(fl.levelRisePerMlMm, 2), 'mm'),
       ],
     },
     {
       title: 'Housing',
       rows: [
-        row('bore', fixed(housing.boreMm, 1), 'mm'),
+        row('bore (inside, where the float moves)', fixed(housing.boreMm, 1), 'mm'),
         row('outer diameter (foot)', `${fixed(housing.outerDiameterMm, 1)} (${fixed(housing.footDiameterMm, 1)})`, 'mm'),
         row('height', fixed(housing.heightMm, 1), 'mm'),
         row('wall', fixed(housing.wallMm, 2), 'mm'),
@@ -89,36 +89,36 @@ export function sizingSections(result: SizingSuccess): Section[] {
       title: 'Nozzle and pin',
       rows: [
         row('nozzle tip above the base', fixed(nozzle.tipHeightMm, 1), 'mm'),
-        row('travel (at least)', `${fixed(nozzle.travelMm, 2)} (${fixed(nozzle.minimumTravelMm, 2)})`, 'mm'),
-        row('orifice / lip diameter', `${fixed(nozzle.orificeMm, 2)} / ${fixed(nozzle.sealDiameterMm, 2)}`, 'mm'),
+        row("float's room to move (at least)", `${fixed(nozzle.travelMm, 2)} (${fixed(nozzle.minimumTravelMm, 2)})`, 'mm'),
+        row('nozzle hole / nozzle lip, across', `${fixed(nozzle.orificeMm, 2)} / ${fixed(nozzle.sealDiameterMm, 2)}`, 'mm'),
         row('retainer pin top above the base', fixed(pin.topHeightMm, 1), 'mm'),
       ],
     },
     {
       title: 'Levels (water depth above the container floor)',
       rows: [
-        row('target', fixed(levels.targetMm, 1), 'mm'),
-        row('shuts off at highest head', fixed(levels.shutOffAtHeadMaxMm, 1), 'mm'),
-        row('shuts off at lowest head', fixed(levels.shutOffAtHeadMinMm, 1), 'mm'),
-        row('float lifts off the pin', fixed(levels.liftOffMm, 1), 'mm'),
-        row('pad first touches the lip', fixed(levels.firstTouchMm, 1), 'mm'),
-        row('lowest target this float can reach', fixed(levels.minimumReachableMm, 1), 'mm'),
+        row('water depth to hold', fixed(levels.targetMm, 1), 'mm'),
+        row('shut tight, tank full', fixed(levels.shutOffAtHeadMaxMm, 1), 'mm'),
+        row('shut tight, tank low', fixed(levels.shutOffAtHeadMinMm, 1), 'mm'),
+        row('float lifts off the retainer pin', fixed(levels.liftOffMm, 1), 'mm'),
+        row('seal pad first touches the nozzle lip', fixed(levels.firstTouchMm, 1), 'mm'),
+        row('shallowest water depth this float can hold', fixed(levels.minimumReachableMm, 1), 'mm'),
         ...(levels.overflowMm === null ? [] : [row('container overflow', fixed(levels.overflowMm, 1), 'mm')]),
       ],
     },
     {
-      title: 'The level it holds in use (water depth; full tank / low tank)',
+      title: 'The level it holds in use (water depth; tank full / tank low)',
       rows: [
-        row('throttling starts (pad first touches the lip)', `${fixed(levels.throttleStartMm, 1)} / ${fixed(levels.lowTank.throttleStartMm, 1)}`, 'mm'),
+        row('throttle band starts (seal pad first touches the nozzle lip)', `${fixed(levels.throttleStartMm, 1)} / ${fixed(levels.lowTank.throttleStartMm, 1)}`, 'mm'),
         row('flow down to half', `${fixed(levels.flow50Mm, 1)} / ${fixed(levels.lowTank.flow50Mm, 1)}`, 'mm'),
         row('flow down to a tenth', `${fixed(levels.flow10Mm, 1)} / ${fixed(levels.lowTank.flow10Mm, 1)}`, 'mm'),
         row('flow down to a hundredth', `${fixed(levels.flow1Mm, 1)} / ${fixed(levels.lowTank.flow1Mm, 1)}`, 'mm'),
         row(`held while the plants drink ${fixed(result.inputs.demandLpd, 1)} L/day`, `${fixed(levels.heldAtDemandMm, 1)} / ${fixed(levels.heldAtDemandLowTankMm, 1)}`, 'mm'),
-        row('tight shut-off (the highest it rises)', `${fixed(levels.shutOffAtHeadMaxMm, 1)} / ${fixed(levels.shutOffAtHeadMinMm, 1)}`, 'mm'),
+        row('shut tight (the highest it rises)', `${fixed(levels.shutOffAtHeadMaxMm, 1)} / ${fixed(levels.shutOffAtHeadMinMm, 1)}`, 'mm'),
         ...(result.fill.timeToHeldMin === null || result.fill.fromLevelMm === null || result.fill.toLevelMm === null
           ? []
           : [row(
-              `time to fill the reservoir rise, ${fixed(result.fill.fromLevelMm, 1)} to ${fixed(result.fill.toLevelMm, 1)} mm, with the plants drinking and the flow at the slow end of its range`,
+              `time to fill the refill depth, ${fixed(result.fill.fromLevelMm, 1)} to ${fixed(result.fill.toLevelMm, 1)} mm, with the plants drinking and the flow at the slow end of its range`,
               fixed(result.fill.timeToHeldMin, 0),
               'min',
             )]),
@@ -127,23 +127,23 @@ export function sizingSections(result: SizingSuccess): Section[] {
     {
       title: 'Flow with the valve wide open',
       rows: [
-        row(`at highest head (Re ${fixed(flow.reynoldsAtHeadMax, 0)}, ${flow.regimeAtHeadMax})`, fixed(flow.atHeadMaxLph, 1), 'L/h'),
-        row('at highest head, likely range (bore printed 0.2 mm small to as drawn)', `${fixed(flow.atHeadMaxLowLph, 1)} to ${fixed(flow.atHeadMaxHighLph, 1)}`, 'L/h'),
+        row(`tank full (Re ${fixed(flow.reynoldsAtHeadMax, 0)}, ${flow.regimeAtHeadMax})`, fixed(flow.atHeadMaxLph, 1), 'L/h'),
+        row('tank full, likely range (nozzle hole printed 0.2 mm small to as drawn)', `${fixed(flow.atHeadMaxLowLph, 1)} to ${fixed(flow.atHeadMaxHighLph, 1)}`, 'L/h'),
         row(
-          `bore ${fixed(nozzle.orificeMm, 2)} mm through ${fixed(flow.boreLengthMm, 1)} mm taken as`,
+          `nozzle hole ${fixed(nozzle.orificeMm, 2)} mm across and ${fixed(flow.boreLengthMm, 1)} mm long, taken as`,
           flow.boreModel === 'short-tube' ? 'a short tube' : 'a sharp orifice',
         ),
-        row(`at lowest head (Re ${fixed(flow.reynoldsAtHeadMin, 0)})`, fixed(flow.atHeadMinLph, 1), 'L/h'),
-        ...fill(flow.fillTimeAtHeadMaxMin).map((m) => row('time to fill the reservoir rise if the valve stayed wide open and nothing drank, highest head', fixed(m, 1), 'min')),
-        ...fill(flow.fillTimeAtHeadMinMin).map((m) => row('the same, lowest head', fixed(m, 1), 'min')),
+        row(`tank low (Re ${fixed(flow.reynoldsAtHeadMin, 0)})`, fixed(flow.atHeadMinLph, 1), 'L/h'),
+        ...fill(flow.fillTimeAtHeadMaxMin).map((m) => row('time to fill the refill depth if the valve stayed wide open and nothing drank, tank full', fixed(m, 1), 'min')),
+        ...fill(flow.fillTimeAtHeadMinMin).map((m) => row('the same, tank low', fixed(m, 1), 'min')),
       ],
     },
     {
-      title: 'Drain and vents',
+      title: 'Drain slots and air vents',
       rows: [
-        row('drain area needed (at the high end of the flow)', fixed(drain.requiredAreaMm2, 1), 'mm2'),
-        row(`drain area provided (${drain.notchCount} notches)`, fixed(drain.providedAreaMm2, 1), 'mm2'),
-        row(`vents (${vents.count} x ${fixed(vents.diameterMm, 1)} mm)`, fixed(vents.areaMm2, 1), 'mm2'),
+        row('drain slot area needed (at the high end of the flow)', fixed(drain.requiredAreaMm2, 1), 'mm2'),
+        row(`drain slot area provided (${drain.notchCount} slots)`, fixed(drain.providedAreaMm2, 1), 'mm2'),
+        row(`air vents (${vents.count} x ${fixed(vents.diameterMm, 1)} mm)`, fixed(vents.areaMm2, 1), 'mm2'),
       ],
     },
     {
@@ -158,8 +158,8 @@ export function sizingSections(result: SizingSuccess): Section[] {
     {
       title: 'Tilt',
       rows: [
-        row('largest float tilt in the bore', fixed(tilt.maxAngleDeg, 1), 'deg'),
-        row(`gap at the lip when tilted (limit ${fixed(halfIndentMm, 2)})`, fixed(tilt.lipGapMm, 2), 'mm'),
+        row('largest float tilt in the housing', fixed(tilt.maxAngleDeg, 1), 'deg'),
+        row(`gap at the nozzle lip when tilted (at most half the pad squeeze, ${fixed(halfIndentMm, 2)})`, fixed(tilt.lipGapMm, 2), 'mm'),
       ],
     },
     {
@@ -167,7 +167,7 @@ export function sizingSections(result: SizingSuccess): Section[] {
       rows: [
         row(`total (${result.inputs.materialName})`, fixed(mass.totalG, 1), 'g'),
         row('filament (1.75 mm)', fixed(mass.filamentM, 1), 'm'),
-        row('housing / float / nozzle / pin', [mass.byPart.housing, mass.byPart.float, mass.byPart.nozzle, mass.byPart.pin].map((g) => fixed(g, 1)).join(' / '), 'g'),
+        row('housing / float / nozzle / retainer pin', [mass.byPart.housing, mass.byPart.float, mass.byPart.nozzle, mass.byPart.pin].map((g) => fixed(g, 1)).join(' / '), 'g'),
         row(`seal pad (${seal.padMaterial}, not printed)`, fixed(mass.byPart.pad, 2), 'g'),
       ],
     },
@@ -203,10 +203,10 @@ export function wrap(text: string, width = 78, indent = '    '): string {
   return lines.join('\n');
 }
 
-/** The constraints that bound the design, in words. */
+/** What set the size, in words (the rule codes stay in the JSON output). */
 export function boundByLines(boundBy: readonly string[]): string[] {
   const text = CONSTRAINT_TEXT as Record<string, string>;
-  return boundBy.map((code) => `  - ${wrap(`${code}: ${text[code] ?? code}`, 76)}`);
+  return boundBy.map((code) => `  - ${wrap(text[code] ?? code, 76)}`);
 }
 
 function warningLines(warnings: readonly Warning[]): string[] {
@@ -221,7 +221,7 @@ export function formatCautions(): string {
 /** A sized design as text: heading, tables, what bound it, warnings, then the cautions. */
 export function formatSizingText(result: SizingSuccess, heading?: string): string {
   const parts = [heading ? `${heading}\n` : '', renderSections(sizingSections(result))];
-  parts.push(['Bound by', ...boundByLines(result.boundBy), ''].join('\n'));
+  parts.push(['What set the size', ...boundByLines(result.boundBy), ''].join('\n'));
   parts.push(['Warnings', ...(result.warnings.length ? warningLines(result.warnings) : ['  none']), ''].join('\n'));
   parts.push(formatCautions());
   return parts.join('\n');

@@ -47,7 +47,7 @@ export const GLOSSARY = {
   'nozzle-hole': {
     name: 'nozzle hole',
     trade: 'orifice',
-    explain: 'The hole through the nozzle that the water runs through (the trade calls it the orifice). A wider hole fills faster but needs a bigger float to shut.',
+    explain: 'The hole through the nozzle that the water runs through. A wider hole fills faster but needs a bigger float to shut.',
   },
   'nozzle-lip': {
     name: 'nozzle lip',
@@ -117,4 +117,12 @@ export function termName(key: TermKey, capital = false): string {
 export function termLine(key: TermKey): string {
   const term: Term = GLOSSARY[key];
   return `${termName(key, true)}${term.trade ? ` (${term.trade})` : ''}: ${term.explain}`;
+}
+
+/**
+ * The glossary words a text uses (whole words, any case), in glossary order: for a list of the words a
+ * sheet or report uses, with their explanations.
+ */
+export function termsUsedIn(text: string): TermKey[] {
+  return (Object.keys(GLOSSARY) as TermKey[]).filter((key) => new RegExp(`\\b${GLOSSARY[key].name.replace(/[-]/g, '\\-')}\\b`, 'i').test(text));
 }

@@ -119,30 +119,30 @@ const LOW_PRESSURE_NOTE =
 /** Range and wording of each field (limits in the field's unit). */
 export const FIELD_SPECS = {
   headMax: {
-    unit: 'm', label: 'the highest supply head (tank water surface above the nozzle tip)',
+    unit: 'm', label: "the head with the tank full (the tank's water surface above the nozzle tip)",
     min: 0, minExclusive: true, max: HEAD_CAP_M, note: LOW_PRESSURE_NOTE, example: '2.2 m',
   },
-  headMin: { unit: 'm', label: 'the lowest supply head', min: 0, minExclusive: true, max: HEAD_CAP_M, note: LOW_PRESSURE_NOTE },
-  tubeInnerDiameter: { unit: 'mm', label: 'the supply tube inner diameter', min: 1, max: 25 },
-  tubeLength: { unit: 'm', label: 'the supply tube length', min: 0, max: 100 },
-  target: { unit: 'mm', label: 'the target level (water depth above the container floor)', min: 5, max: 300, example: '40 mm' },
+  headMin: { unit: 'm', label: 'the head with the tank low', min: 0, minExclusive: true, max: HEAD_CAP_M, note: LOW_PRESSURE_NOTE },
+  tubeInnerDiameter: { unit: 'mm', label: "the feed tube's inside width", min: 1, max: 25 },
+  tubeLength: { unit: 'm', label: "the feed tube's length", min: 0, max: 100 },
+  target: { unit: 'mm', label: 'the water depth to hold (above the container floor)', min: 5, max: 300, example: '40 mm' },
   liquidDensity: { unit: 'kg/m3', label: 'the liquid density', min: 900, max: 1300 },
   viscosity: { unit: 'mPa s', label: 'the liquid viscosity', min: 0.2, max: 100 },
-  orifice: { unit: 'mm', label: 'the nozzle orifice', min: 0.5, max: 6 },
-  sealDiameter: { unit: 'mm', label: 'the seal diameter (outer diameter of the nozzle lip)', min: 1, max: 30 },
+  orifice: { unit: 'mm', label: 'the nozzle hole', min: 0.5, max: 6 },
+  sealDiameter: { unit: 'mm', label: "the nozzle lip's outside width", min: 1, max: 30 },
   preload: { unit: 'N', label: 'the pad preload', min: 0, max: 5 },
   padThickness: { unit: 'mm', label: 'the pad thickness', min: 0.5, max: 10 },
-  indentation: { unit: 'mm', label: 'the pad indentation at seal', min: 0.05, max: 5 },
+  indentation: { unit: 'mm', label: 'the pad squeeze when shut', min: 0.05, max: 5 },
   padDensity: { unit: 'g/cm3', label: 'the pad density', min: 0.05, max: 3 },
-  calibrationHead: { unit: 'm', label: 'a calibration head', min: 0.01, max: HEAD_CAP_M, note: LOW_PRESSURE_NOTE },
-  calibrationMass: { unit: 'g', label: 'a calibration mass', min: 0.1, max: 5000 },
-  materialDensity: { unit: 'g/cm3', label: 'the material density', min: 0.5, max: 3 },
-  wall: { unit: 'mm', label: 'the wall thickness', min: 0, minExclusive: true, max: 10 },
+  calibrationHead: { unit: 'm', label: 'the head of a bench point', min: 0.01, max: HEAD_CAP_M, note: LOW_PRESSURE_NOTE },
+  calibrationMass: { unit: 'g', label: 'the weight of a bench point', min: 0.1, max: 5000 },
+  materialDensity: { unit: 'g/cm3', label: 'the filament density', min: 0.5, max: 3 },
+  wall: { unit: 'mm', label: 'the housing wall', min: 0, minExclusive: true, max: 10 },
   lineWidth: { unit: 'mm', label: 'the line width', min: 0.2, max: 1.2 },
-  maxOuterDiameter: { unit: 'mm', label: 'the largest outer diameter', min: 20, max: 250 },
-  reserve: { unit: '', label: 'the reserve (float lift over the force needed)', min: 1, max: 5 },
-  reservoirArea: { unit: 'm2', label: 'the reservoir area', min: 1e-4, max: 100 },
-  reservoirRise: { unit: 'mm', label: 'the reservoir rise', min: 1, max: 1000 },
+  maxOuterDiameter: { unit: 'mm', label: 'the widest valve that fits (across the housing foot)', min: 20, max: 250 },
+  reserve: { unit: '', label: "the spare lift (the float's lift over the push needed to shut)", min: 1, max: 5 },
+  reservoirArea: { unit: 'm2', label: 'the water surface area', min: 1e-4, max: 100 },
+  reservoirRise: { unit: 'mm', label: 'the refill depth', min: 1, max: 1000 },
   overflow: { unit: 'mm', label: 'the overflow height (above the container floor)', min: 10, max: 2000, example: '60 mm' },
   demand: { unit: 'L/day', label: "the plants' peak use (container demand)", min: 0, max: 5000, example: '3 L/day' },
   bedSide: { unit: 'mm', label: 'a bed side', min: 50, max: 1000, example: '220 mm' },
@@ -400,14 +400,14 @@ export const designSchema = section(documentShape).transform((doc, ctx): ParsedD
       if (!lowResult.ok) fail(ctx, ['supply', 'headMin'], supply.headMin.raw, lowResult.message);
       else if (lowResult.measured.si > headMaxResult.measured.si * (1 + 1e-12)) {
         fail(ctx, ['supply', 'headMin'], supply.headMin.raw,
-          `${lowResult.measured.shown} is above supply.headMax (${normalizedText(headMaxResult.measured.si, 'm')}); the lowest head must be more than 0 m and at most the highest head.`);
+          `${lowResult.measured.shown} is above supply.headMax (${normalizedText(headMaxResult.measured.si, 'm')}); the head with the tank low must be more than 0 m and at most the head with the tank full.`);
       } else headMin = lowResult.measured;
     }
   }
 
   if (nozzle.orifice.si >= nozzle.sealDiameter.si) {
     fail(ctx, ['nozzle', 'orifice'], undefined,
-      `${nozzle.orifice.shown} is not smaller than nozzle.sealDiameter (${normalizedText(nozzle.sealDiameter.si, 'mm')}); the orifice must be narrower than the lip that seals around it.`);
+      `${nozzle.orifice.shown} is not smaller than nozzle.sealDiameter (${normalizedText(nozzle.sealDiameter.si, 'mm')}); the nozzle hole must be narrower than the nozzle lip that seals around it.`);
   }
 
   const retiredFields = (['preload', 'indentation'] as const).filter((k) => seal[k] !== null).map((k) => `seal.${k}`);
@@ -434,7 +434,7 @@ export const designSchema = section(documentShape).transform((doc, ctx): ParsedD
   const calibrationComplete = calibration.length > 0 && calibration.length === (seal.calibration ?? []).length;
 
   const lineMm = fromSi(print.lineWidth.si, 'mm');
-  const wallSpec = { ...S.wall, min: 2 * lineMm, minExclusive: false, label: `the wall thickness (at least two ${formatNumber(lineMm)} mm line widths)` };
+  const wallSpec = { ...S.wall, min: 2 * lineMm, minExclusive: false, label: `the housing wall (at least two ${formatNumber(lineMm)} mm line widths)` };
   const wallProblem = checkRange(print.wall.si, print.wall.shown, wallSpec);
   if (wallProblem) fail(ctx, ['print', 'wall'], undefined, wallProblem);
 
@@ -442,7 +442,7 @@ export const designSchema = section(documentShape).transform((doc, ctx): ParsedD
     const missing = reservoir.area === null ? 'area' : 'rise';
     const other = missing === 'area' ? 'rise' : 'area';
     fail(ctx, ['reservoir', missing], undefined,
-      `missing; give reservoir.${missing} together with reservoir.${other} (both are needed for a fill time), or leave both out.`);
+      `missing; give reservoir.${missing} together with reservoir.${other} (both are needed for a refill time), or leave both out.`);
   }
 
   // the rim: the valve hangs from it, so it cannot hold a level above it; a rim mount needs one

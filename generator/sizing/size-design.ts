@@ -39,20 +39,20 @@ function nozzleProblems(b: DesignBasis): { reasons: Warning[]; waysOut: WayOut[]
     const minTube = b.nozzle.orificeMm + 4 * line;
     reasons.push({
       code: 'barb-wall',
-      message: `A ${fmt(b.nozzle.orificeMm, 2)} mm bore through a barb for a ${fmt(b.nozzle.barb.rootDiameterMm, 2)} mm tube leaves a wall thinner than two print lines (${fmt(2 * line, 2)} mm).`,
+      message: `A ${fmt(b.nozzle.orificeMm, 2)} mm nozzle hole through the barb for a ${fmt(b.nozzle.barb.rootDiameterMm, 2)} mm feed tube leaves a wall thinner than two print lines (${fmt(2 * line, 2)} mm).`,
     });
-    waysOut.push({ field: 'nozzle.orifice', value: `${fmt(Math.floor(maxBore * 10) / 10, 1)} mm`, message: 'a narrower nozzle bore' });
-    waysOut.push({ field: 'supply.tubeInnerDiameter', value: `${fmt(Math.ceil(minTube * 10) / 10, 1)} mm`, message: 'a wider supply tube' });
+    waysOut.push({ field: 'nozzle.orifice', value: `${fmt(Math.floor(maxBore * 10) / 10, 1)} mm`, message: 'a narrower nozzle hole' });
+    waysOut.push({ field: 'supply.tubeInnerDiameter', value: `${fmt(Math.ceil(minTube * 10) / 10, 1)} mm`, message: 'a wider feed tube' });
   }
   if ((inp.sealDiameterM - inp.orificeM) * 1e3 / 2 < 2 * line - 1e-9) {
     reasons.push({
       code: 'lip-wall',
-      message: `A ${fmt(inp.sealDiameterM * 1e3, 2)} mm lip around a ${fmt(inp.orificeM * 1e3, 2)} mm bore leaves a sealing ring thinner than two print lines.`,
+      message: `A ${fmt(inp.sealDiameterM * 1e3, 2)} mm nozzle lip around a ${fmt(inp.orificeM * 1e3, 2)} mm nozzle hole leaves a sealing ring thinner than two print lines.`,
     });
     waysOut.push({
       field: 'nozzle.sealDiameter',
       value: `${fmt(Math.ceil((inp.orificeM * 1e3 + 4 * line) * 10) / 10, 1)} mm`,
-      message: 'a wider lip (it needs a little more float)',
+      message: 'a wider nozzle lip (it needs a little more float)',
     });
   }
   return { reasons, waysOut };
@@ -131,14 +131,14 @@ function failure(b: DesignBasis, outcome: ReturnType<typeof searchSize>): Sizing
   const targetMm = inp.targetLevelM * 1e3;
   if (Number.isFinite(outcome.lowestReachableMm) && outcome.lowestReachableMm > targetMm) {
     const v = Math.ceil(outcome.lowestReachableMm * 2) / 2;
-    waysOut.push({ field: 'level.target', value: `${fmt(v)} mm`, message: `a target level of at least ${fmt(v)} mm at this head` });
+    waysOut.push({ field: 'level.target', value: `${fmt(v)} mm`, message: `a water depth to hold of at least ${fmt(v)} mm at this head` });
   }
   if (works({ ...inp, headMaxM: 0.01, headMinM: 0.01 })) {
     const h = largestWorking(0.01, inp.headMaxM, (x) => works({ ...inp, headMaxM: x, headMinM: Math.min(inp.headMinM, x) }), 0.005);
     const v = Math.floor(h * 100) / 100;
     // the lowest head may not stay above the highest: lowered with it when it would
     const also = v < inp.headMinM ? [{ field: 'supply.headMin', value: `${fmt(v, 2)} m` }] : undefined;
-    waysOut.push({ field: 'supply.headMax', value: `${fmt(v, 2)} m`, message: `a tank no higher than ${fmt(v, 2)} m above the nozzle for this level`, ...(also ? { also } : {}) });
+    waysOut.push({ field: 'supply.headMax', value: `${fmt(v, 2)} m`, message: `tank full no higher than ${fmt(v, 2)} m above the nozzle for this water depth`, ...(also ? { also } : {}) });
   }
   if (!b.fromCalibration) {
     const line = inp.lineWidthM;
@@ -183,7 +183,7 @@ function failure(b: DesignBasis, outcome: ReturnType<typeof searchSize>): Sizing
     }
     if (pair) {
       const { level, foot } = pair;
-      const both = `a target level of at least ${fmt(level)} mm together with a housing foot of ${foot} mm across`;
+      const both = `a water depth to hold of at least ${fmt(level)} mm together with a housing foot of ${foot} mm across`;
       waysOut.push({ field: 'level.target', value: `${fmt(level)} mm`, message: both });
       waysOut.push({ field: 'limits.maxOuterDiameter', value: `${foot} mm`, message: both });
     }
@@ -203,13 +203,13 @@ function overflowFailure(inp: DesignInputs, shutOffMaxMm: number): SizingFailure
   const marginMm = OVERFLOW_MARGIN_M * 1e3;
   const reasons: Warning[] = [{
     code: 'overflow',
-    message: `At full tank the valve shuts tight at ${fmt(shutOffMaxMm)} mm, within ${fmt(marginMm, 0)} mm of the container's overflow at ${fmt(overflowMm)} mm: the container would spill before the valve shut.`,
+    message: `With the tank full the valve shuts tight at ${fmt(shutOffMaxMm)} mm, within ${fmt(marginMm, 0)} mm of the container's overflow at ${fmt(overflowMm)} mm: the container would spill before the valve shut.`,
   }];
   const waysOut: WayOut[] = [];
   // the shut-off at full tank is the target (the layout places the nozzle so); keep it the margin below the overflow
   const lower = Math.floor((overflowMm - marginMm - (shutOffMaxMm - inp.targetLevelM * 1e3)) * 2) / 2;
   if (lower >= 5 && works({ ...inp, targetLevelM: lower / 1e3, overflowM: null })) {
-    waysOut.push({ field: 'level.target', value: `${fmt(lower)} mm`, message: `a target level of at most ${fmt(lower)} mm` });
+    waysOut.push({ field: 'level.target', value: `${fmt(lower)} mm`, message: `a water depth to hold of at most ${fmt(lower)} mm` });
   }
   const higher = Math.ceil(shutOffMaxMm + marginMm);
   waysOut.push({ field: 'container.overflow', value: `${higher} mm`, message: `an overflow at least ${higher} mm above the container floor` });
@@ -222,7 +222,7 @@ function demandFailure(inp: DesignInputs, openLowTankLph: number): SizingFailure
   const canLpd = openLowTankLph * 24;
   const reasons: Warning[] = [{
     code: 'demand',
-    message: `container.demand: ${fmt(demandLpd, 1)} L/day is more than this valve gives wide open at the lowest tank level, ${fmt(canLpd, 1)} L/day (${fmt(openLowTankLph, 2)} L/h): the container would never fill.`,
+    message: `container.demand: ${fmt(demandLpd, 1)} L/day is more than this valve gives wide open with the tank low, ${fmt(canLpd, 1)} L/day (${fmt(openLowTankLph, 2)} L/h): the container would never fill.`,
   }];
   const waysOut: WayOut[] = [];
   const most = Math.floor(canLpd * 10) / 10;
@@ -252,7 +252,7 @@ function warningsFor(b: DesignBasis, c: Candidate, netWeightN: number, ballastG:
     });
   }
   if (lowFlow) {
-    w.push({ code: 'low-flow', message: 'At the lowest tank level the valve passes under 1 L/h: refilling will be slow.' });
+    w.push({ code: 'low-flow', message: 'With the tank low the valve passes under 1 L/h: refilling will be slow.' });
   }
   if (b.fromCalibration && (b.sealAreaM2 < b.boreAreaM2 || b.sealAreaM2 > 2 * circleArea(inp.sealDiameterM))) {
     w.push({
@@ -276,7 +276,7 @@ function warningsFor(b: DesignBasis, c: Candidate, netWeightN: number, ballastG:
     w.push({ code: 'calibration-scatter', message: 'The bench points scatter more than 5 % about the fitted line: repeat the measurements.' });
   }
   if (c.travelMm > b.preferredTravelMm + 1e-6) {
-    w.push({ code: 'long-travel', message: `The float drops ${fmt(c.travelMm)} mm to its pin when the reservoir runs dry.` });
+    w.push({ code: 'long-travel', message: `The float drops ${fmt(c.travelMm)} mm onto its retainer pin when the container runs dry.` });
   }
   return w;
 }

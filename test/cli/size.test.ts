@@ -226,12 +226,12 @@ describe('text output', () => {
   it('shows the tables, what bound the size, the warnings and every caution', async () => {
     const run = await floatwright('size', '--design', 'presets/rooftop-tubs.json');
     expect(run.status).toBe(0);
-    for (const heading of ['Closing force', 'Float', 'Housing', 'Nozzle', 'Levels', 'Flow', 'Drain', 'Hold-down', 'Tilt', 'Mass', 'Bound by', 'Warnings', 'Cautions']) {
+    for (const heading of ['Push needed to shut tight', 'Float', 'Housing', 'Nozzle', 'Levels', 'Flow', 'Drain slots', 'Hold-down', 'Tilt', 'Mass', 'What set the size', 'Warnings', 'Cautions']) {
       expect(run.stdout).toContain(heading);
     }
     const text = flat(run.stdout);
     for (const caution of CAUTIONS) expect(text).toContain(flat(`${caution.title}: ${caution.text}`));
-    expect(text).toMatch(/shuts off at highest head 45\.0 mm/);
+    expect(text).toMatch(/shut tight, tank full 45\.0 mm/);
   });
 
   it('answers --help for the program and the command', async () => {

@@ -13,10 +13,13 @@ import { join } from 'node:path';
 import type { Locator, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { GLOSSARY, type TermKey } from '../../generator/doc/glossary.ts';
+import { CONSTRAINT_TEXT } from '../../generator/sizing/layout/constraint-text.ts';
 import { SHOTS, haveChromium, serveWorkbench, visibleTexts, type ServedWorkbench } from './served-workbench.ts';
 
 /** A dotted document path as the CLI and the files write it: "supply.headMax", "seal.calibration.mass". */
 const DOCUMENT_PATH = /\b[a-z]+\.[a-zA-Z]+(\.[a-zA-Z]+)*\b/;
+/** The sizing's internal names of its size-setting rules ("reserve", "travel", "least-mass"), as whole words. */
+const RULE_NAMES = new RegExp(`\\b(${Object.keys(CONSTRAINT_TEXT).join('|')})\\b`, 'i');
 
 describe.skipIf(!haveChromium)('plain words on the valve page, in Chromium', () => {
   let served: ServedWorkbench;
@@ -51,15 +54,15 @@ describe.skipIf(!haveChromium)('plain words on the valve page, in Chromium', () 
     expect(await invalidCount(), `${value} is taken again`).toBe(0);
   }
 
-  /** Visible texts that hold a document path, with what was typed (empty: none). */
+  /** Visible texts that hold a document path or a rule's internal name, with what was typed (empty: none). */
   async function pathsOnScreen(what: string): Promise<string[]> {
-    return (await visibleTexts(page)).filter((t) => DOCUMENT_PATH.test(t)).map((t) => `${what}: ${t}`);
+    return (await visibleTexts(page)).filter((t) => DOCUMENT_PATH.test(t) || RULE_NAMES.test(t)).map((t) => `${what}: ${t}`);
   }
 
   /** All the messages under the boxes now. */
   const messages = () => page.locator('fw-design-form .msg').allTextContents();
 
-  it('names boxes by their labels after a bad value in every box, never by a document path', async () => {
+  it('names boxes by their labels after a bad value in every box, never by a document path or a rule\'s internal name', async () => {
     await page.goto(served.url);
     await page.waitForFunction(() => document.querySelector('fw-app')?.hasAttribute('data-preview-build-id'), null, { timeout: 30_000 });
     expect(await pathsOnScreen('on opening')).toEqual([]);

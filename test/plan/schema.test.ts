@@ -50,13 +50,13 @@ describe('plan document', () => {
     expect(fields).toContain('containers.1.floorElevation');
     expect(fields).toContain('design.print.wall');
     expect(fields.filter((f) => f === 'design.print.wall')).toHaveLength(1); // reported once, not per container
-    expect(errors.find((e) => e.field === 'containers.2.branch.innerDiameter')!.message).toMatch(/too low; the supply tube inner diameter must be from 1 mm to 25 mm/);
+    expect(errors.find((e) => e.field === 'containers.2.branch.innerDiameter')!.message).toMatch(/too low; the feed tube's inside width must be from 1 mm to 25 mm/);
     expect(errors.find((e) => e.field === 'containers.2.design.nozzle.orifice')!.message).toMatch(/9 mm/);
   });
 
   it('maps level.target back to the container', () => {
     const errors = errorsOf({ ...base, containers: [row('a', '0.5 m', { level: '900 mm' })] });
-    expect(errors).toEqual([{ field: 'containers.0.level', message: expect.stringMatching(/^"900 mm" is too high; the target level .* from 5 mm to 300 mm/) }]);
+    expect(errors).toEqual([{ field: 'containers.0.level', message: expect.stringMatching(/^"900 mm" is too high; the water depth to hold .* from 5 mm to 300 mm/) }]);
     expect(errorsOf({ ...base, containers: [{ name: 'a', floorElevation: '0.5 m' }] })[0]!.field).toBe('containers.0.level');
   });
 

@@ -74,7 +74,7 @@ describe('two writers into one folder', () => {
     // the design document and the build sheet in the folder are of one and the same design
     const design = JSON.parse(readFileSync(join(out, 'float-valve-design.json'), 'utf8'));
     const sheet = readFileSync(join(out, 'float-valve-build-sheet.md'), 'utf8');
-    expect(sheet).toContain(`target level ${design.level.target}`);
+    expect(sheet).toContain(`water depth to hold ${design.level.target}`);
     expect(readdirSync(out).filter((n) => n.startsWith('.') && n !== '.floatwright-output')).toEqual([]);
   }, 120_000);
 });
