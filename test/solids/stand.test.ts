@@ -135,7 +135,9 @@ describe('build --with-test-stand', () => {
     expect(json.testStand.plunger.label.text).toMatch(/^\d+(\.\d)?g$/);
     const sheet = readFileSync(json.files.find((f: string) => f.endsWith('build-sheet.md')), 'utf8');
     expect(sheet).toContain('Seal test with the stand');
-    expect(sheet).toContain('seal.calibration');
+    // where the points go, in the grower's words: the workbench's bench points, or the design file's "calibration" in "seal"
+    expect(sheet).toContain('as bench points in the workbench');
+    expect(sheet).toMatch(/"calibration\\?" inside \\?"seal/);
     expect(sheet).toContain(json.testStand.plunger.label.text);
     for (const c of CAUTIONS) expect(sheet).toContain(c.title);
   });
