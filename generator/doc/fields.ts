@@ -21,7 +21,7 @@ export const ROOT_FIELD = 'design';
 export interface QuantitySpec {
   /** the field's stated unit (symbol from the unit table; '' for plain numbers) */
   unit: string;
-  /** noun phrase for messages: "the target level" */
+  /** noun phrase for messages: "the water depth to hold" */
   label: string;
   min?: number;
   max?: number;

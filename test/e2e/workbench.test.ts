@@ -343,7 +343,7 @@ describe.skipIf(!haveChromium)('workbench in Chromium', () => {
     const [sheet] = await Promise.all([context.waitForEvent('page', { timeout: 30_000 }), page.getByRole('button', { name: 'Build sheet' }).click()]);
     await sheet.waitForFunction(() => document.body?.innerText.includes('Low pressure only'), null, { timeout: 20_000 });
     const sheetText = await sheet.evaluate(() => document.body.innerText);
-    expect(sheetText).toContain('target level 1.77 in');
+    expect(sheetText).toContain('water depth to hold 1.77 in');
     expect(sheetText).toContain('7.22 ft');
     await sheet.screenshot({ path: join(SHOTS, '18-build-sheet-imperial.png') });
     await sheet.close();
@@ -352,7 +352,7 @@ describe.skipIf(!haveChromium)('workbench in Chromium', () => {
     await page.getByLabel('Tank full: water height above the valve').fill('9.84');
     await page.getByLabel('Water depth to hold').fill('0.39');
     await page.waitForSelector('[data-way-out="level.target"]', { timeout: 20_000 });
-    expect(await page.locator('[data-way-out="level.target"]').textContent()).toMatch(/to \d+\.\d+ in: a target level of at least \d+\.\d+ in/);
+    expect(await page.locator('[data-way-out="level.target"]').textContent()).toMatch(/to \d+\.\d+ in: a water depth to hold of at least \d+\.\d+ in/);
     await shot('19-no-fit-imperial');
     const after = await buildId();
     await page.locator('[data-way-out="level.target"]').click();

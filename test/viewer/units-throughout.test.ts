@@ -38,7 +38,7 @@ describe('ways out in the box\'s unit', () => {
     expect(level).toMatchObject({ field: 'level.target', value: '35 mm' });
     const inches = wayOutInUnits(level, doc, 'imperial');
     expect(inches.value).toBe('1.38 in'); // 35 / 25.4 = 1.378 in
-    expect(inches.message).toBe('a target level of at least 1.38 in at this head');
+    expect(inches.message).toBe('a water depth to hold of at least 1.38 in at this head');
     expect(size(apply(doc, inches)).ok).toBe(true);
   });
 

@@ -69,7 +69,7 @@ async function run(argv: string[], io: Io): Promise<number> {
 
 export const command: Command = {
   name: 'size',
-  summary: 'size one valve for a tank height, a target level and a printer',
+  summary: 'size one valve for a head, a water depth to hold and a printer',
   help: HELP,
   run,
 };
