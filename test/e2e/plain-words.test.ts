@@ -166,8 +166,8 @@ describe.skipIf(!haveChromium)('plain words on the valve page, in Chromium', () 
       expect(await word.getAttribute('aria-describedby')).toBe(await tip.getAttribute('id'));
       expect((await tip.textContent())!.length).toBeGreaterThan(40);
     }
-    // keyboard: from the name box, Tab reaches "head" in the tank group's intro, and its explanation shows
-    await page.getByLabel('Name (used for the file names)').focus();
+    // keyboard: from the notes box (the last of "This valve"), Tab reaches "head" in the tank group's intro, and its explanation shows
+    await page.getByLabel('Notes (printed on the build sheet)').focus();
     await page.keyboard.press('Tab');
     expect(await focusedTerm()).toBe('head');
     await expect.poll(() => tooltipOf('head').isVisible()).toBe(true);

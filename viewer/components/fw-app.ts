@@ -11,6 +11,7 @@ import { messageInUnits } from '../lib/message-in-units.ts';
 import { wayOutInUnits } from '../lib/way-out-in-units.ts';
 import { ALL_FIELDS } from '../lib/form-fields.ts';
 import { presets, type Preset } from '../lib/presets.ts';
+import { presetCopy, type PresetCopy } from '../lib/preset-copy.ts';
 import { decodeDesign, designFromHash, shareUrl, unitsFromHash } from '../lib/share-link.ts';
 import { loadSaved, save } from '../lib/storage.ts';
 import { labelFor, problemsInLabels, shownMessage } from '../lib/field-label.ts';
@@ -153,7 +154,7 @@ export class FwApp extends LitElement {
   private client: BuildClient | null = null;
   private allPresets: Preset[] = presets();
   /** valve designs; the plan presets open on the bench page */
-  private presetList: Preset[] = this.allPresets.filter((p) => !isPlanDocument(p.doc));
+  private presetList: PresetCopy[] = this.allPresets.filter((p) => !isPlanDocument(p.doc)).map(presetCopy);
   private benchPresets: Preset[] = this.allPresets.filter((p) => isPlanDocument(p.doc));
   private typingTimer: ReturnType<typeof setTimeout> | null = null;
   private lastEditAt = 0;
@@ -362,7 +363,9 @@ export class FwApp extends LitElement {
     }
     const preset = this.presetList.find((p) => p.id === id);
     if (!preset) return;
-    this.replaceDoc(convertDocument(preset.doc, ALL_FIELDS, this.units), `Started from "${preset.title}".`, `the preset "${preset.title}"`);
+    // a copy: the preset's notes are said here once, never kept in the design (nor in its build sheet)
+    const about = preset.description ? ` ${preset.description}` : '';
+    this.replaceDoc(convertDocument(preset.doc, ALL_FIELDS, this.units), `Started from a copy of "${preset.title}".${about}`, `the preset "${preset.title}"`);
     this.presetId = id;
     if (this.page !== 'valve') void this.showPage('valve');
   }
@@ -491,7 +494,8 @@ export class FwApp extends LitElement {
   }
 
   override render() {
-    const formErrors = Object.entries(this.errors).filter(([k]) => !ALL_FIELDS.some((f) => f.path === k) && !k.startsWith('seal.calibration') && !k.startsWith('print.material'));
+    // problems the form does not show beside a box of its own
+    const formErrors = Object.entries(this.errors).filter(([k]) => !ALL_FIELDS.some((f) => f.path === k) && !k.startsWith('seal.calibration') && !k.startsWith('print.material') && k !== 'name' && k !== 'notes');
     const good = this.lastGood;
     const blocked = this.exportBlock();
     const outOfDate = blocked !== null && good !== null;

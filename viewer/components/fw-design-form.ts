@@ -1,5 +1,6 @@
 import { LitElement, css, html, nothing } from 'lit';
 import { customElement, property } from 'lit/decorators.js';
+import { MAX_NOTES_LENGTH } from '../../generator/doc/schema.ts';
 import { materialNames } from '../../generator/sizing/materials.ts';
 import { AUTO_PAD, findPad, padNames } from '../../generator/sizing/seal/pads.ts';
 import { getAt, type Doc } from '../lib/doc-path.ts';
@@ -36,6 +37,7 @@ export class FwDesignForm extends LitElement {
       .label-row { display: flex; align-items: baseline; }
       .label-row label { display: inline; }
       .box { display: flex; align-items: center; gap: 0.35rem; }
+      textarea { font: inherit; width: 100%; box-sizing: border-box; padding: 0.25rem 0.4rem; border: 1px solid #b9b3a0; border-radius: 5px; resize: vertical; }
       input, select { font: inherit; padding: 0.25rem 0.4rem; border: 1px solid #b9b3a0; border-radius: 5px; width: 8.5rem; background: #fff; }
       .unit { color: var(--muted); min-width: 2.2rem; flex: none; white-space: nowrap; }
       .note { color: var(--muted); font-size: 0.8rem; }
@@ -185,6 +187,8 @@ export class FwDesignForm extends LitElement {
   override render() {
     const name = getAt(this.doc, 'name');
     const nameError = this.errors['name'];
+    const notes = getAt(this.doc, 'notes');
+    const notesError = this.errors['notes'];
     return html`<fieldset>
         <legend>This valve</legend>
         <div class="field ${nameError ? 'bad' : ''}">
@@ -193,6 +197,12 @@ export class FwDesignForm extends LitElement {
             aria-describedby="f-name-note f-name-msg" @input=${(e: InputEvent) => this.emit('name', (e.target as HTMLInputElement).value || undefined)} />
           <div class="note" id="f-name-note" data-file-stem>${`Files are named ${fileStem(name)}-…`}</div>
           <div class="msg" id="f-name-msg">${nameError ?? ''}</div>
+        </div>
+        <div class="field ${notesError ? 'bad' : ''}">
+          <label for="f-notes">Notes (printed on the build sheet)</label>
+          <textarea id="f-notes" name="notes" rows="3" maxlength=${MAX_NOTES_LENGTH} .value=${typeof notes === 'string' ? notes : ''}
+            aria-describedby="f-notes-msg" @input=${(e: InputEvent) => this.emit('notes', (e.target as HTMLTextAreaElement).value || undefined)}></textarea>
+          <div class="msg" id="f-notes-msg" role=${notesError ? 'alert' : nothing}>${notesError ?? ''}</div>
         </div>
       </fieldset>
       ${FIELD_GROUPS.map(
