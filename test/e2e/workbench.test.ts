@@ -109,6 +109,51 @@ describe.skipIf(!haveChromium)('workbench in Chromium', () => {
     await page.getByLabel('cut open').check();
   });
 
+  it('frames the view again after a large size change, not a small one; a drag turns it gently and never to a top view', async () => {
+    const view = page.locator('fw-valve-view');
+    const frames = async () => Number(await view.getAttribute('data-frames'));
+    const radius = async () => Number(await view.getAttribute('data-frame-radius'));
+    const polar = async () => Number(await view.getAttribute('data-polar-deg'));
+    const level = page.getByLabel('Water depth to hold');
+    await page.locator('button', { hasText: 'Reset view' }).click();
+    const framesBefore = await frames();
+    const radiusBefore = await radius();
+    // 45 -> 47 mm: the housing grows half a millimetre (sizing core), the view stays as the grower left it
+    let before = await buildId();
+    await level.fill('47');
+    await waitPreviewAfter(before);
+    expect(await frames()).toBe(framesBefore);
+    // 47 -> 100 mm: a housing 60 mm taller is framed again (camera-fit.ts: more than 15 % larger)
+    before = await buildId();
+    await level.fill('100');
+    await waitPreviewAfter(before);
+    expect(await frames()).toBe(framesBefore + 1);
+    expect(await radius()).toBeGreaterThan(radiusBefore * 1.15);
+    await page.locator('fw-valve-view').screenshot({ path: join(SHOTS, '20-reframed-taller.png') });
+    // a small drag (40 px down, on a view over 300 px tall) turns the camera by less than 30 degrees
+    const box = (await view.boundingBox())!;
+    const [cx, cy] = [box.x + box.width / 2, box.y + box.height / 2];
+    const start = await polar();
+    await page.mouse.move(cx, cy);
+    await page.mouse.down();
+    await page.mouse.move(cx, cy + 40, { steps: 5 });
+    await page.mouse.up();
+    const small = await polar();
+    expect(small).not.toBe(start);
+    expect(Math.abs(small - start)).toBeLessThan(30);
+    // a long drag stops 20 degrees short of straight above
+    await page.mouse.move(cx, cy - 100);
+    await page.mouse.down();
+    await page.mouse.move(cx, cy + 140, { steps: 8 });
+    await page.mouse.up();
+    expect(await polar()).toBeGreaterThanOrEqual(19.9);
+    await page.locator('button', { hasText: 'Reset view' }).click();
+    await expect.poll(polar).toBeCloseTo(65.5, 0); // the first view: acos(0.5 / |(0.45, -1, 0.5)|)
+    before = await buildId();
+    await level.fill('45');
+    await waitPreviewAfter(before);
+  });
+
   it('exports an STL that is a closed solid, and a zip of every part, named after the valve (accents dropped, Unicode NFKD)', async () => {
     const named = await buildId();
     await page.locator('#f-name').fill("Tomates d'été");

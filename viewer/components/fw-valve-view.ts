@@ -4,7 +4,13 @@ import * as THREE from 'three';
 import { OrbitControls } from 'three/examples/jsm/controls/OrbitControls.js';
 import type { SizingSuccess } from '../../generator/sizing/result.ts';
 import type { FloatPose, PartMeshes, PartTransforms, ShownPart } from '../worker/parts-contract.ts';
+import { ORBIT, fitBoxDistance, needsReframe, type Sphere, type Vec3 } from '../lib/camera-fit.ts';
+
+type Bounds = Sphere & { min: Vec3; max: Vec3 };
 import { shared } from './shared-styles.ts';
+
+/** the first view's direction from the valve: in front, a little to the right, from above */
+const FIRST_VIEW = new THREE.Vector3(0.45, -1, 0.5);
 
 export interface ViewOptions {
   pose: FloatPose;
@@ -101,7 +107,12 @@ export class FwValveView extends LitElement {
   private parts = new Map<ShownPart, THREE.Mesh>();
   private water: THREE.Mesh | null = null;
   private cut = new THREE.Plane(new THREE.Vector3(0, 1, 0), 0);
-  private framed = false;
+  /** the bounds and fitting distance the view was last framed to (null: never framed) */
+  private framedBounds: Bounds | null = null;
+  private framedDistance = 0;
+  /** frame again on the next draw (the parts were pulled apart or put back) */
+  private reframeWanted = false;
+  private frames = 0;
   private resizeObserver: ResizeObserver | null = null;
   private webglError = '';
 
@@ -124,10 +135,17 @@ export class FwValveView extends LitElement {
     sun.position.set(-150, -250, 300);
     this.scene.add(sun);
     this.controls = new OrbitControls(this.camera, this.renderer.domElement);
+    // gentle turning, never flipped to a top view by a small drag (camera-fit.ts)
+    this.controls.rotateSpeed = ORBIT.rotateSpeed;
+    this.controls.minPolarAngle = ORBIT.minPolarAngle;
+    this.controls.maxPolarAngle = ORBIT.maxPolarAngle;
     // keyboard: focus the view (Tab) and use the arrow keys to move it
     this.renderer.domElement.tabIndex = 0;
     this.controls.listenToKeyEvents(this.renderer.domElement);
-    this.controls.addEventListener('change', () => this.draw());
+    this.controls.addEventListener('change', () => {
+      this.dataset.polarDeg = THREE.MathUtils.radToDeg(this.controls!.getPolarAngle()).toFixed(1);
+      this.draw();
+    });
     this.resizeObserver = new ResizeObserver(() => this.resize());
     this.resizeObserver.observe(this.stage);
     this.resize();
@@ -167,7 +185,7 @@ export class FwValveView extends LitElement {
   override updated(changed: Map<string, unknown>): void {
     if (!this.renderer) return;
     const options = changed.get('options') as ViewOptions | undefined;
-    if (options && options.exploded !== this.options.exploded) this.framed = false;
+    if (options && options.exploded !== this.options.exploded) this.reframeWanted = true;
     this.syncScene(changed.has('meshes'));
   }
 
@@ -209,7 +227,7 @@ export class FwValveView extends LitElement {
     }
     this.placeParts();
     this.placeWater();
-    if (this.meshes && !this.framed) this.frame();
+    if (this.meshes) this.frameIfNeeded();
     this.draw();
     if (newMeshes && this.meshes) {
       this.dispatchEvent(new CustomEvent('preview-rendered', { detail: { buildId: this.buildId, at: performance.now() }, bubbles: true, composed: true }));
@@ -264,29 +282,57 @@ export class FwValveView extends LitElement {
     (this.water.material as THREE.Material).clippingPlanes = this.options.section ? [this.cut] : [];
   }
 
-  private frame(): void {
-    if (!this.controls || this.parts.size === 0) return;
+  /** The parts' bounding box and sphere as placed now. */
+  private bounds(): Bounds {
     const box = new THREE.Box3();
     for (const mesh of this.parts.values()) {
-      mesh.geometry.computeBoundingBox();
+      if (!mesh.geometry.boundingBox) mesh.geometry.computeBoundingBox();
       box.union(mesh.geometry.boundingBox!.clone().applyMatrix4(mesh.matrix));
     }
     const sphere = box.getBoundingSphere(new THREE.Sphere());
-    const d = sphere.radius / Math.sin(THREE.MathUtils.degToRad(this.camera.fov / 2)) * 0.72;
-    this.controls.target.copy(sphere.center);
-    const dir = new THREE.Vector3(0.45, -1, 0.5).normalize();
-    this.camera.position.copy(sphere.center).addScaledVector(dir, d);
+    return { center: [sphere.center.x, sphere.center.y, sphere.center.z], radius: sphere.radius, min: box.min.toArray(), max: box.max.toArray() };
+  }
+
+  /**
+   * Frame the parts on first sight; later only when they outgrow or shrink from the framed view (a size
+   * change, parts pulled apart), keeping the grower's direction and zoom.
+   */
+  private frameIfNeeded(): void {
+    if (!this.controls || this.parts.size === 0) return;
+    const now = this.bounds();
+    if (!this.framedBounds) this.frame(now, false);
+    else if (this.reframeWanted || needsReframe(this.framedBounds, now)) this.frame(now, true);
+    this.reframeWanted = false;
+  }
+
+  /** Put the camera so the parts fill the view: from the first view's direction, or (`keep`) the grower's, at the grower's zoom. */
+  private frame(bounds: Bounds, keep: boolean): void {
+    if (!this.controls) return;
+    const center = new THREE.Vector3(...bounds.center);
+    const offset = this.camera.position.clone().sub(this.controls.target);
+    const zoom = keep && this.framedDistance > 0 ? THREE.MathUtils.clamp(offset.length() / this.framedDistance, 0.3, 3) : 1;
+    const dir = keep && offset.lengthSq() > 0 ? offset.normalize() : FIRST_VIEW.clone().normalize();
+    // margin under 1: a round valve stands well inside its box's corners
+    const fit = fitBoxDistance(bounds.min, bounds.max, dir.toArray(), this.camera.up.toArray(), this.camera.fov, this.camera.aspect, 0.95);
+    const d = fit * zoom;
+    this.controls.target.copy(center);
+    this.camera.position.copy(center).addScaledVector(dir, d);
     this.camera.near = d / 50;
     this.camera.far = d * 50;
     this.camera.updateProjectionMatrix();
     this.controls.update();
-    this.framed = true;
+    this.framedBounds = bounds;
+    this.framedDistance = fit;
+    // for tests: how often the view was framed, and to what
+    this.dataset.frames = String(++this.frames);
+    this.dataset.frameRadius = bounds.radius.toFixed(1);
+    this.dataset.polarDeg = THREE.MathUtils.radToDeg(this.controls.getPolarAngle()).toFixed(1);
   }
 
   /** Put the camera back to its first view. */
   resetView(): void {
-    this.framed = false;
-    this.frame();
+    if (this.parts.size === 0) return;
+    this.frame(this.bounds(), false);
     this.draw();
   }
 
