@@ -13,6 +13,7 @@ import { OVERHANG_MIN_DEG } from '../sizing/constants.ts';
 import { FOOT_FLARE_DEG, PIN_HOLE_ROOF_DEG } from '../sizing/parts/housing-spec.ts';
 import { CAUTIONS } from './cautions.ts';
 import { termLine, termsUsedIn } from './glossary.ts';
+import { materialNotes } from './material-notes.ts';
 import { superscriptUnits } from './superscript-units.ts';
 import { markdownText } from './safe-text/markdown-text.ts';
 import type { NormalizedDoc } from './schema.ts';
@@ -189,6 +190,7 @@ function sheetContent(s: SizingSuccess, doc: NormalizedDoc, files: BuildSheetFil
   const printNotes = [
     `Material: ${material} (${f2(inp.materialDensityKgM3 / 1000)} g/cm3). The masses assume solid plastic.`,
     `Every fit has the same clearance, ${f2(P.printClearanceMm)} mm per side; the nozzle's crush ribs take up the printer's spread in the seat.`,
+    ...materialNotes(material).map((n) => `${n.title}. ${n.text} Basis: ${n.basis}`),
   ];
   if (!wall.whole) {
     printNotes.push(

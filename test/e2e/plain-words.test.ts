@@ -215,4 +215,35 @@ describe.skipIf(!haveChromium)('plain words on the valve page, in Chromium', () 
     expect(texts.filter((t) => /\b(mm|cm|m|in|ft)[23]\b/.test(t))).toEqual([]);
     await restore(area, old);
   });
+
+  it('says beside the filament menu what PLA, nylon and a flexible filament mean for a valve, each with its basis, at 1400 and 390 px', async () => {
+    await page.setViewportSize({ width: 1400, height: 900 });
+    const filament = page.getByLabel('Filament', { exact: true });
+    const note = (id: string) => page.locator(`[data-material-note="${id}"]`);
+    const before = await filament.inputValue();
+    for (const [material, id, title] of [
+      ['PLA', 'pla-warm-water', 'PLA softens in warm water.'],
+      ['PA12', 'nylon-takes-up-water', 'Nylon takes up water.'],
+      ['TPU 95A', 'flexible-no-float', 'A flexible filament cannot make a float.'],
+    ] as const) {
+      await filament.selectOption(material);
+      await expect.poll(() => note(id).isVisible()).toBe(true);
+      expect(await note(id).textContent()).toContain(title);
+      expect(await note(id).locator('.basis').textContent()).toMatch(/^Basis: .{60,}/);
+      expect(await pathsOnScreen(`filament ${material}`)).toEqual([]);
+      if (material === 'PLA') {
+        await note(id).scrollIntoViewIfNeeded();
+        await page.screenshot({ path: join(SHOTS, 'words-06-pla-note-1400.png') });
+        await page.setViewportSize({ width: 390, height: 844 });
+        await note(id).scrollIntoViewIfNeeded();
+        await page.screenshot({ path: join(SHOTS, 'words-07-pla-note-390.png') });
+        expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+        await page.setViewportSize({ width: 1400, height: 900 });
+      }
+    }
+    await filament.selectOption('PETG');
+    await expect.poll(() => page.locator('[data-material-note]').count()).toBe(0);
+    if (before !== 'PETG' && before !== '__other') await filament.selectOption(before);
+  });
 });
+

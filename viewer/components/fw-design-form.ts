@@ -8,6 +8,7 @@ import { FIELD_GROUPS } from '../lib/form-fields.ts';
 import { MATERIAL_DENSITY_FIELD, OTHER_FILAMENT, materialChoice, otherFilamentValue } from '../lib/material-choice.ts';
 import { fileStem } from '../../generator/doc/file-stem.ts';
 import { fieldDefault } from '../lib/field-default.ts';
+import { materialNotes } from '../../generator/doc/material-notes.ts';
 import { superscriptUnits } from '../../generator/doc/superscript-units.ts';
 import { labelFor } from '../lib/field-label.ts';
 import { markTerms } from '../lib/mark-terms.ts';
@@ -46,6 +47,8 @@ export class FwDesignForm extends LitElement {
       input::placeholder { color: #8d8a80; font-style: italic; }
       .field.bad input { border-color: var(--bad); background: var(--bad-soft); }
       .msg { color: var(--bad); font-size: 0.82rem; margin-top: 0.15rem; }
+      .material-note { margin: 0.4rem 0; padding: 0.3rem 0.5rem; border-left: 4px solid var(--warn); border-radius: 4px; background: var(--warn-soft); color: #4d3400; font-size: 0.82rem; }
+      .material-note .basis { margin-top: 0.2rem; color: var(--muted); font-size: 0.76rem; }
     `,
   ];
 
@@ -158,7 +161,7 @@ export class FwDesignForm extends LitElement {
     return html`<div class="field ${error ? 'bad' : ''}">
         <label for="f-print-material">Filament</label>
         <div class="box">
-          <select id="f-print-material" name="print.material" aria-invalid=${error ? 'true' : 'false'} aria-describedby="f-print-material-msg"
+          <select id="f-print-material" name="print.material" aria-invalid=${error ? 'true' : 'false'} aria-describedby="f-print-material-msg f-print-material-notes"
             @change=${(e: Event) => this.pickMaterial((e.target as HTMLSelectElement).value)}>
             ${materialNames().map((n) => html`<option value=${n}>${n}</option>`)}
             <option value=${OTHER_FILAMENT}>other filament…</option>
@@ -167,7 +170,21 @@ export class FwDesignForm extends LitElement {
         </div>
         <div class="msg" id="f-print-material-msg" role=${error ? 'alert' : nothing}>${error ?? ''}</div>
       </div>
-      ${choice.kind === 'other' ? this.renderOtherFilament() : nothing}`;
+      ${choice.kind === 'other' ? this.renderOtherFilament() : nothing}
+      ${this.renderMaterialNotes(choice.kind === 'unknown' ? choice.text : choice.name)}`;
+  }
+
+  /** What to know about the filament (PLA and warm water, nylon and water, flexible filament), each with its basis. */
+  private renderMaterialNotes(name: string) {
+    const notes = materialNotes(name);
+    return html`<div id="f-print-material-notes">
+      ${notes.map(
+        (n) => html`<div class="material-note" role="note" data-material-note=${n.id}>
+          <b>${n.title}.</b> ${n.text}
+          <div class="basis">Basis: ${n.basis}</div>
+        </div>`,
+      )}
+    </div>`;
   }
 
   /** Name and density of the grower's own filament (shown only for "other filament"). */
