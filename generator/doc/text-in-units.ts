@@ -16,9 +16,10 @@
  * 1 oz = 28.349523125 g, 1 lb = 0.45359237 kg, 1 psi = 6.894757 kPa,
  * 1 US gal = 3.785411784 L, 1 US fl oz = 29.5735295625 mL, 1 in3 = 16.387064 cm3; degrees
  * Fahrenheit = 1.8 x degrees Celsius + 32.
- * Rounding: shownNumber (the unit's everyday step, at least three significant digits).
+ * Rounding: shownNumber (the unit's everyday step, at least three significant digits), and no more
+ * than one significant digit beyond the number as written.
  */
-import { shownNumber } from './shown-number.ts';
+import { roundShown } from './shown-number.ts';
 
 export type TextUnits = 'metric' | 'imperial';
 
@@ -71,10 +72,16 @@ export function textInUnits(text: string, system: TextUnits): string {
   });
 }
 
-/** Every number in `text` converted (a percentage is left as it is). */
+/**
+ * Every number in `text` converted (a percentage is left as it is), rounded by shownNumber and to at most
+ * one significant digit more than it was written with (754 m is 2474 ft, not 2473.75 ft).
+ */
 function convertNumbers(text: string, rewrite: Rewrite): string {
   const unitKey = rewrite.to.replace(' a day', '/day').replace('²', '2');
-  return text.replace(/\d+(?:\.\d+)?(?!\d|\.\d|\s*%)/g, (n) => shownNumber(rewrite.convert(Number(n)), unitKey));
+  return text.replace(/\d+(?:\.\d+)?(?!\d|\.\d|\s*%)/g, (n) => {
+    const written = n.replace('.', '').replace(/^0+/, '').length;
+    return String(Number(roundShown(rewrite.convert(Number(n)), unitKey).toPrecision(Math.max(3, written + 1))));
+  });
 }
 
 /** A table row whose last two cells are a value and its unit ("<td>68.2 (30.6)</td><td>mm</td></tr>"). */

@@ -180,6 +180,12 @@ describe.skipIf(!haveChromium)('bench page in Chromium', () => {
     await expect.poll(() => box.inputValue()).toBe('82.02');
     expect(await page.locator('[data-drawn-group="4"]').textContent()).toMatch(/82\.02 ft along/);
     expect(await page.locator('[data-result-group="4"]').textContent()).toMatch(/gal\/h/);
+    // the warnings, the hints and the totals too: ounces and pounds of steel and plastic, feet of filament (NIST SP 811)
+    const totals = await page.locator('fw-bench-page .card', { hasText: 'To buy and print' }).textContent();
+    expect(totals).toMatch(/\d lb, \d+ ft of 1\.75 mm/);
+    expect(totals).not.toMatch(/\d kg/);
+    const bench = await page.locator('fw-bench-page').textContent();
+    expect(bench).not.toMatch(/\d g of steel|blank: 3 L\/day/);
     await shot('bench-05-imperial-1400');
     const back = await solvedId();
     await page.getByLabel('metric').check();

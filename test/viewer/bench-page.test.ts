@@ -39,12 +39,13 @@ describe('bench boxes', () => {
     expect((cleared.containers as unknown[]).length).toBe(4);
   });
 
-  it('rewrites the boxes in feet and inches and back (NIST SP 811)', () => {
+  it('rewrites the boxes in feet and inches and back (NIST SP 811), rounded as the valve page rounds', () => {
     const imperial = convertPlan(PRESET, 'imperial');
-    expect((imperial.tank as { fullSurfaceElevation: string }).fullSurfaceElevation).toBe('8.858 ft'); // 2.7 / 0.3048
-    expect((imperial.main as { innerDiameter: string }).innerDiameter).toBe('0.2756 in'); // 7 / 25.4
+    expect((imperial.tank as { fullSurfaceElevation: string }).fullSurfaceElevation).toBe('8.86 ft'); // 2.7 / 0.3048 = 8.858
+    expect((imperial.main as { innerDiameter: string }).innerDiameter).toBe('0.276 in'); // 7 / 25.4 = 0.2756
+    // converted again (after an edit; with none the page puts back the exact values): 8.86 x 0.3048 = 2.7005 m
     const back = convertPlan(imperial, 'metric');
-    expect((back.tank as { fullSurfaceElevation: string }).fullSurfaceElevation).toBe('2.7 m');
+    expect((back.tank as { fullSurfaceElevation: string }).fullSurfaceElevation).toBe('2.701 m');
     expect(parsePlan(imperial).ok).toBe(true);
   });
 

@@ -5,6 +5,7 @@ import { BenchClient, type BenchWorkerFactory } from '../lib/bench-client.ts';
 import { GROUP_FIELDS, TANK_FIELDS, benchDisplay, benchInLabels, benchLabelFor, benchValue, convertPlan, setPlanAt, unitOf, type BenchField } from '../lib/bench-fields.ts';
 import { isPlanDocument, loadBench, loadPreviousBench, saveBench, savePreviousBench } from '../lib/bench-storage.ts';
 import { fileStem } from '../../generator/doc/file-stem.ts';
+import { textInUnits } from '../../generator/doc/text-in-units.ts';
 import { getAt, type Doc } from '../lib/doc-path.ts';
 import { flowLph, headM, lengthMm, minutes } from '../lib/format.ts';
 import type { UnitSystem } from '../lib/units-system.ts';
@@ -163,7 +164,7 @@ export class FwBenchPage extends LitElement {
   protected override willUpdate(changed: Map<string, unknown>): void {
     // a switch of units rewrites the boxes in the new units (the plan keeps its unit with every value)
     if (changed.has('units') && this.shownUnits !== null && this.shownUnits !== this.units) {
-      // switching back with no edit in between restores the exact values (no drift from 4-digit rounding)
+      // switching back with no edit in between restores the exact values (no drift from the rounding)
       const back = this.beforeSwitch;
       if (back && back.units === this.units && back.converted === this.plan) {
         this.plan = back.plan;
@@ -358,7 +359,7 @@ export class FwBenchPage extends LitElement {
           @input=${(e: Event) => this.setField(path, f, (e.target as HTMLInputElement).value)}
         />${unit ? html`<span class="unit">${shownUnit}</span>` : nothing}
       </span>
-      ${f.hint ? html`<small>${f.hint}</small>` : nothing}
+      ${f.hint ? html`<small>${textInUnits(f.hint, this.units)}</small>` : nothing}
       ${err ? html`<span class="err" role="alert">${benchInLabels(err, this.plan)}</span>` : nothing}
     </label>`;
   }
@@ -449,7 +450,7 @@ export class FwBenchPage extends LitElement {
         <dt>Flow, every valve open</dt><dd>${flowLph(g.sharedFullLph, u)} (${flowLph(g.sharedLowLph, u)} low tank)</dd>
         ${g.fillSharedMin !== null ? html`<dt>Refill, every valve open</dt><dd>${minutes(g.fillSharedMin)}</dd>` : nothing}
       </dl>
-      ${g.warnings.length ? html`<ul>${g.warnings.map((w) => html`<li>${w}</li>`)}</ul>` : nothing}
+      ${g.warnings.length ? html`<ul>${g.warnings.map((w) => html`<li>${textInUnits(w, this.units)}</li>`)}</ul>` : nothing}
       ${g.waysOut.length ? html`<ul>${g.waysOut.map((w) => html`<li>Would fit with ${benchLabelFor(w.field, this.plan).toLowerCase()} ${w.value}: ${benchInLabels(w.message, this.plan)}</li>`)}</ul>` : nothing}
       <button data-open-valve=${g.index} ?disabled=${g.noFit.length > 0} @click=${() => this.openValve(g)}>Open this valve on the valve page</button>
     </article>`;
@@ -488,7 +489,7 @@ export class FwBenchPage extends LitElement {
             <div class="results ${stale ? 'stale' : ''}">${s.groups.map((g) => this.renderGroup(g))}</div>
             <div class="card ${stale ? 'stale' : ''}">
               <h2>To buy and print</h2>
-              <table><tbody>${s.report.totals.rows.filter((r) => !r[0]!.startsWith('tank outflow')).map((r) => html`<tr><td>${r[0]}</td><td>${r[1]}</td></tr>`)}</tbody></table>
+              <table><tbody>${s.report.totals.rows.filter((r) => !r[0]!.startsWith('tank outflow')).map((r) => html`<tr><td>${r[0]}</td><td>${textInUnits(r[1]!, this.units)}</td></tr>`)}</tbody></table>
             </div>`
         : html`<p>${this.errors.length ? '' : 'Working out the bench…'}</p>`}
       <div class="card">

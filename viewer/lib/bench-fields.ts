@@ -4,7 +4,8 @@
  * each system. Also the plan paths in messages turned into those labels, so
  * the grower never reads "containers.2.floorElevation".
  */
-import { formatNumber, fromSi, parseQuantity, type QuantityKind } from '../../generator/doc/units.ts';
+import { fromSi, parseQuantity, type QuantityKind } from '../../generator/doc/units.ts';
+import { shownNumber } from '../../generator/doc/shown-number.ts';
 import type { UnitSystem } from './units-system.ts';
 
 export interface BenchField {
@@ -105,8 +106,9 @@ export function benchInLabels(message: string, plan: unknown): string {
 }
 
 /**
- * The plan with every box's value rewritten in the system's unit (4 significant
- * digits), so the boxes read in the units chosen; values that do not parse are left as typed.
+ * The plan with every box's value rewritten in the system's unit, rounded as the
+ * valve page rounds (shownNumber: 2.7 m shows as 8.86 ft), so the boxes read in
+ * the units chosen; values that do not parse are left as typed.
  */
 export function convertPlan(plan: Record<string, unknown>, system: UnitSystem): Record<string, unknown> {
   const out = structuredClone(plan);
@@ -125,7 +127,7 @@ export function convertPlan(plan: Record<string, unknown>, system: UnitSystem): 
     const unit = unitOf(f, system);
     const parsed = parseQuantity(raw, f.kind, unit);
     if (!parsed.ok || parsed.quantity.unit === unit || /^\s*[+-]?[\d.]+\s*$/.test(raw)) return;
-    node[last] = `${formatNumber(fromSi(parsed.quantity.si, unit), 4)} ${unit}`;
+    node[last] = `${shownNumber(fromSi(parsed.quantity.si, unit), unit)} ${unit}`;
   };
   for (const f of TANK_FIELDS) convert(out, f.path, f);
   const rows = (out as { containers?: unknown }).containers;
