@@ -14,6 +14,7 @@ import { sizeDesign } from '../../generator/sizing/size-design.ts';
 import type { SizingSuccess, WayOut } from '../../generator/sizing/result.ts';
 import { setAt, type Doc } from '../../viewer/lib/doc-path.ts';
 import { wayOutInUnits } from '../../viewer/lib/way-out-in-units.ts';
+import { joinedWaysOut } from '../../viewer/lib/joined-ways-out.ts';
 import { messageInUnits } from '../../viewer/lib/message-in-units.ts';
 import { shareUrl, unitsFromHash } from '../../viewer/lib/share-link.ts';
 import { exportFiles } from '../../viewer/worker/export-files.ts';
@@ -59,6 +60,21 @@ describe('ways out in the box\'s unit', () => {
     const lip: WayOut = { field: 'nozzle.sealDiameter', value: '4.2 mm', message: 'a nozzle lip of at most 4.2 mm across' };
     expect(wayOutInUnits(lip, doc, 'imperial')).toEqual(lip);
     expect(wayOutInUnits(head, doc, 'metric')).toBe(head);
+  });
+
+  it('a pair offered together is one way out setting both boxes; either alone does not size, both do, in inches too', () => {
+    const doc = { supply: { headMax: '3 m' }, level: { target: '10 mm' }, limits: { maxOuterDiameter: '40 mm' } };
+    const ways = waysOut(doc);
+    expect(ways).toHaveLength(2); // the sizing's two entries with one message
+    for (const w of ways) expect(size(setAt(doc, w.field, w.value)).ok, `${w.field} alone`).toBe(false);
+    const [joined, ...rest] = joinedWaysOut(ways);
+    expect(rest).toEqual([]);
+    expect(joined.also).toEqual([{ field: ways[1].field, value: ways[1].value }]);
+    expect(size(apply(doc, joined)).ok).toBe(true);
+    const inches = wayOutInUnits(joined, doc, 'imperial');
+    expect([inches.value, ...inches.also!.map((c) => c.value)].every((v) => v.endsWith(' in'))).toBe(true);
+    expect(size(apply(doc, inches)).ok).toBe(true);
+    expect(inches.message).not.toMatch(/\d mm/);
   });
 
   it('box messages: an inch box\'s limits in inches, a print box\'s in millimetres', () => {

@@ -9,6 +9,7 @@ import { fileStem } from '../../generator/doc/file-stem.ts';
 import { placeErrors } from '../lib/place-errors.ts';
 import { messageInUnits } from '../lib/message-in-units.ts';
 import { wayOutInUnits } from '../lib/way-out-in-units.ts';
+import { joinedWaysOut } from '../lib/joined-ways-out.ts';
 import { ALL_FIELDS } from '../lib/form-fields.ts';
 import { presets, type Preset } from '../lib/presets.ts';
 import { presetCopy, type PresetCopy } from '../lib/preset-copy.ts';
@@ -467,12 +468,13 @@ export class FwApp extends LitElement {
 
   private convertedResult: { from: SizingResult | null; units: UnitSystem; doc: Doc; result: SizingResult | null } | null = null;
 
-  /** The result with its ways out written in the boxes' units (an inch box gets inches), kept while nothing changes. */
+  /** The result with its ways out as buttons show them (pairs joined, in the boxes' units), kept while nothing changes. */
   private resultInUnits(): SizingResult | null {
     const c = this.convertedResult;
     if (c && c.from === this.result && c.units === this.units && c.doc === this.doc) return c.result;
     const r = this.result;
-    const result = r && !r.ok && this.units !== 'metric' ? { ...r, waysOut: r.waysOut.map((w) => wayOutInUnits(w, this.doc, this.units)) } : r;
+    // a pair offered together is one button (joined-ways-out.ts), in the boxes' units
+    const result = r && !r.ok ? { ...r, waysOut: joinedWaysOut(r.waysOut).map((w) => wayOutInUnits(w, this.doc, this.units)) } : r;
     this.convertedResult = { from: r, units: this.units, doc: this.doc, result };
     return result;
   }
