@@ -208,7 +208,7 @@ function sheetContent(s: SizingSuccess, doc: NormalizedDoc, files: BuildSheetFil
     `Test the float before it goes in. Weigh it dry, without the pad: it should weigh ${f1(s.float.dryMassG)} g, within ${f1(DRY_MASS_TOLERANCE * 100)} % ` +
       `(${f1(s.float.dryMassG * (1 - DRY_MASS_TOLERANCE))} to ${f1(s.float.dryMassG * (1 + DRY_MASS_TOLERANCE))} g). Hold it fully under water for a day, ` +
       `dry the outside and weigh it again: reject it if it gained more than ${f1(SOAK_GAIN_LIMIT_G)} g. ` +
-      `(It can take in ${f1(s.float.leakToleranceMl)} mL before it no longer shuts with the tank full; every mL raises the shut-tight level by ${f2(s.float.levelRisePerMlMm)} mm.)`,
+      `(It can take in ${f1(s.float.leakToleranceMl)} mL before it no longer shuts with the tank full; by then the shut-tight level has risen about ${f1(s.float.leakToleranceMl * s.float.levelRisePerMlMm)} mm.)`,
     'Slide the float into the housing from below, flat bottom down, pad up, until its top collar slides into the sleeve under the deck (it should move freely there: the sleeve guides it and stops it).',
     `Slide the retainer pin through the two holes near the base, flat side down, head outside. The float now rests on it, ${f1(P.mount.pinTopZMm)} mm above the base, and cannot fall out.`,
     'Push the feed tube over the barb on the deck.',
