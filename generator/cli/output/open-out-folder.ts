@@ -77,11 +77,17 @@ export async function openOutFolder(out: string, options: OpenOutOptions): Promi
     firstMade = await mkdir(dirname(path), { recursive: true });
     try {
       await mkdir(path);
+      firstMade ??= path;
     } catch (error) {
-      await unmake(dirname(path));
-      throw error;
+      // Another run made the folder between our look and our mkdir: open it as an existing folder, so its lock
+      // says "busy" rather than a vague "something else changed".
+      const raced = (error as NodeJS.ErrnoException).code === 'EEXIST' && (await lstat(path).then((i) => i.isDirectory() && !i.isSymbolicLink(), () => false));
+      if (!raced) {
+        await unmake(dirname(path));
+        throw error;
+      }
+      firstMade = undefined;
     }
-    firstMade ??= path;
   }
   const created = firstMade !== undefined;
   let release: () => Promise<void> = async () => {};
