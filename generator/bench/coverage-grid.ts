@@ -80,7 +80,7 @@ function hungDirectG(inp: DesignInputs, rimHeightMm: number): number | null {
     if (base < RIM_ADJUST_MM) continue;
     // no foot on the rim: let the search ignore the foot's limit, then check the tube and the hanger behind it
     const r = sizeDesign({ ...inp, targetLevelM: own / 1e3, maxOuterDiameterM: 0.25 });
-    if (!r.ok) continue;
+    if (!r.ok || r.architecture !== 'direct') continue;
     const rim = rimMountSpec({ rimHeightMm, wallThicknessMm: WALL_MM, valveTopZMm: base + r.housing.heightMm, printWallMm: inp.wallM * 1e3 });
     if (rim.tooLow || rim.stem.lengthMm > 250 || r.housing.outerDiameterMm + rim.behindDepthMm > limitMm) continue;
     if (best === null || r.mass.totalG < best) best = r.mass.totalG;

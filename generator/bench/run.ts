@@ -89,7 +89,7 @@ export async function runBench(): Promise<BenchResult> {
     exportMs: round(await timeMs(() => buildParts(sizing, { quality: 'export' }))),
   };
   const exportParts = await buildParts(sizing, { quality: 'export' });
-  const stlMs = await timeMs(() => PART_NAMES.map((name) => writeStlBinary(exportParts[name])));
+  const stlMs = await timeMs(() => PART_NAMES.map((name) => writeStlBinary(exportParts[name]!)));
   const peakRssMb = process.resourceUsage().maxRSS / 1024; // kilobytes on Linux and macOS
 
   const result: BenchResult = { sizingMs: round(sizingMs, 3), parts, assembly, stlMs: round(stlMs, 3), peakRssMb: round(peakRssMb, 1) };

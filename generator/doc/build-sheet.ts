@@ -17,11 +17,12 @@ import { materialNotes } from './material-notes.ts';
 import { superscriptUnits } from './superscript-units.ts';
 import { markdownText } from './safe-text/markdown-text.ts';
 import type { NormalizedDoc } from './schema.ts';
-import { sizingSections, type Section } from './format-sizing.ts';
+import { sizingSections, valveKindText, type Section } from './format-sizing.ts';
 import { CONSTRAINT_TEXT } from '../sizing/layout/constraint-text.ts';
+import { LEVER_CONSTRAINT_TEXT } from '../sizing/lever/lever-constraint-text.ts';
 import { STANDARD_GRAVITY } from '../sizing/constants.ts';
 import { OVERHANG_DEG, standSpecOf } from '../sizing/parts/stand-spec.ts';
-import type { SizingSuccess } from '../sizing/result.ts';
+import type { DirectSizing, LeverSizing, SizingSuccess } from '../sizing/result.ts';
 
 /** Layer height suggested for every part but the nozzle, mm (common practice for a 0.4 mm nozzle). */
 export const LAYER_HEIGHT_MM = 0.2;
@@ -88,7 +89,59 @@ function lines(thicknessMm: number, lineMm: number): { count: number; whole: boo
   return { count: Math.ceil(exact - 1e-6), whole: Math.abs(exact - Math.round(exact)) < 1e-6 };
 }
 
+/** The parts of the sheet that depend on the valve's kind: bill of materials, print settings, assembly. */
+interface OwnSheet {
+  bom: Table;
+  print: Table;
+  printFirst: string;
+  printNotes: string[];
+  steps: string[];
+}
+
 function sheetContent(s: SizingSuccess, doc: NormalizedDoc, files: BuildSheetFiles = {}): Sheet {
+  const own = s.architecture === 'direct' ? directSheet(s, doc, files) : leverSheet(s, doc, files);
+  const inp = s.inputs;
+  const material = materialName(doc);
+  const name = doc.name ?? 'Float valve';
+  if (files.withTestStand) {
+    const st = standSpecOf(s);
+    const stl = (part: string) => files.stl?.[part] ?? `${part}.stl`;
+    const wall = lines(inp.wallM * 1e3, inp.lineWidthM * 1e3);
+    own.print.rows.push(
+      ['Test stand base', 'foot down, as it stands', `${wall.count} lines`, '100 %', `${LAYER_HEIGHT_MM} mm`, `none: the roof under the deck and the tube exit's top rise at ${OVERHANG_DEG} degrees`],
+      ['Test stand plunger', 'cup rim down', `${wall.count} lines`, '100 % (the printed mass assumes solid plastic)', `${LAYER_HEIGHT_MM} mm`, `none: the cup is a ${OVERHANG_DEG}-degree cone`],
+    );
+    own.bom.rows.push(
+      ['Test stand base (printed)', '1', `${material}, ${f1(st.base.massG)} g, file ${stl('stand-base')}`],
+      ['Test stand plunger (printed)', '1', `${material}, ${f1(st.plunger.plasticMassG)} g, file ${stl('stand-plunger')}; with the pad ${f1(st.plunger.massG)} g, printed on it as "${st.plunger.label.text}"`],
+      ['Second seal pad and nozzle insert', '1 each', 'for the plunger and the stand, or move the valve\'s own'],
+      ['Kitchen scale', '1', 'reads to 1 g or better'],
+    );
+  }
+  if (files.plate3mf) own.printNotes.push(`${files.plate3mf} holds every part laid out on one plate, already in print orientation.`);
+  const standSteps = files.withTestStand ? standTestSteps(s) : [];
+  const boundByText = (s.architecture === 'lever' ? LEVER_CONSTRAINT_TEXT : CONSTRAINT_TEXT) as Record<string, string>;
+  const sheet: Sheet = {
+    title: `${name}: build sheet`,
+    intro: [
+      `Tank full ${doc.supply.headMax} and tank low ${doc.supply.headMin} (heads above the nozzle), water depth to hold ${doc.level.target}, printed in ${material}.`,
+      `This is a ${valveKindText(s)}. ${s.choice.reason}`,
+      ...(doc.notes ? [doc.notes] : []),
+    ],
+    figures: sizingSections(s),
+    boundBy: s.boundBy.map((code) => boundByText[code] ?? code),
+    warnings: s.warnings.map((w) => w.message),
+    ...own,
+    standSteps,
+    cautions: CAUTIONS.map((c) => ({ title: c.title, text: c.text })),
+    words: [],
+  };
+  sheet.words = termsUsedIn(textsOf(sheet).join('\n')).map(termLine);
+  return sheet;
+}
+
+/** The direct valve's bill of materials, print settings and assembly. */
+function directSheet(s: DirectSizing, doc: NormalizedDoc, files: BuildSheetFiles): OwnSheet {
   const P = s.parts;
   const inp = s.inputs;
   const material = materialName(doc);
@@ -163,24 +216,8 @@ function sheetContent(s: SizingSuccess, doc: NormalizedDoc, files: BuildSheetFil
       ],
       ['Retainer pin', 'flat side down', '3 lines', '100 %', `${LAYER_HEIGHT_MM} mm`, 'none'],
       ...(files.withPad ? [['Pad cutting template (optional, any filament)', 'flat', '2 lines', '100 %', `${LAYER_HEIGHT_MM} mm`, 'none']] : []),
-      ...(files.withTestStand
-        ? [
-            ['Test stand base', 'foot down, as it stands', `${wall.count} lines`, '100 %', `${LAYER_HEIGHT_MM} mm`, `none: the roof under the deck and the tube exit's top rise at ${OVERHANG_DEG} degrees`],
-            ['Test stand plunger', 'cup rim down', `${wall.count} lines`, '100 % (the printed mass assumes solid plastic)', `${LAYER_HEIGHT_MM} mm`, `none: the cup is a ${OVERHANG_DEG}-degree cone`],
-          ]
-        : []),
     ],
   };
-  if (files.withTestStand) {
-    const st = standSpecOf(s);
-    bom.rows.push(
-      ['Test stand base (printed)', '1', `${material}, ${f1(st.base.massG)} g, file ${stl('stand-base')}`],
-      ['Test stand plunger (printed)', '1', `${material}, ${f1(st.plunger.plasticMassG)} g, file ${stl('stand-plunger')}; with the pad ${f1(st.plunger.massG)} g, printed on it as "${st.plunger.label.text}"`],
-      ['Second seal pad and nozzle insert', '1 each', 'for the plunger and the stand, or move the valve\'s own'],
-      ['Kitchen scale', '1', 'reads to 1 g or better'],
-    );
-  }
-
   const printFirst =
     'Supports: off. The float is sealed: any support the slicer put inside it could never come out and would weigh the float down ' +
     `for good. Nothing needs it: every overhang of every part is ${OVERHANG_MIN_DEG} degrees or steeper from the bed (the foot ${FOOT_FLARE_DEG})` +
@@ -198,7 +235,6 @@ function sheetContent(s: SizingSuccess, doc: NormalizedDoc, files: BuildSheetFil
     );
   }
   if (!shell.whole) printNotes.push(`The float shell (${f2(P.float.shellMm)} mm) is not a whole number of lines; check the slicer fills it solid.`);
-  if (files.plate3mf) printNotes.push(`${files.plate3mf} holds every part laid out on one plate, already in print orientation.`);
 
   const steps = [
     'Rinse every part. Look at the nozzle\'s sealing face: it must be flat and clean, with no strings or blobs; clear the nozzle hole with a needle or a ' +
@@ -218,28 +254,126 @@ function sheetContent(s: SizingSuccess, doc: NormalizedDoc, files: BuildSheetFil
     `Open the supply. The throttle band starts at ${f1(s.levels.throttleStartMm)} mm: there the valve starts to close, and it closes gradually: while the plants drink ${f1(s.inputs.demandLpd)} L a day the level holds near ${f1(s.levels.heldAtDemandMm)} mm with the tank full (${f1(s.levels.heldAtDemandLowTankMm)} mm when it runs low). With no one drinking it shuts tight at ${f1(s.levels.shutOffAtHeadMaxMm)} mm (${f1(s.levels.shutOffAtHeadMinMm)} mm with the tank low), the highest it rises. Check for drips at the nozzle with the tank full.`,
   ];
 
-  const standSteps = files.withTestStand ? standTestSteps(s) : [];
-  const boundByText = CONSTRAINT_TEXT as Record<string, string>;
-  const sheet: Sheet = {
-    title: `${name}: build sheet`,
-    intro: [
-      `Tank full ${doc.supply.headMax} and tank low ${doc.supply.headMin} (heads above the nozzle), water depth to hold ${doc.level.target}, printed in ${material}.`,
-      ...(doc.notes ? [doc.notes] : []),
+  return { bom, print, printFirst, printNotes, steps };
+}
+
+/** M3 screws of the rim mount: two hold the stem to the hanger, two the frame to the stem, one clamps the wall (rim-mount-spec.ts). */
+const RIM_SCREWS = 5;
+
+/** The lever valve's bill of materials, print settings and assembly (with the rim mount's when it hangs). */
+function leverSheet(s: LeverSizing, doc: NormalizedDoc, files: BuildSheetFiles): OwnSheet {
+  const P = s.parts;
+  const inp = s.inputs;
+  const material = materialName(doc);
+  const lineMm = inp.lineWidthM * 1e3;
+  const wall = lines(P.frame.wallMm, lineMm);
+  const shell = lines(P.float.shellMm, lineMm);
+  const shellLayers = Math.ceil(P.float.shellMm / LAYER_HEIGHT_MM - 1e-6);
+  const stl = (part: string) => files.stl?.[part] ?? `${part}.stl`;
+  const b = s.mass.byPart;
+  const rim = P.rim;
+  const lv = s.lever;
+  const bom: Table = {
+    title: 'Bill of materials (one valve)',
+    head: ['item', 'quantity', 'details'],
+    rows: [
+      ['Frame (printed)', '1', `${material}, ${f1(b.frame)} g, file ${stl('frame')}`],
+      ['Arm (printed)', '1', `${material}, ${f1(b.arm)} g, file ${stl('arm')}`],
+      ['Float (printed)', '1', `${material}, ${f1(b.float)} g, file ${stl('float')}`],
+      ['Nozzle insert (printed)', '1', `${material}, ${f2(b.nozzle)} g, file ${stl('nozzle')}`],
+      ['Pivot pin (printed)', '1', `${material}, ${f2(b.pin)} g, file ${stl('pin')}`],
+      ...(rim
+        ? [
+            ['Rim hanger (printed)', '1', `${material}, ${f1(b.hanger)} g, file ${stl('hanger')}`],
+            ['Slotted stem (printed)', '1', `${material}, ${f1(b.stem)} g, file ${stl('stem')}`],
+            ['M3 screws, 12 to 16 mm', `${RIM_SCREWS}`, 'two hold the stem to the hanger through its slot, two hold the frame to the stem, one through the hanger\'s outer leg clamps the wall; they cut their own thread in the pilot holes'],
+          ]
+        : []),
+      [
+        'Seal pad',
+        '1',
+        `disc ${f1(P.pad.diameterMm)} mm across, ${f1(P.pad.thicknessMm)} mm thick, cut from ${s.seal.padDescription}; ${f2(b.pad)} g`,
+      ],
+      ['Waterproof glue', 'a drop', "holds the float on the arm's tongue (two-part epoxy or a glue made for your plastic)"],
+      ['Feed tube', `${doc.supply.tubeLength}`, `inside width ${doc.supply.tubeInnerDiameter}, pushed over the barb`],
+      [
+        'Inline strainer',
+        '1',
+        `in the feed tube before the valve, openings finer than ${f2(P.nozzle.orificeMm * STRAINER_SHARE_OF_BORE)} mm (a third of the ${f1(P.nozzle.orificeMm)} mm nozzle hole): one grain caught on the nozzle lip holds the valve open`,
+      ],
+      ...(rim
+        ? []
+        : [[
+            'Hold-down',
+            s.holdDown.anchorForceN > 0 ? '1 set' : 'none needed',
+            s.holdDown.anchorForceN > 0
+              ? `${f1(s.holdDown.ballastSteelG)} g of steel on the anchor wings, or 3 pins or M3 screws through the ${f1(P.frame.anchorDiameterMm)} mm anchor slots into the container floor`
+              : "the valve outweighs the flooded float's lift; the anchor slots are there if you want them",
+          ]]),
     ],
-    figures: sizingSections(s),
-    boundBy: s.boundBy.map((code) => boundByText[code] ?? code),
-    warnings: s.warnings.map((w) => w.message),
-    bom,
-    print,
-    printFirst,
-    printNotes,
-    steps,
-    standSteps,
-    cautions: CAUTIONS.map((c) => ({ title: c.title, text: c.text })),
-    words: [],
   };
-  sheet.words = termsUsedIn(textsOf(sheet).join('\n')).map(termLine);
-  return sheet;
+  const print: Table = {
+    title: 'Print settings',
+    head: ['part', 'on the bed', 'walls', 'infill', 'layer height', 'supports'],
+    rows: [
+      ['Frame', 'deck down', `${wall.count} lines (${f2(P.frame.wallMm)} mm wall at ${f2(lineMm)} mm)`, '100 %', `${LAYER_HEIGHT_MM} mm`, `none: the pin holes are teardrops with a ${P.frame.holeRoofAngleDeg}-degree roof and the anchor wings stand on ${OVERHANG_MIN_DEG}-degree wedges`],
+      ['Arm', 'top face down (the pad pocket on the bed side)', `${wall.count} lines`, '100 %', `${LAYER_HEIGHT_MM} mm`, "none: the pocket's floor is the one short bridge; the pin hole is a teardrop"],
+      [
+        'Float',
+        'flat bottom down',
+        `${shell.count} lines; ${shellLayers} top and bottom layers`,
+        'any: the shell is modelled solid and the cavity hollow, so the mass does not depend on infill',
+        `${LAYER_HEIGHT_MM} mm`,
+        'none: the cavity roof is a 50-degree cone that closes to a point inside the collar, so there is no bridge inside, whatever the perimeter count',
+      ],
+      ['Nozzle insert', 'sealing face down (tip down)', '3 lines or more', '100 %', `${NOZZLE_LAYER_HEIGHT_MM} mm`, 'none; no brim or raft on the sealing face: the first layer is the seal'],
+      ['Pivot pin', 'flat side down', '3 lines', '100 %', `${LAYER_HEIGHT_MM} mm`, 'none'],
+      ...(rim
+        ? [
+            ['Rim hanger', 'on its side', `${wall.count} lines`, '100 %', `${LAYER_HEIGHT_MM} mm`, 'none: its screw holes are teardrops'],
+            ['Slotted stem', 'flat', `${wall.count} lines`, '100 %', `${LAYER_HEIGHT_MM} mm`, 'none'],
+          ]
+        : []),
+      ...(files.withPad ? [['Pad cutting template (optional, any filament)', 'flat', '2 lines', '100 %', `${LAYER_HEIGHT_MM} mm`, 'none']] : []),
+    ],
+  };
+  const printFirst =
+    'Supports: off. The float is sealed: any support the slicer put inside it could never come out and would weigh the float down ' +
+    `for good. Nothing needs it: every overhang of every part is ${OVERHANG_MIN_DEG} degrees or steeper from the bed, and the float's sealed cavity closes to a point: no bridge inside it.`;
+  const printNotes = [
+    `Material: ${material} (${f2(inp.materialDensityKgM3 / 1000)} g/cm3). The masses assume solid plastic.`,
+    `Every fit has the same clearance, ${f2(P.printClearanceMm)} mm per side; the nozzle's crush ribs take up the printer's spread in the seat.`,
+    ...materialNotes(material).map((n) => `${n.title}. ${n.text} Basis: ${n.basis}`),
+  ];
+  if (!wall.whole) printNotes.push(`The wall (${f2(P.frame.wallMm)} mm) is not a whole number of ${f2(lineMm)} mm lines: the slicer will leave a gap or a thin fill line.`);
+  if (!shell.whole) printNotes.push(`The float shell (${f2(P.float.shellMm)} mm) is not a whole number of lines; check the slicer fills it solid.`);
+  const rimSteps = rim
+    ? [
+        `Screw the slotted stem to the frame's back wall: two M3 screws through the holes at the stem's foot into the pilot holes in the wall.`,
+        `Hang the hanger over the container's wall (it is made for a ${f1(s.rim!.wallThicknessMm)} mm wall) and screw the clamp screw through its outer leg until it just bites the wall.`,
+        `Set the level with the slot: put the two upper screws through the slot into the hanger's pilot holes with the stem at the middle of the slot, and tighten. The valve then holds the target, ${doc.level.target}. To trim it after a first fill, loosen the two screws, slide the stem up or down (up to ${f1(rim.adjustMm)} mm either way from the middle; every millimetre the valve moves, the level moves the same) and tighten again.`,
+      ]
+    : [
+        s.holdDown.anchorForceN > 0
+          ? `Stand the frame on the container floor and hold it down: ${f1(s.holdDown.ballastSteelG)} g of steel on the anchor wings, or pins or screws through the three anchor slots.`
+          : 'Stand the frame on the container floor (anchor it through the slots in its wings if you like).',
+      ];
+  const steps = [
+    'Rinse every part. Look at the nozzle\'s sealing face: it must be flat and clean, with no strings or blobs; clear the nozzle hole with a needle or a ' +
+      `${f1(P.nozzle.orificeMm)} mm drill turned by hand.`,
+    `Push the nozzle insert into the seat in the frame's deck from below, barb first, until its shoulder sits against the boss under the deck. The sealing face then points down, ${f1(P.mount.nozzleTipZMm)} mm above the container floor${rim ? ' with the stem at the middle of its slot' : ''}.`,
+    `Put the seal pad in the arm's pocket (${f1(P.arm.pocketDiameterMm)} mm across, ${f1(P.arm.pocketDepthMm)} mm deep); it should stand ${f1(P.pad.proudMm)} mm proud. A drop of flexible glue keeps it there.`,
+    `Test the float before it goes on. Weigh it dry: it should weigh ${f1(s.float.dryMassG)} g, within ${f1(DRY_MASS_TOLERANCE * 100)} % ` +
+      `(${f1(s.float.dryMassG * (1 - DRY_MASS_TOLERANCE))} to ${f1(s.float.dryMassG * (1 + DRY_MASS_TOLERANCE))} g). Hold it fully under water for a day, ` +
+      `dry the outside and weigh it again: reject it if it gained more than ${f1(SOAK_GAIN_LIMIT_G)} g. ` +
+      `(It can take in ${f1(s.float.leakToleranceMl)} mL before it no longer shuts with the tank full; every mL raises the shut-tight level by ${f2(s.float.levelRisePerMlMm)} mm.)`,
+    `Glue the float to the arm: the round tongue under the arm's tip goes into the socket in the float's top, and the arm's underside rests on the float's collar. Let the glue set with the arm level.`,
+    `Set the arm between the frame's cheeks, pad up under the nozzle, and push the pivot pin through the cheeks and the arm's eye, flat side down, head outside. The arm must swing freely; it rests on its stop with the pad ${f1(lv.restTravelMm)} mm below the nozzle lip.`,
+    ...rimSteps,
+    'Push the feed tube over the barb on the deck.',
+    `Open the supply. The throttle band starts at ${f1(s.levels.throttleStartMm)} mm: there the valve starts to close, and it closes gradually: while the plants drink ${f1(s.inputs.demandLpd)} L a day the level holds near ${f1(s.levels.heldAtDemandMm)} mm with the tank full (${f1(s.levels.heldAtDemandLowTankMm)} mm when it runs low). With no one drinking it shuts tight at ${f1(s.levels.shutOffAtHeadMaxMm)} mm (${f1(s.levels.shutOffAtHeadMinMm)} mm with the tank low), the highest it rises; the pivot's friction lets it reopen up to ${f1(lv.hysteresisMm)} mm lower. Check for drips at the nozzle with the tank full.`,
+  ];
+  return { bom, print, printFirst, printNotes, steps };
 }
 
 /**

@@ -5,7 +5,8 @@
 import { cautionLines } from './cautions.ts';
 import type { FieldError } from './fields.ts';
 import { CONSTRAINT_TEXT } from '../sizing/layout/constraint-text.ts';
-import type { SizingFailure, SizingSuccess, Warning } from '../sizing/result.ts';
+import { LEVER_CONSTRAINT_TEXT } from '../sizing/lever/lever-constraint-text.ts';
+import type { DirectSizing, LeverSizing, SizingFailure, SizingSuccess, Warning } from '../sizing/result.ts';
 
 export interface Row {
   label: string;
@@ -28,17 +29,28 @@ export function fixed(value: number | null | undefined, decimals: number): strin
 
 const row = (label: string, value: string, unit = ''): Row => ({ label, value, unit });
 
-/** The result as titled sections of rows (closing force, float, housing, nozzle, pin, levels, the level held in use, flow, drain, hold-down, tilt, mass). */
+/** The valve's kind and mount in words, e.g. "lever valve, hung from the rim". */
+export function valveKindText(result: SizingSuccess): string {
+  const kind = result.architecture === 'lever' ? 'lever valve (the float on an arm)' : 'direct valve (the float under the pad)';
+  return `${kind}, ${result.mount === 'rim' ? "hung from the container's rim" : 'standing on the container floor'}`;
+}
+
+/** The result as titled sections of rows (the valve chosen, closing force, float, the valve's own parts, levels, the level held in use, flow, hold-down, mass). */
 export function sizingSections(result: SizingSuccess): Section[] {
-  const { closingForce: cf, pressure, float: fl, seal, housing, nozzle, pin, levels, flow, drain, vents, holdDown, tilt, mass } = result;
+  const { closingForce: cf, pressure, float: fl, seal, levels, flow, mass, nozzle } = result;
   const headMaxM = result.inputs.headMaxM;
   const headMinM = result.inputs.headMinM;
-  const halfIndentMm = seal.indentationMm / 2;
   const percent = (strain: number) => fixed(strain * 100, 0);
   const fill = (minutes: number | null) => (minutes === null ? [] : [minutes]);
+  const lever = result.architecture === 'lever';
+  const own = lever ? leverSections(result) : directSections(result);
   return [
     {
-      title: 'Push needed to shut tight (float on the seal pad)',
+      title: `Valve: ${valveKindText(result)}`,
+      rows: [row('widest, seen from above (limit)', `${fixed(result.footprintMm, 1)} (${fixed(result.inputs.maxOuterDiameterM * 1e3, 0)})`, 'mm')],
+    },
+    {
+      title: lever ? 'Push needed to shut tight (at the seal pad)' : 'Push needed to shut tight (float on the seal pad)',
       rows: [
         row(`tank full, ${fixed(headMaxM, 2)} m of head (${fixed(pressure.atHeadMaxKPa, 1)} kPa)`, fixed(cf.atHeadMaxN, 3), 'N'),
         row(`tank low, ${fixed(headMinM, 2)} m of head (${fixed(pressure.atHeadMinKPa, 1)} kPa)`, fixed(cf.atHeadMinN, 3), 'N'),
@@ -66,41 +78,23 @@ export function sizingSections(result: SizingSuccess): Section[] {
         row('outer diameter', fixed(fl.outerDiameterMm, 1), 'mm'),
         row('height (straight side)', `${fixed(fl.heightMm, 1)} (${fixed(fl.cylinderHeightMm, 1)})`, 'mm'),
         row('displaced volume, fully submerged', fixed(fl.volumeMm3 / 1000, 1), 'cm3'),
-        row('mass with pad', fixed(fl.massG, 1), 'g'),
-        row('lift when fully submerged', fixed(fl.availableForceN, 3), 'N'),
-        row('spare lift (lift / push needed at tank full)', fixed(fl.reserve, 2), 'x'),
+        row(lever ? 'mass' : 'mass with pad', fixed(fl.massG, 1), 'g'),
+        row(lever ? 'lift when fully submerged (the float alone)' : 'lift when fully submerged', fixed(fl.availableForceN, 3), 'N'),
+        row(lever ? 'spare lift (push it gives at the pad / push needed at tank full)' : 'spare lift (lift / push needed at tank full)', fixed(fl.reserve, 2), 'x'),
         row('depth in the water when shut, tank full / tank low', `${fixed(fl.sealDepthAtHeadMaxMm, 1)} / ${fixed(fl.sealDepthAtHeadMinMm, 1)}`, 'mm'),
         row('shell', fixed(fl.shellMm, 2), 'mm'),
         row('water it can take in and still shut with the tank full', fixed(fl.leakToleranceMl, 1), 'mL'),
         row('rise of the shut-tight level per mL taken in', fixed(fl.levelRisePerMlMm, 2), 'mm'),
       ],
     },
-    {
-      title: 'Housing',
-      rows: [
-        row('bore (inside, where the float moves)', fixed(housing.boreMm, 1), 'mm'),
-        row('outer diameter (foot)', `${fixed(housing.outerDiameterMm, 1)} (${fixed(housing.footDiameterMm, 1)})`, 'mm'),
-        row('height', fixed(housing.heightMm, 1), 'mm'),
-        row('wall', fixed(housing.wallMm, 2), 'mm'),
-        row('mass', fixed(housing.massG, 1), 'g'),
-      ],
-    },
-    {
-      title: 'Nozzle and pin',
-      rows: [
-        row('nozzle tip above the base', fixed(nozzle.tipHeightMm, 1), 'mm'),
-        row("float's room to move (at least)", `${fixed(nozzle.travelMm, 2)} (${fixed(nozzle.minimumTravelMm, 2)})`, 'mm'),
-        row('nozzle hole / nozzle lip, across', `${fixed(nozzle.orificeMm, 2)} / ${fixed(nozzle.sealDiameterMm, 2)}`, 'mm'),
-        row('retainer pin top above the base', fixed(pin.topHeightMm, 1), 'mm'),
-      ],
-    },
+    ...own.parts,
     {
       title: 'Levels (water depth above the container floor)',
       rows: [
         row('water depth to hold', fixed(levels.targetMm, 1), 'mm'),
         row('shut tight, tank full', fixed(levels.shutOffAtHeadMaxMm, 1), 'mm'),
         row('shut tight, tank low', fixed(levels.shutOffAtHeadMinMm, 1), 'mm'),
-        row('float lifts off the retainer pin', fixed(levels.liftOffMm, 1), 'mm'),
+        row(lever ? 'float lifts off its rest (the arm down)' : 'float lifts off the retainer pin', fixed(levels.liftOffMm, 1), 'mm'),
         row('seal pad first touches the nozzle lip', fixed(levels.firstTouchMm, 1), 'mm'),
         row('shallowest water depth this float can hold', fixed(levels.minimumReachableMm, 1), 'mm'),
         ...(levels.overflowMm === null ? [] : [row('container overflow', fixed(levels.overflowMm, 1), 'mm')]),
@@ -138,6 +132,46 @@ export function sizingSections(result: SizingSuccess): Section[] {
         ...fill(flow.fillTimeAtHeadMinMin).map((m) => row('the same, tank low', fixed(m, 1), 'min')),
       ],
     },
+    ...own.after,
+    {
+      title: 'Mass and filament',
+      rows: [
+        row(`total (${result.inputs.materialName})`, fixed(mass.totalG, 1), 'g'),
+        row('filament (1.75 mm)', fixed(mass.filamentM, 1), 'm'),
+        own.massRow,
+        row(`seal pad (${seal.padMaterial}, not printed)`, fixed(mass.byPart.pad, 2), 'g'),
+      ],
+    },
+  ];
+}
+
+/** The direct valve's own sections: housing, nozzle and pin (after the float), drain, hold-down and tilt (after the flow). */
+function directSections(result: DirectSizing): { parts: Section[]; after: Section[]; massRow: Row } {
+  const { housing, nozzle, pin, drain, vents, holdDown, tilt, seal, mass } = result;
+  const halfIndentMm = seal.indentationMm / 2;
+  return {
+    parts: [
+    {
+      title: 'Housing',
+      rows: [
+        row('bore (inside, where the float moves)', fixed(housing.boreMm, 1), 'mm'),
+        row('outer diameter (foot)', `${fixed(housing.outerDiameterMm, 1)} (${fixed(housing.footDiameterMm, 1)})`, 'mm'),
+        row('height', fixed(housing.heightMm, 1), 'mm'),
+        row('wall', fixed(housing.wallMm, 2), 'mm'),
+        row('mass', fixed(housing.massG, 1), 'g'),
+      ],
+    },
+    {
+      title: 'Nozzle and pin',
+      rows: [
+        row('nozzle tip above the base', fixed(nozzle.tipHeightMm, 1), 'mm'),
+        row("float's room to move (at least)", `${fixed(nozzle.travelMm, 2)} (${fixed(nozzle.minimumTravelMm, 2)})`, 'mm'),
+        row('nozzle hole / nozzle lip, across', `${fixed(nozzle.orificeMm, 2)} / ${fixed(nozzle.sealDiameterMm, 2)}`, 'mm'),
+        row('retainer pin top above the base', fixed(pin.topHeightMm, 1), 'mm'),
+      ],
+    },
+    ],
+    after: [
     {
       title: 'Drain slots and air vents',
       rows: [
@@ -162,16 +196,72 @@ export function sizingSections(result: SizingSuccess): Section[] {
         row(`gap at the nozzle lip when tilted (at most half the pad squeeze, ${fixed(halfIndentMm, 2)})`, fixed(tilt.lipGapMm, 2), 'mm'),
       ],
     },
-    {
-      title: 'Mass and filament',
-      rows: [
-        row(`total (${result.inputs.materialName})`, fixed(mass.totalG, 1), 'g'),
-        row('filament (1.75 mm)', fixed(mass.filamentM, 1), 'm'),
-        row('housing / float / nozzle / retainer pin', [mass.byPart.housing, mass.byPart.float, mass.byPart.nozzle, mass.byPart.pin].map((g) => fixed(g, 1)).join(' / '), 'g'),
-        row(`seal pad (${seal.padMaterial}, not printed)`, fixed(mass.byPart.pad, 2), 'g'),
-      ],
-    },
-  ];
+    ],
+    massRow: row('housing / float / nozzle / retainer pin', [mass.byPart.housing, mass.byPart.float, mass.byPart.nozzle, mass.byPart.pin].map((g) => fixed(g, 1)).join(' / '), 'g'),
+  };
+}
+
+/** The lever valve's own sections: arm and frame, nozzle and pivot, the rim mount (after the float), hold-down and the pad's meeting with the lip (after the flow). */
+function leverSections(result: LeverSizing): { parts: Section[]; after: Section[]; massRow: Row } {
+  const { lever, rim, frame, nozzle, holdDown, seal, mass } = result;
+  const halfIndentMm = seal.indentationMm / 2;
+  const b = mass.byPart;
+  return {
+    parts: [
+      {
+        title: 'Arm and frame',
+        rows: [
+          row('ratio (float arm / pad arm)', `${fixed(lever.ratio, 2)} (${fixed(lever.floatArmMm, 1)} / ${fixed(lever.padArmMm, 1)} mm)`, 'x'),
+          row("float's push when shut, tank full / tank low", `${fixed(lever.floatPushAtHeadMaxN, 3)} / ${fixed(lever.floatPushAtHeadMinN, 3)}`, 'N'),
+          row('arm length (heel to tip)', fixed(lever.armLengthMm, 1), 'mm'),
+          row('pivot above the container floor', fixed(lever.pivotHeightMm, 1), 'mm'),
+          row('pivot friction band (reopens this much lower)', fixed(lever.hysteresisMm, 2), 'mm'),
+          row('frame height / width', `${fixed(frame.heightMm, 1)} / ${fixed(frame.widthMm, 1)}`, 'mm'),
+        ],
+      },
+      {
+        title: 'Nozzle',
+        rows: [
+          row('nozzle tip above the container floor', fixed(nozzle.tipHeightMm, 1), 'mm'),
+          row('seal pad drop with the arm at rest (at least)', `${fixed(nozzle.travelMm, 2)} (${fixed(nozzle.minimumTravelMm, 2)})`, 'mm'),
+          row('nozzle hole / nozzle lip, across', `${fixed(nozzle.orificeMm, 2)} / ${fixed(nozzle.sealDiameterMm, 2)}`, 'mm'),
+        ],
+      },
+      ...(rim
+        ? [{
+            title: 'Rim mount',
+            rows: [
+              row('rim above the floor / wall', `${fixed(rim.rimHeightMm, 1)} / ${fixed(rim.wallThicknessMm, 1)}`, 'mm'),
+              row('level adjustment on the slotted stem', `+-${fixed(rim.adjustMm, 0)}`, 'mm'),
+              row('stem length', fixed(rim.stemLengthMm, 1), 'mm'),
+            ],
+          }]
+        : []),
+    ],
+    after: [
+      {
+        title: 'Hold-down (container flooded)',
+        rows: [
+          row('uplift of the whole valve', fixed(holdDown.upliftN, 3), 'N'),
+          row('moment tipping it about the foot\'s back edge', fixed(holdDown.tippingMomentNmm, 1), 'N mm'),
+          row(result.mount === 'rim' ? "the hanger's clamp must hold" : 'the anchors must hold', fixed(holdDown.anchorForceN, 3), 'N'),
+          ...(result.mount === 'floor' ? [row('or steel ballast on the anchor wings', fixed(holdDown.ballastSteelG, 0), 'g')] : []),
+        ],
+      },
+      {
+        title: 'Seal pad on the nozzle lip',
+        rows: [
+          row('seal pad tilt when it first touches the nozzle lip', fixed(lever.padTiltDeg, 2), 'deg'),
+          row(`gap at the nozzle lip's far side then (at most half the pad squeeze, ${fixed(halfIndentMm, 2)})`, fixed(lever.lipGapMm, 2), 'mm'),
+        ],
+      },
+    ],
+    massRow: row(
+      rim ? 'frame / arm / float / nozzle / pin / hanger / stem' : 'frame / arm / float / nozzle / pin',
+      [b.frame, b.arm, b.float, b.nozzle, b.pin, ...(rim ? [b.hanger, b.stem] : [])].map((g) => fixed(g, 1)).join(' / '),
+      'g',
+    ),
+  };
 }
 
 /** Sections as aligned text: a title line, then label, right-aligned value, unit. */
@@ -203,9 +293,9 @@ export function wrap(text: string, width = 78, indent = '    '): string {
   return lines.join('\n');
 }
 
-/** What set the size, in words (the rule codes stay in the JSON output). */
-export function boundByLines(boundBy: readonly string[]): string[] {
-  const text = CONSTRAINT_TEXT as Record<string, string>;
+/** What set the size, in words (the rule codes stay in the JSON output; the lever's own words for a lever). */
+export function boundByLines(boundBy: readonly string[], architecture: 'direct' | 'lever' = 'direct'): string[] {
+  const text = (architecture === 'lever' ? LEVER_CONSTRAINT_TEXT : CONSTRAINT_TEXT) as Record<string, string>;
   return boundBy.map((code) => `  - ${wrap(text[code] ?? code, 76)}`);
 }
 
@@ -221,7 +311,8 @@ export function formatCautions(): string {
 /** A sized design as text: heading, tables, what bound it, warnings, then the cautions. */
 export function formatSizingText(result: SizingSuccess, heading?: string): string {
   const parts = [heading ? `${heading}\n` : '', renderSections(sizingSections(result))];
-  parts.push(['What set the size', ...boundByLines(result.boundBy), ''].join('\n'));
+  parts.push(['Why this valve', `  ${wrap(result.choice.reason, 76)}`, ''].join('\n'));
+  parts.push(['What set the size', ...boundByLines(result.boundBy, result.architecture), ''].join('\n'));
   parts.push(['Warnings', ...(result.warnings.length ? warningLines(result.warnings) : ['  none']), ''].join('\n'));
   parts.push(formatCautions());
   return parts.join('\n');

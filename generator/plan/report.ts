@@ -61,7 +61,7 @@ export function planReport(result: PlanResult, files: Readonly<Record<string, re
       `${f(c.aloneFull.flowLph, 1)} / ${f(c.sharedFull.flowLph, 1)} (${f(c.sharedLow.flowLph, 1)})`,
       `${f(c.aloneFull.fillTimeMin, 1)} / ${f(c.sharedFull.fillTimeMin, 1)}`,
       s.ok ? `${f(s.float.outerDiameterMm, 1)} x ${f(s.float.heightMm, 1)}` : '-',
-      s.ok ? `${f(s.housing.footDiameterMm, 0)} x ${f(s.housing.heightMm, 0)}` : '-',
+      s.ok ? (s.architecture === 'direct' ? `${f(s.housing.footDiameterMm, 0)} x ${f(s.housing.heightMm, 0)}` : `${s.architecture}${s.mount === 'rim' ? ' on rim' : ''} ${f(s.footprintMm, 0)} x ${f(s.frame.heightMm, 0)}`) : '-',
       f(plasticG, 0),
       s.ok ? f(s.holdDown.ballastSteelG, 0) : '-',
       warn.join(', ') || '-',
@@ -83,7 +83,7 @@ export function planReport(result: PlanResult, files: Readonly<Record<string, re
   const t = result.totals;
   const totals = [
     ['valves', String(t.valves)],
-    ['printed parts (housing, float, nozzle, pin each)', String(t.parts)],
+    ['printed parts (housing, float, nozzle, pin each; a lever valve frame, arm, float, nozzle, pin and on the rim hanger and stem)', String(t.parts)],
     ['filament', `${f(t.filamentG / 1000, 2)} kg, ${f(t.filamentM, 0)} m of 1.75 mm`],
     ['steel ballast (or anchor pins instead)', `${f(t.ballastSteelG / 1000, 2)} kg`],
     ['seal pads to cut', String(t.valves)],
@@ -115,7 +115,7 @@ export function planReport(result: PlanResult, files: Readonly<Record<string, re
     containers: {
       headers: [
         'container', 'count', 'design', 'floor m', 'head m full / low', 'level mm target: full / low',
-        'flow L/h alone / shared (shared, low tank)', 'fill min alone / shared', 'float mm dia x h', 'housing mm foot x h',
+        'flow L/h alone / shared (shared, low tank)', 'fill min alone / shared', 'float mm dia x h', 'housing (or lever) mm wide x h',
         'plastic g each', 'ballast g each', 'warnings',
       ],
       rows,

@@ -128,7 +128,8 @@ export function solvePlan(plan: PlanInputs, size: (inputs: DesignInputs) => Sizi
   const sized = containers.filter((c): c is PlanContainerResult & { sizing: SizingSuccess } => c.sizing.ok);
   const sumOf = (f: (c: (typeof sized)[number]) => number) => sized.reduce((a, c) => a + c.count * f(c), 0);
   const totals: PlanTotals = {
-    parts: sumOf(() => 4),
+    // housing, float, nozzle, pin; a lever's frame, arm, float, nozzle, pin, and on the rim its hanger and stem
+    parts: sumOf((c) => (c.sizing.architecture === 'direct' ? 4 : c.sizing.rim ? 7 : 5)),
     valves: sumOf(() => 1),
     filamentG: sumOf((c) => c.sizing.mass.totalG - c.sizing.mass.byPart.pad),
     filamentM: sumOf((c) => c.sizing.mass.filamentM),

@@ -3,7 +3,9 @@
  * hour here (the unit is in every name); the solids are built from `parts`
  * alone, so every dimension a builder needs is in it.
  */
-import type { DesignInputs } from './inputs.ts';
+import type { Architecture, DesignInputs, Mount } from './inputs.ts';
+import type { LeverArmSpec, LeverFrameSpec } from './lever/lever-types.ts';
+import type { RimMountSpec } from './rim/rim-mount-spec.ts';
 
 export interface Warning {
   /** stable machine-readable code, e.g. "tilt-gap" */
@@ -142,10 +144,38 @@ export interface PartsSpec {
   };
 }
 
-export interface SizingSuccess {
+/** One architecture and mount the sizing weighed, with its printed plastic or why it does not fit. */
+export interface ChoiceOption {
+  architecture: Architecture;
+  mount: Mount;
+  /** printed plastic, g (the pad not counted: it is cut, not printed); null when it does not fit */
+  plasticG: number | null;
+  /** one plain sentence: what it weighs, or why not */
+  note: string;
+}
+
+/**
+ * How the architecture and the mount were settled: fixed by the document, the direct valve because it fits
+ * ("auto" keeps it wherever it does), or the least plastic of those that fit.
+ */
+export interface Choice {
+  by: 'document' | 'direct-first' | 'least-plastic';
+  /** one or two plain sentences for the grower */
+  reason: string;
+  options: ChoiceOption[];
+}
+
+/** What every sized valve reports, direct or lever. */
+interface SizingCommon {
   ok: true;
   /** the inputs, with the demand also in litres per day */
   inputs: DesignInputs & { demandLpd: number };
+  architecture: Architecture;
+  mount: Mount;
+  /** the valve's widest extent seen from above (what limits.maxOuterDiameter limits), mm */
+  footprintMm: number;
+  choice: Choice;
+  /** the force the pad needs on the lip (for a lever: at the pad, the float's own push is float.availableForceN and lever.*) */
   closingForce: {
     atHeadMaxN: number;
     atHeadMinN: number;
@@ -198,8 +228,9 @@ export interface SizingSuccess {
     /** printed plastic of the float shell */
     shellVolumeMm3: number;
     massG: number;
+    /** the float's own lift fully submerged, N (for a lever: at the float, before the arm multiplies it) */
     availableForceN: number;
-    /** available force over the force needed at H_max */
+    /** available force over the force needed at H_max (for a lever: the pad force it gives, through the arm) */
     reserve: number;
     /** submerged depth when sealed at H_max and H_min */
     sealDepthAtHeadMaxMm: number;
@@ -213,16 +244,7 @@ export interface SizingSuccess {
     /** rise of the tight shut-off level at full tank per mL taken in, mm */
     levelRisePerMlMm: number;
   };
-  housing: {
-    boreMm: number;
-    outerDiameterMm: number;
-    footDiameterMm: number;
-    heightMm: number;
-    wallMm: number;
-    massG: number;
-  };
   nozzle: { tipHeightMm: number; travelMm: number; minimumTravelMm: number; orificeMm: number; sealDiameterMm: number; massG: number };
-  pin: { topHeightMm: number; massG: number };
   levels: {
     targetMm: number;
     shutOffAtHeadMaxMm: number;
@@ -270,6 +292,26 @@ export interface SizingSuccess {
    * to 1 mm below the level held, min; null without reservoir.area and rise, or when the valve cannot outpace the demand
    */
   fill: { timeToHeldMin: number | null; fromLevelMm: number | null; toLevelMm: number | null };
+  /** which constraints stopped a lighter design */
+  boundBy: string[];
+  warnings: Warning[];
+}
+
+/** The float pushing the pad straight up, in a housing standing on the floor. */
+export interface DirectSizing extends SizingCommon {
+  architecture: 'direct';
+  mount: 'floor';
+  lever: null;
+  rim: null;
+  housing: {
+    boreMm: number;
+    outerDiameterMm: number;
+    footDiameterMm: number;
+    heightMm: number;
+    wallMm: number;
+    massG: number;
+  };
+  pin: { topHeightMm: number; massG: number };
   /** drains sized on the high end of the flow band */
   drain: { requiredAreaMm2: number; providedAreaMm2: number; notchCount: number };
   vents: { count: number; diameterMm: number; areaMm2: number };
@@ -303,15 +345,104 @@ export interface SizingSuccess {
     hardStopIndentationMm: number;
   };
   mass: {
+    /** printed parts and the pad, g */
     totalG: number;
     filamentM: number;
     byPart: { housing: number; float: number; nozzle: number; pin: number; pad: number };
   };
-  /** which constraints stopped a lighter design */
-  boundBy: string[];
-  warnings: Warning[];
   parts: PartsSpec;
 }
+
+/** The lever's own figures (issue 13, size --json): mm, N. */
+export interface LeverFigures {
+  /** mechanical advantage a_float / a_pad */
+  ratio: number;
+  /** pivot axis above the container floor */
+  pivotHeightMm: number;
+  /** the arm from its heel to its tip */
+  armLengthMm: number;
+  /** the pivot's friction band on the level: the valve reopens this much below where it shut */
+  hysteresisMm: number;
+  padArmMm: number;
+  floatArmMm: number;
+  /** the float's push at the tight seal, full and low tank (closing, friction against it) */
+  floatPushAtHeadMaxN: number;
+  floatPushAtHeadMinN: number;
+  /** pivot friction torque at the seal, full tank */
+  frictionTorqueNmm: number;
+  /** the arm with its pad: dry weight (above the water at the seal) and its centroid's distance from the pivot */
+  armWeightN: number;
+  armCentroidMm: number;
+  /** the pad's tilt and the open lip at first touch (the arm turns the pad onto the lip) */
+  padTiltDeg: number;
+  lipGapMm: number;
+  /** the pad's drop from the lip with the arm at rest */
+  restTravelMm: number;
+  /**
+   * the pad force a float push gives through the arm (water rising: the arm's weight and the pivot's friction
+   * against it), a straight line: pad force = perNewton x float push + offsetN (offsetN < 0: the arm's weight)
+   */
+  padForceFromPush: { perNewton: number; offsetN: number };
+}
+
+/** The rim mount's figures, mm, g. */
+export interface RimFigures {
+  /** the slotted stem's travel either way from the middle, after printing */
+  adjustMm: number;
+  rimHeightMm: number;
+  wallThicknessMm: number;
+  stemLengthMm: number;
+  /** the valve's top as hung at the middle of the slot, above the container floor */
+  valveTopZMm: number;
+}
+
+/** A lever valve's part dimensions and mounted positions, for the solids (z up from the container floor). */
+export interface LeverPartsSpec {
+  printClearanceMm: number;
+  arm: LeverArmSpec;
+  frame: LeverFrameSpec;
+  float: FloatSpec;
+  nozzle: NozzleSpec;
+  /** the pivot pin (the retainer pin's shape, spanning the frame) */
+  pin: PinSpec;
+  rim: RimMountSpec | null;
+  /** the seal pad disc in the arm's pocket */
+  pad: { diameterMm: number; thicknessMm: number; proudMm: number };
+  volumes: { armMm3: number; frameMm3: number; floatMm3: number; nozzleMm3: number; pinMm3: number; hangerMm3: number; stemMm3: number };
+  mount: {
+    pivotZMm: number;
+    /** nozzle tip (sealing face) */
+    nozzleTipZMm: number;
+    /** float bottom with the arm level at the seal, full tank */
+    floatSealZMm: number;
+    /** the arm's turn, nose down, at rest, rad */
+    restTurnRad: number;
+  };
+}
+
+/** The float on an arm that multiplies its push, on the floor or hung from the rim. */
+export interface LeverSizing extends SizingCommon {
+  architecture: 'lever';
+  lever: LeverFigures;
+  rim: RimFigures | null;
+  frame: { heightMm: number; widthMm: number; massG: number };
+  arm: { massG: number };
+  pin: { diameterMm: number; massG: number };
+  /**
+   * flooded: the valve's uplift (positive: it would float off), the moment tipping it about the foot's back edge,
+   * and what holds it with 1.5 on the flood uplift: the anchors' pull or steel ballast at them (floor), or the
+   * hanger's hold on the wall (rim)
+   */
+  holdDown: { upliftN: number; tippingMomentNmm: number; anchorForceN: number; ballastSteelG: number };
+  mass: {
+    totalG: number;
+    filamentM: number;
+    byPart: { frame: number; arm: number; float: number; nozzle: number; pin: number; pad: number; hanger: number; stem: number };
+  };
+  parts: LeverPartsSpec;
+}
+
+export type SizingSuccess = DirectSizing | LeverSizing;
 
 export interface WayOut {
   /** document path of the setting to change, e.g. "level.target" */

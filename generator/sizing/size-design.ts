@@ -14,8 +14,11 @@ import { nozzleThinnestWallMm } from './parts/nozzle-spec.ts';
 import { landStrain } from './seal/land-strain.ts';
 import { leakToleranceMl } from './float/leak-tolerance-ml.ts';
 import type { Candidate } from './layout/evaluate-candidate.ts';
-import type { DesignInputs } from './inputs.ts';
-import type { SizingFailure, SizingResult, SizingSuccess, Warning, WayOut } from './result.ts';
+import type { Architecture, DesignInputs, Mount } from './inputs.ts';
+import type { Choice, ChoiceOption, DirectSizing, SizingFailure, SizingResult, SizingSuccess, Warning, WayOut } from './result.ts';
+import { LEVER_CONSTRAINT_TEXT } from './lever/lever-constraint-text.ts';
+import type { LeverSearchOutcome } from './lever/search-lever.ts';
+import { leverPlasticG, leverSizing, leverTooNearOverflow, searchLeverFor, type LeverFlows } from './size-lever.ts';
 import { wayOutApplies } from './way-out-applies.ts';
 import { lineForDesign, type FlowBand } from './throttle/line-for-design.ts';
 import { characteristicPoints, throttleReport } from './throttle/throttle-report.ts';
@@ -230,7 +233,8 @@ function demandFailure(inp: DesignInputs, openLowTankLph: number): SizingFailure
   return { ok: false, reasons, waysOut: applicable(inp, waysOut), warnings: [] };
 }
 
-function warningsFor(b: DesignBasis, c: Candidate, netWeightN: number, ballastG: number, lowFlow: boolean): Warning[] {
+/** Warnings for any valve of these inputs: the wall, the flow at low tank, the bench points, old fields, the pad. */
+function commonWarnings(b: DesignBasis, lowFlow: boolean): Warning[] {
   const inp = b.inputs;
   const w: Warning[] = [];
   const wallMm = inp.wallM * 1e3;
@@ -240,15 +244,6 @@ function warningsFor(b: DesignBasis, c: Candidate, netWeightN: number, ballastG:
     w.push({
       code: 'wall-lines',
       message: `The ${fmt(wallMm, 2)} mm wall is ${fmt(lines, 2)} line widths; a whole number (${fmt(Math.round(lines) * line, 2)} mm) prints without gap fill.`,
-    });
-  }
-  if (netWeightN < 0) {
-    w.push({ code: 'housing-floats', message: `Printed in ${inp.materialName} the housing floats on its own; it must be pinned or weighted down.` });
-  }
-  if (ballastG > 0) {
-    w.push({
-      code: 'hold-down',
-      message: `If the container floods, the float lifts the housing: pin the foot down or add ${fmt(ballastG, 0)} g of steel ballast.`,
     });
   }
   if (lowFlow) {
@@ -275,6 +270,22 @@ function warningsFor(b: DesignBasis, c: Candidate, netWeightN: number, ballastG:
   if (b.fromCalibration && b.calibrationRmsN > 0.05 * b.forceAtHeadMaxN) {
     w.push({ code: 'calibration-scatter', message: 'The bench points scatter more than 5 % about the fitted line: repeat the measurements.' });
   }
+  return w;
+}
+
+/** The direct valve's own warnings: a housing that floats, holding it down, a long drop to the pin. */
+function directWarnings(b: DesignBasis, c: Candidate, netWeightN: number, ballastG: number): Warning[] {
+  const inp = b.inputs;
+  const w: Warning[] = [];
+  if (netWeightN < 0) {
+    w.push({ code: 'housing-floats', message: `Printed in ${inp.materialName} the housing floats on its own; it must be pinned or weighted down.` });
+  }
+  if (ballastG > 0) {
+    w.push({
+      code: 'hold-down',
+      message: `If the container floods, the float lifts the housing: pin the foot down or add ${fmt(ballastG, 0)} g of steel ballast.`,
+    });
+  }
   if (c.travelMm > b.preferredTravelMm + 1e-6) {
     w.push({ code: 'long-travel', message: `The float drops ${fmt(c.travelMm)} mm onto its retainer pin when the container runs dry.` });
   }
@@ -282,35 +293,217 @@ function warningsFor(b: DesignBasis, c: Candidate, netWeightN: number, ballastG:
 }
 
 /**
+ * What "auto" weighs first. true: the direct valve whenever it fits (four parts, no pivot, a guided float),
+ * the lightest lever or rim valve only where it does not; false: the least plastic of every option that
+ * fits (issue 13's rule, which makes nearly every valve a lever: 32 g against 133 g on the rooftop tubs).
+ * Kept true for now, so the designs growers already have stay as they are; see the issue-13 notes.
+ */
+const AUTO_PREFERS_DIRECT = true;
+
+type Flows = LeverFlows;
+type Option = { architecture: Architecture; mount: Mount };
+type Tried =
+  | { option: Option; ok: true; plasticG: number; make: (choice: Choice, common: Warning[]) => SizingSuccess }
+  | { option: Option; ok: false; failure: SizingFailure };
+
+const ARCHITECTURE_WORDS: Record<Architecture, string> = { direct: 'a direct valve', lever: 'a lever valve' };
+const MOUNT_WORDS: Record<Mount, string> = { floor: 'standing on the container floor', rim: "hung from the container's rim" };
+const optionWords = (o: Option) => `${ARCHITECTURE_WORDS[o.architecture]} ${MOUNT_WORDS[o.mount]}`;
+const capital = (t: string) => t.charAt(0).toUpperCase() + t.slice(1);
+const lowerFirst = (t: string) => t.charAt(0).toLowerCase() + t.slice(1);
+
+/** The architectures and mounts the sizing weighs for these inputs (the document's fixed ones alone). */
+function optionsFor(inp: DesignInputs): Option[] {
+  const architectures: Architecture[] = inp.architecture !== 'auto' ? [inp.architecture] : ['direct', 'lever'];
+  const mounts: Mount[] = inp.mount !== 'auto' ? [inp.mount] : inp.rimHeightM !== null ? ['floor', 'rim'] : ['floor'];
+  // the direct valve stands on the floor only (its housing has no back plate for the stem)
+  return architectures.flatMap((architecture) => mounts.filter((mount) => architecture === 'lever' || mount === 'floor').map((mount) => ({ architecture, mount })));
+}
+
+/** The direct valve: the float search, then every figure, or why no float fits. */
+function tryDirect(b: DesignBasis, flows: Flows): Tried {
+  const option: Option = { architecture: 'direct', mount: 'floor' };
+  const inp = b.inputs;
+  // DESIGN second part: drains sized on the high end of the flow band
+  const drainRequiredMm2 = drainAreaRequiredM2({ flowM3s: flows.qMaxHigh.flowM3s }) * 1e6;
+  const outcome = searchSize(b, drainRequiredMm2);
+  const c = outcome.best;
+  if (!c) return { option, ok: false, failure: failure(b, outcome) };
+  const shutOffMax = c.sealBottomMm + depthForForceMm(c.float, b.forceAtHeadMaxN, c.massKg, inp.liquidDensityKgM3);
+  if (inp.overflowM !== null && shutOffMax > (inp.overflowM - OVERFLOW_MARGIN_M) * 1e3 + 1e-9) return { option, ok: false, failure: overflowFailure(inp, shutOffMax) };
+  const v = c.volumes;
+  const plasticG = (v.housingMm3 + v.nozzleMm3 + v.pinMm3 + v.floatMm3) * 1e-9 * inp.materialDensityKgM3 * 1e3;
+  return { option, ok: true, plasticG, make: (choice, common) => directSizing(b, c, outcome, flows, drainRequiredMm2, choice, common) };
+}
+
+/** A lever valve on one mount: the lever search, then every figure, or why no lever fits. */
+function tryLever(b: DesignBasis, mount: Mount, flows: Flows): Tried {
+  const option: Option = { architecture: 'lever', mount };
+  const inp = b.inputs;
+  const outcome = searchLeverFor(b, mount)!;
+  const c = outcome.best;
+  if (!c) return { option, ok: false, failure: leverFailure(b, mount, outcome) };
+  if (leverTooNearOverflow(c, inp.overflowM)) return { option, ok: false, failure: overflowFailure(inp, c.shutOffAtHeadMaxMm) };
+  return { option, ok: true, plasticG: leverPlasticG(c, inp.materialDensityKgM3), make: (choice, common) => leverSizing(b, c, outcome, flows, choice, common) };
+}
+
+/** Whether a lever valve on this mount fits these inputs (for ways out). */
+function leverWorks(inp: DesignInputs, mount: Mount): boolean {
+  try {
+    const b = designBasis(inp);
+    if (nozzleProblems(b).reasons.length || padOnStop(b)) return false;
+    return searchLeverFor(b, mount)?.best != null;
+  } catch {
+    return false;
+  }
+}
+
+/** No lever fits on this mount: the rules that rejected every candidate, and what would make one fit. */
+function leverFailure(b: DesignBasis, mount: Mount, outcome: LeverSearchOutcome): SizingFailure {
+  const inp = b.inputs;
+  // the rule that turned away the most candidates first
+  const reasons: Warning[] = [...outcome.rejections.entries()].sort((x, y) => y[1] - x[1]).map(([code]) => ({ code, message: capital(`${LEVER_CONSTRAINT_TEXT[code]}.`) }));
+  if (reasons.length === 0) {
+    reasons.push({ code: 'reserve', message: `${capital(LEVER_CONSTRAINT_TEXT.reserve)} (${fmt(b.forceAtHeadMaxN, 2)} N at ${fmt(inp.headMaxM, 2)} m); no float and arm within the limits can do that.` });
+  }
+  const waysOut: WayOut[] = [];
+  if (outcome.rejections.has('outer-diameter-limit')) {
+    const wide = searchLeverFor(b, mount, 250);
+    if (wide?.best && wide.smallestFootprintMm > inp.maxOuterDiameterM * 1e3) {
+      // the narrowest valve the wide search saw; the search at that limit may step over it (coarse grid), so
+      // widen a little at a time up to the lightest one's footprint, which it finds for certain
+      const from = Math.ceil(wide.smallestFootprintMm);
+      const to = Math.ceil(wide.best.footprintMm);
+      for (let v = from; v <= to; v = v === to ? to + 1 : Math.min(to, v + 3)) {
+        if (!leverWorks({ ...inp, maxOuterDiameterM: v / 1e3 }, mount)) continue;
+        waysOut.push({ field: 'limits.maxOuterDiameter', value: `${v} mm`, message: `allow a valve ${v} mm across, seen from above` });
+        break;
+      }
+    }
+  }
+  if (mount === 'floor' && inp.rimHeightM === null && (outcome.rejections.has('part-size') || outcome.rejections.has('travel'))) {
+    const rim = Math.ceil(inp.targetLevelM * 1e3 + 100);
+    if (leverWorks({ ...inp, rimHeightM: rim / 1e3, mount: 'rim' }, 'rim')) {
+      waysOut.push({ field: 'container.rimHeight', value: `${rim} mm`, message: `hang it from the container's rim (give your rim's real height; ${rim} mm works)`, also: [{ field: 'valve.mount', value: 'rim' }] });
+    }
+  }
+  if (mount === 'rim' && leverWorks({ ...inp, mount: 'floor' }, 'floor')) {
+    waysOut.push({ field: 'valve.mount', value: inp.architecture === 'lever' ? 'floor' : 'auto', message: 'stand it on the container floor' });
+  }
+  if (mount === 'floor' && inp.rimHeightM !== null && leverWorks(inp, 'rim')) {
+    waysOut.push({ field: 'valve.mount', value: 'rim', message: "hang it from the container's rim" });
+  }
+  if (inp.architecture === 'lever' && works({ ...inp, architecture: 'direct', mount: 'floor' })) {
+    waysOut.push({ field: 'valve.architecture', value: 'direct', message: 'a direct valve, the float pushing the pad straight up', ...(inp.mount === 'rim' ? { also: [{ field: 'valve.mount', value: 'floor' }] } : {}) });
+  }
+  return { ok: false, reasons, waysOut: applicable(inp, waysOut), warnings: [] };
+}
+
+/** The reason for the choice, in plain words. */
+function choiceFor(inp: DesignInputs, chosen: Tried & { ok: true }, tried: Tried[]): Choice {
+  const options: ChoiceOption[] = tried.map((t) => ({
+    architecture: t.option.architecture,
+    mount: t.option.mount,
+    plasticG: t.ok ? t.plasticG : null,
+    note: t.ok ? `${fmt(t.plasticG)} g of plastic` : `does not fit: ${t.failure.reasons[0]?.message ?? 'no size works'}`,
+  }));
+  const what = capital(optionWords(chosen.option));
+  const limit = `${fmt(inp.maxOuterDiameterM * 1e3, 0)} mm`;
+  const fixed = [inp.architecture !== 'auto' ? `valve.architecture "${inp.architecture}"` : '', inp.mount !== 'auto' ? `valve.mount "${inp.mount}"` : ''].filter(Boolean);
+  if (tried.length === 1) {
+    const reason = fixed.length
+      ? `${what}, as the design asks (${fixed.join(', ')}): ${fmt(chosen.plasticG)} g of plastic within ${limit}.`
+      : `${what}: it fits within ${limit} (${fmt(chosen.plasticG)} g of plastic), and floatwright makes the direct valve wherever it fits. valve.architecture "lever" asks for a lever valve instead.`;
+    return { by: fixed.length ? 'document' : 'direct-first', reason, options };
+  }
+  const others = tried
+    .filter((t) => t !== chosen)
+    .map((t) => (t.ok ? `${optionWords(t.option)} takes ${fmt(t.plasticG)} g` : `${optionWords(t.option)} does not fit (${lowerFirst(t.failure.reasons[0]?.message ?? 'no size works').replace(/\.$/, '')})`));
+  const reason = `${what}: the least plastic that fits within ${limit}, ${fmt(chosen.plasticG)} g; ${others.join('; ')}.${fixed.length ? ` The design fixes ${fixed.join(' and ')}.` : ''}`;
+  return { by: 'least-plastic', reason, options };
+}
+
+/** Every option failed: their reasons (named by option when there were several) and every way out. */
+function combinedFailure(inp: DesignInputs, b: DesignBasis, tried: (Tried & { ok: false })[]): SizingFailure {
+  if (tried.length === 1) {
+    const only = tried[0]!;
+    const waysOut = [...only.failure.waysOut];
+    return { ...only.failure, waysOut };
+  }
+  const reasons = tried.flatMap((t) => t.failure.reasons.map((r) => ({ code: r.code, message: `${capital(optionWords(t.option))}: ${r.message}` })));
+  const seen = new Set<string>();
+  const waysOut = tried.flatMap((t) => t.failure.waysOut).filter((w) => {
+    const key = `${w.field}=${w.value}`;
+    if (seen.has(key)) return false;
+    seen.add(key);
+    return true;
+  });
+  return { ok: false, reasons, waysOut, warnings: [] };
+}
+
+/**
  * Sizes a complete float valve (DESIGN.md, "Sizing model"): forces, float,
  * layout, flow, drain, vents, hold-down, tilt and masses, with every part's
  * dimensions for the solids. Pure: numbers in, numbers out.
+ *
+ * Architecture and mount (issue 13): the document's, or (valve.architecture and
+ * valve.mount "auto") the option with the least printed plastic among those that
+ * fit limits.maxOuterDiameter, the valve's widest extent seen from above. The rim
+ * is only weighed when container.rimHeight is given; the direct valve only stands
+ * on the floor. For now (AUTO_PREFERS_DIRECT) "auto" keeps the direct valve
+ * whenever it fits and weighs the others only where it does not.
  */
 export function sizeDesign(inp: DesignInputs): SizingResult {
   const b = designBasis(inp);
   const early = basisProblems(b);
   if (early.reasons.length) return { ok: false, reasons: early.reasons, waysOut: applicable(inp, early.waysOut), warnings: [] };
 
-  const rho = inp.liquidDensityKgM3;
-  const qMax = flowAt(b, inp.headMaxM);
   const qMin = flowAt(b, inp.headMinM);
   // the plants must not drink more than the valve gives wide open at the lowest tank level (no float changes that)
   if (inp.demandM3s > qMin.flowM3s) return demandFailure(inp, qMin.flowLph);
-  const qMaxLow = flowAt(b, inp.headMaxM, 'low');
-  const qMaxHigh = flowAt(b, inp.headMaxM, 'high');
-  // DESIGN second part: drains sized on the high end of the flow band
-  const drainRequiredMm2 = drainAreaRequiredM2({ flowM3s: qMaxHigh.flowM3s }) * 1e6;
-  const outcome = searchSize(b, drainRequiredMm2);
-  const c = outcome.best;
-  if (!c) return failure(b, outcome);
+  const flows: Flows = { qMax: flowAt(b, inp.headMaxM), qMin, qMaxLow: flowAt(b, inp.headMaxM, 'low'), qMaxHigh: flowAt(b, inp.headMaxM, 'high') };
+  if (inp.architecture === 'direct' && inp.mount === 'rim') return directOnRimFailure(inp);
 
+  const options = optionsFor(inp);
+  const attempt = (o: Option) => (o.architecture === 'direct' ? tryDirect(b, flows) : tryLever(b, o.mount, flows));
+  const tried: Tried[] = [];
+  if (AUTO_PREFERS_DIRECT && inp.architecture === 'auto' && options[0]?.architecture === 'direct') {
+    const first = attempt(options[0]);
+    if (first.ok) return first.make(choiceFor(inp, first, [first]), commonWarnings(b, flows.qMin.flowLph < 1));
+    tried.push(first);
+    options.shift();
+  }
+  tried.push(...options.map(attempt));
+  const fitting = tried.filter((t): t is Tried & { ok: true } => t.ok);
+  if (fitting.length === 0) return combinedFailure(inp, b, tried as (Tried & { ok: false })[]);
+  // least plastic; a tie to the simpler direct valve, then the floor (the order tried)
+  const chosen = fitting.reduce((best, t) => (Math.round(t.plasticG * 100) < Math.round(best.plasticG * 100) ? t : best));
+  return chosen.make(choiceFor(inp, chosen, tried), commonWarnings(b, flows.qMin.flowLph < 1));
+}
+
+/** A direct valve asked to hang from the rim: not made (its housing has no back plate for the stem). */
+function directOnRimFailure(inp: DesignInputs): SizingFailure {
+  const reasons: Warning[] = [{
+    code: 'direct-on-rim',
+    message: "A direct valve stands on the container floor; only the lever valve hangs from the rim (the direct valve's round housing has nothing for the slotted stem to hold).",
+  }];
+  const waysOut: WayOut[] = [];
+  if (leverWorks({ ...inp, architecture: 'lever' }, 'rim')) waysOut.push({ field: 'valve.architecture', value: 'lever', message: 'a lever valve hung from the rim' });
+  if (works({ ...inp, mount: 'floor' })) waysOut.push({ field: 'valve.mount', value: 'floor', message: 'the direct valve standing on the container floor' });
+  return { ok: false, reasons, waysOut: applicable(inp, waysOut), warnings: [] };
+}
+
+/** The direct valve's every figure from the chosen candidate. */
+function directSizing(b: DesignBasis, c: Candidate, outcome: ReturnType<typeof searchSize>, flows: Flows, drainRequiredMm2: number, choice: Choice, common: Warning[]): DirectSizing {
+  const inp = b.inputs;
+  const rho = inp.liquidDensityKgM3;
+  const { qMax, qMin, qMaxLow, qMaxHigh } = flows;
   const f = c.float;
   const depthAt = (forceN: number, massKg = c.massKg) => depthForForceMm(f, forceN, massKg, rho);
   const deltaMm = b.indentationMm;
   const floatingDepth = depthAt(0);
   const shutOffMax = c.sealBottomMm + depthAt(b.forceAtHeadMaxN);
   const shutOffMin = c.sealBottomMm + depthAt(b.forceAtHeadMinN);
-  if (inp.overflowM !== null && shutOffMax > (inp.overflowM - OVERFLOW_MARGIN_M) * 1e3 + 1e-9) return overflowFailure(inp, shutOffMax);
   const throttle = throttleReport(b, c, qMax.flowLph, qMin.flowLph);
 
   // The pad in service (DESIGN second part): with the tank empty and the reservoir full the float's whole
@@ -364,9 +557,15 @@ export function sizeDesign(inp: DesignInputs): SizingResult {
 
   const vents = c.housing.vents;
   const notches = c.housing.drainNotches;
-  const result: SizingSuccess = {
+  const result: DirectSizing = {
     ok: true,
     inputs: { ...inp, demandLpd: inp.demandM3s * 8.64e7 },
+    architecture: 'direct',
+    mount: 'floor',
+    footprintMm: c.housing.foot.outerDiameterMm,
+    choice,
+    lever: null,
+    rim: null,
     closingForce: {
       atHeadMaxN: b.forceAtHeadMaxN,
       atHeadMinN: b.forceAtHeadMinN,
@@ -488,7 +687,7 @@ export function sizeDesign(inp: DesignInputs): SizingResult {
       byPart: { housing: housingG, float: floatPlasticG, nozzle: nozzleG, pin: pinG, pad: padG },
     },
     boundBy: outcome.boundBy,
-    warnings: warningsFor(b, c, netWeightN, ballastG, qMin.flowLph < 1),
+    warnings: [...common, ...directWarnings(b, c, netWeightN, ballastG)],
     parts: {
       printClearanceMm: PRINT_CLEARANCE_MM,
       housing: c.housing,

@@ -12,7 +12,11 @@
  */
 import { QUALITY, type IndexedMesh, type Quality } from './mesh/index.ts';
 import type { SizingSuccess } from '../sizing/result.ts';
-import { PART_NAMES, type PartName } from './assembly.ts';
+import { PART_NAMES, valvePartNames, type PartName } from './assembly.ts';
+import { buildLeverArmMesh } from './parts/lever-arm-solid.ts';
+import { buildLeverFrameMesh } from './parts/lever-frame-solid.ts';
+import { buildRimHangerMesh } from './parts/rim-hanger-solid.ts';
+import { buildSlottedStemMesh } from './parts/slotted-stem-solid.ts';
 import { buildFloatMesh } from './parts/float-solid.ts';
 import { buildHousingMesh } from './parts/housing-solid.ts';
 import { buildNozzleMesh } from './parts/nozzle-solid.ts';
@@ -36,11 +40,13 @@ export const STAND_PART_NAMES: readonly StandPartName[] = ['stand-base', 'stand-
 /** Every part buildPart makes: the valve's, the pad template and the test stand's. */
 export type AnyPartName = PartName | 'pad' | StandPartName;
 
-export type BuiltParts = Record<PartName, IndexedMesh> & { pad?: IndexedMesh } & Partial<Record<StandPartName, IndexedMesh>>;
+/** The meshes a build made: the valve's parts (valvePartNames: the direct valve's or the lever's), the pad and the stand on request. */
+export type BuiltParts = Partial<Record<AnyPartName, IndexedMesh>>;
 
-/** The parts a build makes, in order, for these options. */
-export function partNamesFor(opts: Pick<BuildOptions, 'withPad' | 'withTestStand'>): AnyPartName[] {
-  return [...PART_NAMES, ...(opts.withPad ? (['pad'] as const) : []), ...(opts.withTestStand ? STAND_PART_NAMES : [])];
+/** The parts a build makes, in order, for these options (the direct valve's without a sizing, for the old callers). */
+export function partNamesFor(opts: Pick<BuildOptions, 'withPad' | 'withTestStand'>, sizing?: SizingSuccess): AnyPartName[] {
+  const valve = sizing ? valvePartNames(sizing) : [...PART_NAMES];
+  return [...valve, ...(opts.withPad ? (['pad'] as const) : []), ...(opts.withTestStand ? STAND_PART_NAMES : [])];
 }
 
 /** Error from a part builder, naming the part. */
@@ -67,25 +73,32 @@ function checkInput(sizing: SizingSuccess, opts: BuildOptions, names: readonly A
 }
 
 async function buildUnchecked(name: AnyPartName, sizing: SizingSuccess, quality: Quality): Promise<IndexedMesh> {
-  const p = sizing.parts;
   switch (name) {
-    case 'housing':
-      return buildHousingMesh(p.housing, quality);
-    case 'float':
-      return buildFloatMesh(p.float, quality);
-    case 'nozzle':
-      return buildNozzleMesh(p.nozzle, quality);
-    case 'pin':
-      return buildPinMesh(p.pin, quality);
-    case 'pad':
-      return buildPadMesh(p.float, quality);
     case 'stand-base':
       return buildStandBaseMesh(standSpecOf(sizing).base, quality);
     case 'stand-plunger':
       return buildStandPlungerMesh(standSpecOf(sizing).plunger, quality);
-    default:
-      throw new RangeError(`buildPart.name = ${JSON.stringify(name)}; allowed: ${[...PART_NAMES, 'pad', ...STAND_PART_NAMES].map((n) => `"${n}"`).join(', ')}`);
+    case 'float':
+      return buildFloatMesh(sizing.parts.float, quality);
+    case 'nozzle':
+      return buildNozzleMesh(sizing.parts.nozzle, quality);
+    case 'pin':
+      return buildPinMesh(sizing.parts.pin, quality);
   }
+  if (sizing.architecture === 'direct') {
+    const p = sizing.parts;
+    if (name === 'housing') return buildHousingMesh(p.housing, quality);
+    if (name === 'pad') return buildPadMesh(p.float, quality);
+  } else {
+    const p = sizing.parts;
+    if (name === 'frame') return buildLeverFrameMesh(p.frame, quality);
+    if (name === 'arm') return buildLeverArmMesh(p.arm, quality);
+    if (name === 'pad') return buildPadMesh({ padDiameterMm: p.pad.diameterMm, padThicknessMm: p.pad.thicknessMm }, quality);
+    if (name === 'hanger' && p.rim) return buildRimHangerMesh(p.rim, quality);
+    if (name === 'stem' && p.rim) return buildSlottedStemMesh(p.rim, quality);
+  }
+  const allowed = [...valvePartNames(sizing), 'pad', ...STAND_PART_NAMES];
+  throw new RangeError(`buildPart.name = ${JSON.stringify(name)}; allowed for this ${sizing.architecture} valve: ${allowed.map((n) => `"${n}"`).join(', ')}`);
 }
 
 /** One part's mesh in print pose. */
@@ -102,7 +115,7 @@ export async function buildPart(name: AnyPartName, sizing: SizingSuccess, opts: 
 
 /** Every part's mesh in print pose (the pad only with withPad, the stand's parts only with withTestStand). */
 export async function buildParts(sizing: SizingSuccess, opts: BuildOptions): Promise<BuiltParts> {
-  const names = partNamesFor(opts ?? {});
+  const names = partNamesFor(opts ?? {}, sizing?.ok === true && sizing.parts ? sizing : undefined);
   checkInput(sizing, opts, names);
   const meshes = await Promise.all(names.map((name) => buildPart(name, sizing, opts)));
   const out = {} as BuiltParts;

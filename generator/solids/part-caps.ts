@@ -25,7 +25,7 @@ import { segmentsFor, type Quality } from './mesh/index.ts';
 /** Boolean output over its inputs' triangles (measured below 1.5 on every fuzzed part; 3 leaves room). */
 export const BOOLEAN_FACTOR = 3;
 
-export type CappedPart = 'housing' | 'float' | 'nozzle' | 'pin' | 'pad' | 'stand-base' | 'stand-plunger';
+export type CappedPart = 'housing' | 'frame' | 'arm' | 'hanger' | 'stem' | 'float' | 'nozzle' | 'pin' | 'pad' | 'stand-base' | 'stand-plunger';
 
 /** Straight stroke pieces the plunger's mass label may have (measured: "88.8g" has 107 in JSCAD's vector font, "0123456789.g" 162; 6 characters of the worst, 28 each). */
 const LABEL_PIECES_MAX = 6 * 28;
@@ -33,42 +33,83 @@ const LABEL_PIECES_MAX = 6 * 28;
 const revolved = (corners: number, n: number) => 2 * corners * n;
 const prismOf = (sides: number) => 4 * sides;
 
-/** Upper bound of each part's triangle count at `quality`, from the sizing result alone. */
-export function triangleBounds(sizing: SizingSuccess, quality: Quality): Record<CappedPart, number> {
-  const { housing: h, float: f, nozzle: z, pin } = sizing.parts;
+/** Upper bound of each part's triangle count at `quality`, from the sizing result alone (the parts this valve has). */
+export function triangleBounds(sizing: SizingSuccess, quality: Quality): Partial<Record<CappedPart, number>> {
+  const { float: f, nozzle: z, pin } = sizing.parts;
   const stand = standSpecOf(sizing);
+  const nz = segmentsFor(z.shoulderDiameterMm / 2, quality);
+  const nozzleCorners = 10 + 2 * z.barb.count;
+  const np = segmentsFor(pin.diameterMm / 2, quality);
+  const common = {
+    float: revolved(12, segmentsFor(f.outerDiameterMm / 2, quality)),
+    nozzle: BOOLEAN_FACTOR * (revolved(nozzleCorners, nz) + z.crushRibs.count * prismOf(5)),
+    pin: BOOLEAN_FACTOR * (prismOf(np + 2) + 12),
+    'stand-base': BOOLEAN_FACTOR * (revolved(13, segmentsFor(stand.base.footRadiusMm, quality)) + stand.base.slots.count * prismOf(4) + prismOf(5)),
+    'stand-plunger': BOOLEAN_FACTOR * (revolved(8, segmentsFor(stand.plunger.cupRimRadiusMm, quality)) + LABEL_PIECES_MAX * prismOf(4)),
+  };
+  if (sizing.architecture === 'lever') {
+    const { frame: fr, arm: a, rim, pad } = sizing.parts;
+    const ring = (diameterMm: number) => prismOf(segmentsFor(diameterMm / 2, quality) + 3);
+    const rimBounds = rim
+      ? {
+          hanger: BOOLEAN_FACTOR * (prismOf(8) + 3 * ring(rim.pilotHoleDiameterMm)),
+          stem: BOOLEAN_FACTOR * (prismOf(4) + prismOf(segmentsFor(rim.screwHoleDiameterMm / 2, quality) + 2) + 2 * ring(rim.screwHoleDiameterMm)),
+        }
+      : {};
+    return {
+      ...common,
+      ...rimBounds,
+      // boxes, wing wedges and the boss; the seat, the pin hole, three anchor slots or two pilot holes
+      frame: BOOLEAN_FACTOR * (8 * prismOf(6) + ring(fr.bossOuterDiameterMm) + ring(fr.seatBoreMm) + ring(fr.pinHoleDiameterMm) + 3 * ring(fr.anchorDiameterMm) + 2 * ring(fr.stemPilotDiameterMm)),
+      arm: BOOLEAN_FACTOR * (3 * prismOf(4) + ring(a.tongueDiameterMm) + ring(a.pocketDiameterMm) + ring(a.holeDiameterMm)),
+      pad: revolved(4, segmentsFor(pad.diameterMm / 2, quality)),
+    };
+  }
+  const h = sizing.parts.housing;
   const nh = segmentsFor(h.foot.outerDiameterMm / 2, quality);
   const cutters =
     h.vents.count * prismOf(segmentsFor(h.vents.diameterMm / 2, quality)) +
     h.foot.anchorHoles.count * prismOf(segmentsFor(h.foot.anchorHoles.diameterMm / 2, quality)) +
     h.drainNotches.count * prismOf(4) +
     prismOf(segmentsFor(h.pinHoles.diameterMm / 2, quality) + 3);
-  const nz = segmentsFor(z.shoulderDiameterMm / 2, quality);
-  const nozzleCorners = 10 + 2 * z.barb.count;
-  const np = segmentsFor(pin.diameterMm / 2, quality);
   return {
+    ...common,
     housing: BOOLEAN_FACTOR * (revolved(10, nh) + cutters),
-    float: revolved(12, segmentsFor(f.outerDiameterMm / 2, quality)),
-    nozzle: BOOLEAN_FACTOR * (revolved(nozzleCorners, nz) + z.crushRibs.count * prismOf(5)),
-    pin: BOOLEAN_FACTOR * (prismOf(np + 2) + 12),
     pad: revolved(4, segmentsFor(f.padDiameterMm / 2, quality)),
-    'stand-base': BOOLEAN_FACTOR * (revolved(13, segmentsFor(stand.base.footRadiusMm, quality)) + stand.base.slots.count * prismOf(4) + prismOf(5)),
-    'stand-plunger': BOOLEAN_FACTOR * (revolved(8, segmentsFor(stand.plunger.cupRimRadiusMm, quality)) + LABEL_PIECES_MAX * prismOf(4)),
   };
 }
 
-/** Largest extent of each part, mm, from its spec. */
-export function partExtentsMm(sizing: SizingSuccess): Record<CappedPart, number> {
-  const { housing: h, float: f, nozzle: z, pin } = sizing.parts;
+/** Largest extent of each part, mm, from its spec (the parts this valve has). */
+export function partExtentsMm(sizing: SizingSuccess): Partial<Record<CappedPart, number>> {
+  const { float: f, nozzle: z, pin } = sizing.parts;
   const stand = standSpecOf(sizing);
-  return {
-    housing: Math.max(h.heightMm, h.foot.outerDiameterMm),
+  const common = {
     float: Math.max(f.heightMm, f.outerDiameterMm),
     nozzle: Math.max(z.totalLengthMm, z.shoulderDiameterMm, z.collarDiameterMm + 2 * z.crushRibs.heightMm),
     pin: Math.max(pin.lengthMm + pin.head.lengthMm, pin.head.widthMm, pin.head.heightMm),
-    pad: Math.max(f.padDiameterMm, f.padThicknessMm),
     'stand-base': Math.max(stand.base.heightMm, 2 * stand.base.footRadiusMm),
     'stand-plunger': Math.max(stand.plunger.heightMm, 2 * stand.plunger.cupRimRadiusMm),
+  };
+  if (sizing.architecture === 'lever') {
+    const { frame: fr, arm: a, rim, pad } = sizing.parts;
+    return {
+      ...common,
+      frame: Math.max(fr.heightMm, fr.deckFrontXMm - fr.footBackXMm, fr.footWidthMm, fr.deckWidthMm),
+      arm: Math.max(a.tipXMm - a.tailXMm, a.eyeDepthMm + a.tongueLengthMm, a.barWidthMm),
+      pad: Math.max(pad.diameterMm, pad.thicknessMm),
+      ...(rim
+        ? {
+            hanger: Math.max(rim.hanger.innerLegLengthMm + rim.hanger.legMm, rim.hanger.gapMm + 2 * rim.hanger.legMm, rim.hanger.widthMm),
+            stem: Math.max(rim.stem.lengthMm, rim.stem.widthMm),
+          }
+        : {}),
+    };
+  }
+  const h = sizing.parts.housing;
+  return {
+    ...common,
+    housing: Math.max(h.heightMm, h.foot.outerDiameterMm),
+    pad: Math.max(f.padDiameterMm, f.padThicknessMm),
   };
 }
 
@@ -80,15 +121,15 @@ export function partExtentsMm(sizing: SizingSuccess): Record<CappedPart, number>
 export function partCapProblems(sizing: SizingSuccess, quality: Quality, parts: readonly CappedPart[]): { part: CappedPart; message: string }[] {
   const problems: { part: CappedPart; message: string }[] = [];
   const extents = partExtentsMm(sizing);
-  let bounds: Record<CappedPart, number> | null = null;
+  let bounds: Partial<Record<CappedPart, number>> | null = null;
   try {
     bounds = triangleBounds(sizing, quality);
   } catch (error) {
     // segmentsFor refuses non-finite, negative or runaway radii
-    problems.push({ part: parts[0] ?? 'housing', message: `the parts' circles cannot be faceted (${error instanceof Error ? error.message : String(error)})` });
+    problems.push({ part: parts[0] ?? 'float', message: `the parts' circles cannot be faceted (${error instanceof Error ? error.message : String(error)})` });
   }
   for (const part of parts) {
-    const extent = extents[part];
+    const extent = extents[part] ?? Number.NaN;
     if (!(Number.isFinite(extent) && extent > 0)) problems.push({ part, message: `its size (${extent} mm) is not a positive number of millimetres` });
     else if (extent > PART_SIZE_CAP_MM + 1e-6) problems.push({ part, message: `${extent.toFixed(1)} mm across is over the ${PART_SIZE_CAP_MM} mm a part may be` });
     const bound = bounds?.[part];

@@ -104,7 +104,7 @@ export async function writeDesignFiles(
   }
   const quality = options.quality;
   const built = await buildParts(sizing, { quality, withPad: options.withPad, withTestStand: options.withTestStand });
-  const names = partNamesFor(options);
+  const names = partNamesFor(options, sizing);
   const density = (name: AnyPartName) => (name === 'pad' ? sizing.inputs.padDensityKgM3 : sizing.inputs.materialDensityKgM3);
 
   // Everything is made in memory first, so a failure leaves the folder as it was.

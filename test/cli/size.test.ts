@@ -134,6 +134,23 @@ describe('input handling', () => {
     expect(result.inputs.headMaxM).toBe(2.2); // from the file
   });
 
+  it('--architecture and --mount (issue 13): size --json carries the architecture, mount, footprint, lever and rim figures', async () => {
+    const [onFloor, onRim, noRim] = await Promise.all([
+      floatwright('size', '--head-max', '2m', '--head-min', '1.5m', '--level', '25mm', '--architecture', 'lever', '--json'),
+      floatwright('size', '--head-max', '1.5m', '--level', '250mm', '--rim-height', '350mm', '--mount', 'rim', '--json'),
+      floatwright('size', '--head-max', '1.5m', '--level', '250mm', '--mount', 'rim', '--json'),
+    ]);
+    const floor = json(onFloor);
+    expect(floor).toMatchObject({ ok: true, architecture: 'lever', mount: 'floor', rim: null });
+    for (const key of ['ratio', 'pivotHeightMm', 'armLengthMm', 'hysteresisMm']) expect(typeof floor.lever[key]).toBe('number');
+    expect(floor.footprintMm).toBeLessThanOrEqual(120);
+    const rim = json(onRim);
+    expect(rim).toMatchObject({ ok: true, architecture: 'lever', mount: 'rim', rim: { adjustMm: 10 } });
+    // a rim mount with no rim height is refused by its field and flag
+    expect(noRim.status).toBe(2);
+    expect(json(noRim).errors[0].field).toBe('container.rimHeight');
+  });
+
   it('flags alone size a valve; without --head-max they name the field', async () => {
     const [sized, missing] = await Promise.all([
       floatwright('size', '--head-max', '7ft', '--level', '1.5in', '--json'),

@@ -43,7 +43,7 @@ function sizedDesign(doc: Record<string, unknown>, rise: number): { sizing: Sizi
   return second.ok ? { sizing: second, doc: moved } : null;
 }
 
-const tally = { drawn: 0, built: 0, maxBuildMs: 0, maxTriangles: 0 };
+const tally = { drawn: 0, built: 0, levers: 0, maxBuildMs: 0, maxTriangles: 0 };
 
 describe('solids over the accepted input space (fast-check, manifold-3d)', () => {
   it(`${BUILD_RUNS} designs: every part a closed 2-manifold, positive volume, on the bed; no overlaps when mounted`, async () => {
@@ -59,6 +59,7 @@ describe('solids over the accepted input space (fast-check, manifold-3d)', () =>
         const parts = (await buildParts(sizing, { quality: 'preview', withPad: true })) as unknown as Record<string, IndexedMesh>;
         const ms = performance.now() - started;
         tally.built++;
+        if (sizing.architecture === 'lever') tally.levers++;
         tally.maxBuildMs = Math.max(tally.maxBuildMs, ms);
         for (const m of Object.values(parts)) tally.maxTriangles = Math.max(tally.maxTriangles, m.indices.length / 3);
         // the caps are checked before building from a bound on each part's triangles: the bound must hold

@@ -20,7 +20,7 @@
  */
 import { transformMesh } from '../../generator/solids/shapes/transform-mesh.ts';
 import type { DesignInputs } from '../../generator/sizing/inputs.ts';
-import type { SizingResult, SizingSuccess, WayOut } from '../../generator/sizing/result.ts';
+import type { DirectSizing, LeverSizing, SizingResult, SizingSuccess, WayOut } from '../../generator/sizing/result.ts';
 import { parseDesign } from '../../generator/doc/schema.ts';
 import { sizeDesign } from '../../generator/sizing/size-design.ts';
 import { headsDefineSlope } from '../../generator/sizing/hydrostatics/fit-seal-calibration.ts';
@@ -95,8 +95,9 @@ export function checkSized(inp: DesignInputs, s: SizingSuccess): string[] {
   // the pad never leans on its stop at the tight seal; in service it sees at most 25 % (the stop)
   expect(s.seal.indentationMm <= s.seal.stopIndentationMm + 1e-9, `pad squeezed ${s.seal.indentationMm} mm at seal, past the stop ${s.seal.stopIndentationMm} mm`);
   expect(s.seal.worstStrain <= 0.25 + 1e-12, `worst pad strain ${s.seal.worstStrain}`);
-  // leak tolerance (Archimedes): (F_avail - F_seal(H_max)) / (rho g)
-  const leak = ((s.float.availableForceN - s.closingForce.atHeadMaxN) / (rho * G)) * 1e6;
+  // leak tolerance (Archimedes): (F_avail - F_seal(H_max)) / (rho g); on a lever the float's own push at the seal
+  const floatNeedsN = s.architecture === 'lever' ? s.lever.floatPushAtHeadMaxN : s.closingForce.atHeadMaxN;
+  const leak = ((s.float.availableForceN - floatNeedsN) / (rho * G)) * 1e6;
   expect(Math.abs(leak - s.float.leakToleranceMl) <= 1e-9 * Math.max(1, leak), `leak tolerance ${s.float.leakToleranceMl} mL vs ${leak} mL`);
   expect(s.closingForce.atHeadMaxN > 0, `closing force ${s.closingForce.atHeadMaxN} N is not positive`);
 
@@ -108,40 +109,31 @@ export function checkSized(inp: DesignInputs, s: SizingSuccess): string[] {
   // Archimedes: lift at full submersion, and the reserve over the force needed at H_max
   const lift = (rho * vf * 1e-9 - s.float.massG * 1e-3) * G;
   expect(Math.abs(lift - s.float.availableForceN) <= 1e-6 * Math.max(1, Math.abs(lift)), `lift ${s.float.availableForceN} N vs Archimedes ${lift} N`);
-  expect(lift >= inp.reserve * s.closingForce.atHeadMaxN * (1 - 1e-9), `reserve: lift ${lift} N < ${inp.reserve} x ${s.closingForce.atHeadMaxN} N`);
+  // the pad force the full lift gives (through the arm on a lever) is the reserve times the force needed at H_max
+  const liftAtPad = s.architecture === 'lever' ? s.lever.padForceFromPush.perNewton * lift + s.lever.padForceFromPush.offsetN : lift;
+  expect(liftAtPad >= inp.reserve * s.closingForce.atHeadMaxN * (1 - 1e-9), `reserve: ${liftAtPad} N at the pad < ${inp.reserve} x ${s.closingForce.atHeadMaxN} N`);
   // the seal at H_max happens on the straight side
   expect(s.float.sealDepthAtHeadMaxMm <= fs.cylinderHeightMm + 1e-9, `seal depth ${s.float.sealDepthAtHeadMaxMm} mm above the cylinder ${fs.cylinderHeightMm} mm`);
   expect(s.float.sealDepthAtHeadMaxMm > 0, 'seal depth not positive');
 
   // shut-off at H_min: lower by (H_max - H_min) A_seal / A_float (closed form)
   const aFloat = Math.PI * R * R;
-  const drop = (inp.headMaxM - inp.headMinM) * 1e3 * (s.closingForce.sealAreaMm2 / aFloat);
+  const drop =
+    s.architecture === 'lever'
+      ? ((s.lever.floatPushAtHeadMaxN - s.lever.floatPushAtHeadMinN) / (rho * G * aFloat * 1e-6)) * 1e3
+      : (inp.headMaxM - inp.headMinM) * 1e3 * (s.closingForce.sealAreaMm2 / aFloat);
   const dropSeen = s.levels.shutOffAtHeadMaxMm - s.levels.shutOffAtHeadMinMm;
   expect(Math.abs(dropSeen - drop) <= 1e-3 + 1e-6 * drop, `shut-off drop H_max -> H_min ${dropSeen} mm vs closed form ${drop} mm`);
 
   // travel s >= max(d_o / 2, 1.5 mm) and the layout that defines it
   const minTravel = Math.max((inp.orificeM * 1e3) / 2, 1.5);
   expect(s.nozzle.travelMm >= minTravel - 1e-9, `travel ${s.nozzle.travelMm} mm < ${minTravel} mm`);
-  const padTopRest = s.parts.mount.floatRestZMm + fs.heightMm + fs.padProudMm;
-  expect(Math.abs(s.parts.mount.nozzleTipZMm - padTopRest - s.nozzle.travelMm) <= 1e-6, `tip - pad top at rest ${s.parts.mount.nozzleTipZMm - padTopRest} mm vs travel ${s.nozzle.travelMm} mm`);
-  const sealBottom = s.parts.mount.nozzleTipZMm - fs.heightMm - fs.padProudMm + s.seal.indentationMm;
-  expect(Math.abs(sealBottom - s.parts.mount.floatSealZMm) <= 1e-6, `float bottom at seal ${s.parts.mount.floatSealZMm} vs z_tip - h_f - proud + delta ${sealBottom}`);
   // levels in order: lift-off, first touch, shut-off at H_min, at H_max
   const L = s.levels;
   expect(L.liftOffMm <= L.firstTouchMm + 1e-9 && L.firstTouchMm <= L.shutOffAtHeadMinMm + 1e-9 && L.shutOffAtHeadMinMm <= L.shutOffAtHeadMaxMm + 1e-9,
     `levels out of order: lift-off ${L.liftOffMm}, first touch ${L.firstTouchMm}, shut-off ${L.shutOffAtHeadMinMm} / ${L.shutOffAtHeadMaxMm}`);
   expect(L.minimumReachableMm <= inp.targetLevelM * 1e3 + 1e-6, `target ${inp.targetLevelM * 1e3} below the minimum reachable ${L.minimumReachableMm}`);
 
-  // clearance: bore = D_f + 2 (c_gap + c_print)
-  expect(s.housing.boreMm - s.float.outerDiameterMm >= 2 * RADIAL_GAP_MM - 1e-9, `bore ${s.housing.boreMm} vs float ${s.float.outerDiameterMm}: radial gap under ${RADIAL_GAP_MM} mm`);
-  expect(s.parts.mount.floatRestZMm >= s.parts.mount.pinTopZMm - 1e-9, 'float rests below the pin top');
-
-  // drain (orifice equation, on the high end of the flow band) and vents
-  const q = s.flow.atHeadMaxHighLph / 3.6e6;
-  const need = (q / (C_D * Math.sqrt(2 * G * DRAIN_DH_M))) * 1e6;
-  expect(Math.abs(s.drain.requiredAreaMm2 - need) <= 1e-6 * Math.max(1, need), `drain required ${s.drain.requiredAreaMm2} vs orifice equation ${need}`);
-  expect(s.drain.providedAreaMm2 >= need * (1 - 1e-9), `drain provided ${s.drain.providedAreaMm2} mm2 < required ${need} mm2`);
-  expect(s.vents.count >= 2 && s.vents.diameterMm >= 3, `vents ${s.vents.count} x ${s.vents.diameterMm} mm`);
   expect(s.flow.atHeadMaxLph > 0 && s.flow.atHeadMinLph > 0 && s.flow.atHeadMinLph <= s.flow.atHeadMaxLph * (1 + 1e-9), `flows ${s.flow.atHeadMinLph} / ${s.flow.atHeadMaxLph} L/h`);
 
   // the characteristic: level never falling, flow never rising, zero at the tight shut-off (the float can only
@@ -156,15 +148,66 @@ export function checkSized(inp: DesignInputs, s: SizingSuccess): string[] {
   expect(L.heldAtDemandMm <= L.shutOffAtHeadMaxMm + 1e-9 && L.heldAtDemandLowTankMm <= L.shutOffAtHeadMinMm + 1e-9, `level held ${L.heldAtDemandMm} / ${L.heldAtDemandLowTankMm} above the shut-off`);
   expect(s.flow.atHeadMaxLowLph <= s.flow.atHeadMaxLph * (1 + 1e-9) && s.flow.atHeadMaxLph <= s.flow.atHeadMaxHighLph * (1 + 1e-9), `flow band ${s.flow.atHeadMaxLowLph} / ${s.flow.atHeadMaxLph} / ${s.flow.atHeadMaxHighLph}`);
 
+  expect(fs.shellMm >= 3 * inp.lineWidthM * 1e3 - 1e-9, `float shell ${fs.shellMm} under three lines`);
+  expect(s.footprintMm <= inp.maxOuterDiameterM * 1e3 + 1e-6, `footprint ${s.footprintMm} over the limit ${inp.maxOuterDiameterM * 1e3}`);
+  if (s.architecture === 'direct') p.push(...directChecks(inp, s));
+  else p.push(...leverChecks(inp, s));
+  expect(s.mass.totalG > 0 && s.float.massG > 0, 'masses not positive');
+  expect(s.boundBy.length > 0, 'boundBy is empty');
+  return p;
+}
+
+/** The direct valve's own invariants: the layout from the tip down, the bore's gap, drain and vents, walls and caps. */
+function directChecks(inp: DesignInputs, s: DirectSizing): string[] {
+  const p: string[] = [];
+  const expect = (ok: boolean, what: string) => {
+    if (!ok) p.push(what);
+  };
+  const fs = s.parts.float;
+  const padTopRest = s.parts.mount.floatRestZMm + fs.heightMm + fs.padProudMm;
+  expect(Math.abs(s.parts.mount.nozzleTipZMm - padTopRest - s.nozzle.travelMm) <= 1e-6, `tip - pad top at rest ${s.parts.mount.nozzleTipZMm - padTopRest} mm vs travel ${s.nozzle.travelMm} mm`);
+  const sealBottom = s.parts.mount.nozzleTipZMm - fs.heightMm - fs.padProudMm + s.seal.indentationMm;
+  expect(Math.abs(sealBottom - s.parts.mount.floatSealZMm) <= 1e-6, `float bottom at seal ${s.parts.mount.floatSealZMm} vs z_tip - h_f - proud + delta ${sealBottom}`);
+  // clearance: bore = D_f + 2 (c_gap + c_print)
+  expect(s.housing.boreMm - s.float.outerDiameterMm >= 2 * RADIAL_GAP_MM - 1e-9, `bore ${s.housing.boreMm} vs float ${s.float.outerDiameterMm}: radial gap under ${RADIAL_GAP_MM} mm`);
+  expect(s.parts.mount.floatRestZMm >= s.parts.mount.pinTopZMm - 1e-9, 'float rests below the pin top');
+
+  // drain (orifice equation, on the high end of the flow band) and vents
+  const q = s.flow.atHeadMaxHighLph / 3.6e6;
+  const need = (q / (C_D * Math.sqrt(2 * G * DRAIN_DH_M))) * 1e6;
+  expect(Math.abs(s.drain.requiredAreaMm2 - need) <= 1e-6 * Math.max(1, need), `drain required ${s.drain.requiredAreaMm2} vs orifice equation ${need}`);
+  expect(s.drain.providedAreaMm2 >= need * (1 - 1e-9), `drain provided ${s.drain.providedAreaMm2} mm2 < required ${need} mm2`);
+  expect(s.vents.count >= 2 && s.vents.diameterMm >= 3, `vents ${s.vents.count} x ${s.vents.diameterMm} mm`);
   // walls: housing wall as asked; float shell three lines (DESIGN "Solids")
   expect(Math.abs(s.housing.wallMm - inp.wallM * 1e3) <= 1e-9, `housing wall ${s.housing.wallMm} vs ${inp.wallM * 1e3}`);
-  expect(fs.shellMm >= 3 * inp.lineWidthM * 1e3 - 1e-9, `float shell ${fs.shellMm} under three lines`);
   // size caps and the diameter limit
   expect(s.housing.heightMm <= PART_CAP_MM + 1e-9 && s.housing.footDiameterMm <= PART_CAP_MM + 1e-9 && s.parts.pin.lengthMm <= PART_CAP_MM + 1e-9,
     `part over ${PART_CAP_MM} mm: housing ${s.housing.heightMm} x ${s.housing.footDiameterMm}, pin ${s.parts.pin.lengthMm}`);
   expect(s.housing.footDiameterMm <= inp.maxOuterDiameterM * 1e3 + 1e-6, `foot ${s.housing.footDiameterMm} over the limit ${inp.maxOuterDiameterM * 1e3}`);
-  expect(s.mass.totalG > 0 && s.float.massG > 0, 'masses not positive');
-  expect(s.boundBy.length > 0, 'boundBy is empty');
+  return p;
+}
+
+/**
+ * The lever valve's own invariants: the moment balance about the pivot (Meriam and Kraige, Statics: the float's push
+ * at the seal gives the pad exactly the force needed, and without the arm's weight and friction a_f F_f = a_p F_pad
+ * would need less), the ratio a_f / a_p, the pad's travel at rest, the caps.
+ */
+function leverChecks(inp: DesignInputs, s: LeverSizing): string[] {
+  const p: string[] = [];
+  const expect = (ok: boolean, what: string) => {
+    if (!ok) p.push(what);
+  };
+  const lv = s.lever;
+  const padAtSeal = lv.padForceFromPush.perNewton * lv.floatPushAtHeadMaxN + lv.padForceFromPush.offsetN;
+  expect(Math.abs(padAtSeal - s.closingForce.atHeadMaxN) <= 1e-9 * Math.max(1, padAtSeal), `pad force from the float's push ${padAtSeal} N vs needed ${s.closingForce.atHeadMaxN} N`);
+  expect(lv.floatPushAtHeadMaxN * lv.floatArmMm >= s.closingForce.atHeadMaxN * lv.padArmMm * (1 - 1e-12), `float push ${lv.floatPushAtHeadMaxN} N at ${lv.floatArmMm} mm gives less moment than the pad's ${s.closingForce.atHeadMaxN} N at ${lv.padArmMm} mm`);
+  expect(Math.abs(lv.ratio - lv.floatArmMm / lv.padArmMm) <= 1e-12 * lv.ratio, `ratio ${lv.ratio} vs ${lv.floatArmMm} / ${lv.padArmMm}`);
+  expect(lv.hysteresisMm >= 0 && lv.frictionTorqueNmm >= 0, `friction band ${lv.hysteresisMm} mm, torque ${lv.frictionTorqueNmm} N mm`);
+  const minTravel = Math.max((inp.orificeM * 1e3) / 2, 1.5);
+  expect(s.nozzle.travelMm >= minTravel - 1e-9, `pad travel at rest ${s.nozzle.travelMm} mm < ${minTravel} mm`);
+  expect(lv.lipGapMm <= s.seal.indentationMm / 2 + 1e-9, `lip gap at first touch ${lv.lipGapMm} mm over half the squeeze`);
+  expect(s.frame.heightMm <= PART_CAP_MM + 1e-9 && lv.armLengthMm <= PART_CAP_MM + 1e-9, `part over ${PART_CAP_MM} mm: frame ${s.frame.heightMm}, arm ${lv.armLengthMm}`);
+  expect((s.mount === 'rim') === (s.rim !== null) && (s.rim === null || s.rim.adjustMm === 10), `rim ${JSON.stringify(s.rim)} on the ${s.mount}`);
   return p;
 }
 
@@ -223,12 +266,13 @@ export function checkAssembly(
   wasm: ManifoldToplevel,
   sizing: SizingSuccess,
   parts: Record<string, IndexedMesh | undefined>,
-  transforms: { rest: Record<string, number[]>; seal: Record<string, number[]> },
+  transforms: { rest: Partial<Record<string, number[]>>; seal: Partial<Record<string, number[]>> },
 ): string[] {
   const p: string[] = [];
-  const P = sizing.parts;
-  const n = P.nozzle;
-  const c = (P.housing.seatBoreMm - n.collarDiameterMm) / 2;
+  const n = sizing.parts.nozzle;
+  // the nozzle's seat: in the housing's deck, or in the lever frame's
+  const seat = sizing.architecture === 'direct' ? sizing.parts.housing : sizing.parts.frame;
+  const c = (seat.seatBoreMm - n.collarDiameterMm) / 2;
   const h = n.crushRibs.heightMm;
   const ribMm3 = h > c ? n.crushRibs.count * 0.5 * n.crushRibs.baseWidthMm * ((h - c) ** 2 / h) * n.collarLengthMm : 0;
   const lipMm3 = Math.PI * (n.lipDiameterMm / 2) ** 2 * sizing.seal.indentationMm;
@@ -236,7 +280,7 @@ export function checkAssembly(
   for (const state of ['rest', 'seal'] as const) {
     const ms: Record<string, Manifold> = {};
     try {
-      for (const name of names) ms[name] = meshToManifold(wasm, transformMesh(parts[name]!, transforms[state][name]), name);
+      for (const name of names) ms[name] = meshToManifold(wasm, transformMesh(parts[name]!, transforms[state][name]!), name);
       for (let i = 0; i < names.length; i++) {
         for (let j = i + 1; j < names.length; j++) {
           const pair = `${names[i]}+${names[j]}`;
@@ -248,7 +292,7 @@ export function checkAssembly(
           const v = both.volume();
           both.delete();
           let allowed = CONTACT_MM3;
-          if (pair === 'housing+nozzle') allowed = ribMm3 * 1.02 + CONTACT_MM3;
+          if (pair === 'housing+nozzle' || pair === 'frame+nozzle') allowed = ribMm3 * 1.02 + CONTACT_MM3;
           if (state === 'seal' && (pair === 'nozzle+pad' || pair === 'float+nozzle')) allowed = lipMm3 * 1.01 + CONTACT_MM3;
           if (v > allowed) p.push(`${state}: ${pair} overlap ${v.toFixed(4)} mm3 (allowed ${allowed.toFixed(4)})`);
         }

@@ -4,6 +4,7 @@
  * Hydrostatics for the expectations: the closing force F = F_pre + A rho g H must
  * grow with the head H, so bench masses that fall as the head rises cannot be fitted.
  */
+import { direct } from '../sizing/fixtures.ts';
 import { describe, expect, it } from 'vitest';
 import { parseDesign } from '../../generator/doc/schema.ts';
 import { sizeDesign } from '../../generator/sizing/size-design.ts';
@@ -71,8 +72,9 @@ describe('regressions found by the build property (build.property.test.ts)', () 
     const s = sizeDesign(parsed.inputs);
     expect(s.ok).toBe(true);
     if (!s.ok) return;
-    expect(s.parts.housing.guide.stopBoreMm).toBeGreaterThanOrEqual(s.parts.float.padDiameterMm + 2 * 0.25);
-    expect(s.parts.housing.guide.stopBoreMm).toBeGreaterThanOrEqual(s.parts.nozzle.shoulderDiameterMm + 2 * 0.25);
+    const d = direct(s);
+    expect(d.parts.housing.guide.stopBoreMm).toBeGreaterThanOrEqual(d.parts.float.padDiameterMm + 2 * 0.25);
+    expect(d.parts.housing.guide.stopBoreMm).toBeGreaterThanOrEqual(d.parts.nozzle.shoulderDiameterMm + 2 * 0.25);
   });
 });
 

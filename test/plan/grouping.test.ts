@@ -29,8 +29,7 @@ describe('grouping identical valves into one file set', () => {
     let ballast = 0;
     for (const c of plan.containers) {
       if (!c.sizing.ok) throw new Error('sizing failed');
-      const b = c.sizing.mass.byPart;
-      grams += c.count * (b.housing + b.float + b.nozzle + b.pin);
+      grams += c.count * (c.sizing.mass.totalG - c.sizing.mass.byPart.pad);
       ballast += c.count * c.sizing.holdDown.ballastSteelG;
     }
     expect(plan.totals.filamentG).toBeCloseTo(grams, 9);

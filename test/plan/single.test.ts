@@ -26,7 +26,7 @@ describe('a flat plan with one container', () => {
     expect(c.sizing.float.outerDiameterMm).toBe(alone.float.outerDiameterMm);
     // the guide collar carries the stop gap, which follows the pad's indentation: equal to a micrometre
     expect(c.sizing.float.heightMm).toBeCloseTo(alone.float.heightMm, 3);
-    expect(c.sizing.housing.outerDiameterMm).toBe(alone.housing.outerDiameterMm);
+    expect(c.sizing.footprintMm).toBe(alone.footprintMm);
     // same head to 0.1 mm, so the same tip to well under 0.1 mm (about 5 mm of tip per metre of head)
     expect(Math.abs(c.sizing.nozzle.tipHeightMm - alone.nozzle.tipHeightMm)).toBeLessThan(0.1);
     expect(Math.abs(c.sizing.mass.totalG - alone.mass.totalG)).toBeLessThan(0.05);

@@ -1,3 +1,4 @@
+import type { DirectSizing, LeverSizing, SizingResult } from '../../generator/sizing/result.ts';
 import type { DesignInputs } from '../../generator/sizing/inputs.ts';
 
 /** DESIGN.md defaults in SI, with a head and level of our own choosing (demo values, not reference data). */
@@ -35,4 +36,18 @@ export function defaultInputs(over: Partial<DesignInputs> = {}): DesignInputs {
     retiredFields: [],
     ...over,
   };
+}
+
+/** A sizing that must have given the direct valve (the tests of its housing, guide, drains and tilt). */
+export function direct(s: SizingResult): DirectSizing {
+  if (!s.ok) throw new Error(`expected a sized valve: ${JSON.stringify(s.reasons)}`);
+  if (s.architecture !== 'direct') throw new Error(`expected the direct valve, got a ${s.architecture} valve`);
+  return s;
+}
+
+/** A sizing that must have given a lever valve. */
+export function lever(s: SizingResult): LeverSizing {
+  if (!s.ok) throw new Error(`expected a sized valve: ${JSON.stringify(s.reasons)}`);
+  if (s.architecture !== 'lever') throw new Error(`expected a lever valve, got a ${s.architecture} valve`);
+  return s;
 }

@@ -161,8 +161,8 @@ function checkBalance(c: LeverCandidate, sealN: number, rho: number): void {
 
 describe('the lightest lever valve (search)', () => {
   const rho = 998.2;
-  it('shallow tray, 25 mm at 2 m (low tank 1.5 m), 90 mm footprint: found; every rule holds by hand', () => {
-    const inp = defaultInputs({ headMaxM: 2, headMinM: 1.5, targetLevelM: 0.025, maxOuterDiameterM: 0.09 });
+  it('shallow tray, 25 mm at 2 m (low tank 1.5 m), 120 mm footprint: found; every rule holds by hand', () => {
+    const inp = defaultInputs({ headMaxM: 2, headMinM: 1.5, targetLevelM: 0.025, maxOuterDiameterM: 0.12 });
     const lb = leverBasisFromDesign(designBasis(inp));
     const out = searchLever(lb, { mount: 'floor' });
     const c = out.best!;
@@ -174,7 +174,7 @@ describe('the lightest lever valve (search)', () => {
     expect(c.shutOffAtHeadMinMm).toBeLessThan(25);
     expect(c.sealDepthMm).toBeLessThanOrEqual(c.float.cylinderHeightMm);
     expect(c.reserve).toBeGreaterThanOrEqual(1.5);
-    expect(c.footprintMm).toBeLessThanOrEqual(90);
+    expect(c.footprintMm).toBeLessThanOrEqual(120);
     expect(c.ratio).toBeGreaterThan(1);
     // the arm is level at the seal: tip and pivot on the arm's own section
     expect(c.tipZMm - c.pivotZMm).toBeCloseTo(c.arm.holeCentreDepthMm + 1 - lb.indentationMm, 9);

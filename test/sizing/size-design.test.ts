@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { sizeDesign } from '../../generator/sizing/size-design.ts';
 import { FLOAT_GAP_MM, PRINT_CLEARANCE_MM } from '../../generator/sizing/constants.ts';
-import type { SizingFailure, SizingSuccess } from '../../generator/sizing/result.ts';
-import { defaultInputs } from './fixtures.ts';
+import type { DirectSizing, SizingFailure, SizingSuccess } from '../../generator/sizing/result.ts';
+import { defaultInputs, direct } from './fixtures.ts';
 
 // Invariants of the sizing model. The closed forms checked here come from
 // Archimedes' principle and p = rho g H (hydrostatics); the scenarios are demo values.
@@ -14,10 +14,8 @@ const cases = [
   defaultInputs({ headMaxM: 1.5, headMinM: 1.5, targetLevelM: 0.15, materialName: 'PP', materialDensityKgM3: 900 }),
 ];
 
-function sized(i: number): SizingSuccess {
-  const r = sizeDesign(cases[i]);
-  if (!r.ok) throw new Error(`case ${i} infeasible: ${JSON.stringify(r.reasons)}`);
-  return r;
+function sized(i: number): DirectSizing {
+  return direct(sizeDesign(cases[i]));
 }
 
 describe('sized design invariants', () => {
@@ -137,8 +135,9 @@ describe('sized design invariants', () => {
 });
 
 describe('infeasible designs say why and how to make them work', () => {
-  // 25 mm at 2.2 m is out of reach (the guide's collar and the 50-degree cone make the float taller), 28.5 mm is not
-  const inp = defaultInputs({ targetLevelM: 0.025 });
+  // 25 mm at 2.2 m is out of the direct valve's reach (the guide's collar and the 50-degree cone make the float
+  // taller), 28.5 mm is not; asked for the direct valve ("auto" would make a lever)
+  const inp = defaultInputs({ targetLevelM: 0.025, architecture: 'direct' });
   const r = sizeDesign(inp) as SizingFailure;
   it('is refused with reasons', () => {
     expect(r.ok).toBe(false);
@@ -167,7 +166,7 @@ describe('infeasible designs say why and how to make them work', () => {
 
 describe('when no single change helps', () => {
   it('names a level and a diameter limit that work together', () => {
-    const inp = defaultInputs({ headMaxM: 3.0, headMinM: 3.0, targetLevelM: 0.008, maxOuterDiameterM: 0.04 });
+    const inp = defaultInputs({ headMaxM: 3.0, headMinM: 3.0, targetLevelM: 0.008, maxOuterDiameterM: 0.04, architecture: 'direct' });
     const r = sizeDesign(inp) as SizingFailure;
     expect(r.ok).toBe(false);
     const level = r.waysOut.find((w) => w.field === 'level.target');

@@ -131,7 +131,7 @@ describe.each(['rest', 'seal'] as const)('assembly at %s', (state) => {
 
 describe('nozzle sealing face', () => {
   it('is the lowest face, flat on the bed, and only the lip ring (N-gon area, elementary geometry)', () => {
-    const n = parts.nozzle;
+    const n = parts.nozzle!;
     const p = n.positions;
     let minZ = Infinity;
     for (let i = 2; i < p.length; i += 3) minZ = Math.min(minZ, p[i]);

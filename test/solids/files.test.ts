@@ -62,7 +62,7 @@ describe('every preset builds', () => {
       pin: facetedPinMm3(sizing, 'preview'),
     };
     for (const [name, v] of Object.entries(expected)) {
-      expect(Math.abs(meshVolumeMm3(parts[name as keyof typeof expected]) / v - 1), `${file} ${name}`).toBeLessThan(0.01);
+      expect(Math.abs(meshVolumeMm3(parts[name as keyof typeof expected]!) / v - 1), `${file} ${name}`).toBeLessThan(0.01);
     }
   });
 });

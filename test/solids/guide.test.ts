@@ -133,7 +133,7 @@ describe.each(PRESETS)('%s: the guided float on the meshes', (file) => {
     const f = P.float;
     const deltaMm = sizing.seal.indentationMm;
     const pivotZ = P.mount.floatSealZMm + f.heightMm + f.padProudMm - deltaMm;
-    const floatM = meshToManifold(wasm, transformMesh(parts.float, t.float), 'float');
+    const floatM = meshToManifold(wasm, transformMesh(parts.float!, t.float), 'float');
     const housing = meshToManifold(wasm, transformMesh(parts.housing as IndexedMesh, t.housing), 'housing');
     rig = { float: floatM, housing, pivot: [0, 0, pivotZ] } as Rig;
     rig.release = () => {

@@ -15,7 +15,8 @@ import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { parseDesign, type NormalizedDoc } from '../../generator/doc/schema.ts';
 import { sizeDesign } from '../../generator/sizing/size-design.ts';
-import type { SizingSuccess } from '../../generator/sizing/result.ts';
+import type { DirectSizing, SizingSuccess } from '../../generator/sizing/result.ts';
+import { direct } from '../sizing/fixtures.ts';
 import { housingVolumeMm3, nozzleVolumeMm3 } from '../../generator/sizing/parts/part-volumes.ts';
 import { segmentsFor, type Quality } from '../../generator/solids/mesh/index.ts';
 
@@ -32,7 +33,8 @@ export function presetFiles(): string[] {
     .sort();
 }
 
-export function sizeDoc(doc: unknown): { sizing: SizingSuccess; document: NormalizedDoc } {
+/** A document sized, whatever valve it gives. */
+export function sizeAnyDoc(doc: unknown): { sizing: SizingSuccess; document: NormalizedDoc } {
   const parsed = parseDesign(doc);
   if (!parsed.ok) throw new Error(`design refused: ${JSON.stringify(parsed.errors)}`);
   const sizing = sizeDesign(parsed.inputs);
@@ -40,7 +42,20 @@ export function sizeDoc(doc: unknown): { sizing: SizingSuccess; document: Normal
   return { sizing, document: parsed.document };
 }
 
-export function sizePreset(file: string): { sizing: SizingSuccess; document: NormalizedDoc } {
+/** A document sized as the direct valve (the housing's tests): asked for in the document, so whatever "auto" picks. */
+export function sizeDoc(doc: unknown): { sizing: DirectSizing; document: NormalizedDoc } {
+  const asked = doc && typeof doc === 'object' ? { ...(doc as Record<string, unknown>), valve: { ...((doc as { valve?: object }).valve ?? {}), architecture: 'direct', mount: 'floor' } } : doc;
+  const { sizing, document } = sizeAnyDoc(asked);
+  return { sizing: direct(sizing), document };
+}
+
+/** A preset sized as it stands (its own choice of valve). */
+export function sizeAnyPreset(file: string): { sizing: SizingSuccess; document: NormalizedDoc } {
+  return sizeAnyDoc(JSON.parse(readFileSync(join(ROOT, 'presets', file), 'utf8')));
+}
+
+/** A preset sized as the direct valve. */
+export function sizePreset(file: string): { sizing: DirectSizing; document: NormalizedDoc } {
   return sizeDoc(JSON.parse(readFileSync(join(ROOT, 'presets', file), 'utf8')));
 }
 
@@ -82,7 +97,7 @@ export function clippedPolygon(r: number, n: number, yMin: number): [number, num
 }
 
 /** Analytic volumes for the faceted parts (helpers.ts explains the equal-area radii). */
-export function facetedHousingMm3(s: SizingSuccess, q: Quality): number {
+export function facetedHousingMm3(s: DirectSizing, q: Quality): number {
   const h = structuredClone(s.parts.housing);
   const n = segmentsFor(h.foot.outerDiameterMm / 2, q);
   const outer = Math.sqrt(cornersOn(n));
@@ -114,4 +129,29 @@ export function facetedPinMm3(s: SizingSuccess, q: Quality): number {
   // the section: the N-gon on the pin's circle, less what lies below the flat
   const section = shoelace(clippedPolygon(p.diameterMm / 2, n, -p.flatOffsetMm));
   return section * p.lengthMm + p.head.lengthMm * p.head.widthMm * p.head.heightMm;
+}
+
+/** Filament pushed (mm) in each ;TYPE: section of a G-code file, absolute (M82) or relative (M83) extrusion. */
+export function extrusionByType(gcode: string): Map<string, number> {
+  const out = new Map<string, number>();
+  let relative = false;
+  let e = 0;
+  let type = '';
+  for (const line of gcode.split('\n')) {
+    if (line.startsWith(';TYPE:')) type = line.slice(6).trim();
+    else if (line.startsWith('M82')) relative = false;
+    else if (line.startsWith('M83')) relative = true;
+    else if (line.startsWith('G92')) {
+      const m = / E(-?[\d.]+)/.exec(line);
+      if (m) e = Number(m[1]);
+    } else if (line.startsWith('G1 ') || line.startsWith('G0 ')) {
+      const m = / E(-?[\d.]+)/.exec(line);
+      if (!m) continue;
+      const v = Number(m[1]);
+      const d = relative ? v : v - e;
+      if (!relative) e = v;
+      if (d > 0) out.set(type, (out.get(type) ?? 0) + d);
+    }
+  }
+  return out;
 }

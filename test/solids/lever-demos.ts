@@ -1,7 +1,8 @@
 /**
  * The lever tests' demo valves, scenarios of our own (not reference data): a
  * 25 mm tray at 2 m on the floor and a 250 mm bucket at 1.5 m hung from a rim
- * 100 mm above its level (3 mm wall); the low tank at 75 % of full, a 90 mm footprint.
+ * 100 mm above its level (3 mm wall); the low tank at 75 % of full, a 120 mm footprint (at 90 mm the tray's float,
+ * turning down with the arm at rest, would swing into the frame).
  */
 import { designBasis } from '../../generator/sizing/layout/design-basis.ts';
 import { leverBasisFromDesign, searchLever, type LeverCandidate } from '../../generator/sizing/lever/index.ts';
@@ -9,7 +10,7 @@ import { defaultInputs } from '../sizing/fixtures.ts';
 
 /** The demo valve's inputs (the low tank at 75 % of the head, a 90 mm footprint). */
 export const demoLeverInputs = (headM: number, levelM: number) =>
-  defaultInputs({ headMaxM: headM, headMinM: 0.75 * headM, targetLevelM: levelM, maxOuterDiameterM: 0.09 });
+  defaultInputs({ headMaxM: headM, headMinM: 0.75 * headM, targetLevelM: levelM, maxOuterDiameterM: 0.12 });
 
 export function demoLever(headM: number, levelM: number, mount: 'floor' | 'rim'): LeverCandidate {
   const inp = demoLeverInputs(headM, levelM);
@@ -20,3 +21,7 @@ export function demoLever(headM: number, levelM: number, mount: 'floor' | 'rim')
 
 export const demoTray = () => demoLever(2, 0.025, 'floor');
 export const demoBucket = () => demoLever(1.5, 0.25, 'rim');
+
+/** The two demo valves as design documents, the lever asked for (our own scenarios). */
+export const TRAY_LEVER = { name: 'Tray lever', supply: { headMax: '2 m', headMin: '1.5 m' }, level: { target: '25 mm' }, valve: { architecture: 'lever' } };
+export const BUCKET_RIM = { name: 'Bucket rim', supply: { headMax: '1.5 m', headMin: '1.125 m' }, level: { target: '250 mm' }, container: { rimHeight: '350 mm' }, valve: { mount: 'rim' } };

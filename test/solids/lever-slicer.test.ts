@@ -1,55 +1,60 @@
 /**
- * A slicer adds no support to the lever's and the rim mount's parts: each part,
- * written as STL in its print pose, is sliced by PrusaSlicer (a program
- * independent of this project; Debian's /usr/bin/prusa-slicer) with automatic
- * supports at a 45-degree threshold, and its G-code must hold no extrusion of
- * the "Support material" type. Skipped with a message where PrusaSlicer is not
- * installed. Designs: our own demo scenarios (a 25 mm tray at 2 m, a 250 mm
- * bucket at 1.5 m hung from a rim 100 mm higher).
+ * A slicer adds no support to a lever valve's parts, the float included (its
+ * sealed cavity closes to a point inside the collar: no flat roof, no bridge).
+ * Each design's file set (writeDesignFiles, print poses) is sliced on one plate
+ * by PrusaSlicer (a program independent of this project; Debian's
+ * /usr/bin/prusa-slicer) with --merge, automatic supports at a 45-degree
+ * threshold and five perimeters, as test/solids/slicer-supports.test.ts slices
+ * the presets; the G-code must hold no "Support material" extrusion, and its last
+ * layer must reach the tallest part (every part was sliced). Skipped with a
+ * message where PrusaSlicer is not installed, except under CI. Designs: our own
+ * scenarios (a 25 mm tray at 2 m on the floor, a 250 mm bucket at 1.5 m hung
+ * from a rim 100 mm higher).
  */
-import { execFileSync } from 'node:child_process';
-import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { execFile } from 'node:child_process';
+import { existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { promisify } from 'node:util';
 import { afterAll, describe, expect, it } from 'vitest';
-import { writeStlBinary, type IndexedMesh } from '../../generator/solids/mesh/index.ts';
-import { buildLeverArmMesh } from '../../generator/solids/parts/lever-arm-solid.ts';
-import { buildLeverFrameMesh } from '../../generator/solids/parts/lever-frame-solid.ts';
-import { buildPinMesh } from '../../generator/solids/parts/pin-solid.ts';
-import { buildRimHangerMesh } from '../../generator/solids/parts/rim-hanger-solid.ts';
-import { buildSlottedStemMesh } from '../../generator/solids/parts/slotted-stem-solid.ts';
-import { demoBucket, demoTray } from './lever-demos.ts';
+import { writeDesignFiles } from '../../generator/solids/write-design-files.ts';
+import { valvePartNames } from '../../generator/solids/index.ts';
+import { extrusionByType, sizeAnyDoc } from './helpers.ts';
+import { BUCKET_RIM, TRAY_LEVER } from './lever-demos.ts';
 
 const SLICER = '/usr/bin/prusa-slicer';
 const present = existsSync(SLICER);
+if (!present && process.env.CI) throw new Error('prusa-slicer is missing under CI: .ci/run should have installed it (apt-get install -y prusa-slicer)');
 if (!present) console.warn(`lever-slicer.test.ts: ${SLICER} is not installed; the support check is skipped (apt-get install -y prusa-slicer)`);
 
-const dir = mkdtempSync(join(tmpdir(), 'floatwright-lever-slice-'));
-afterAll(() => rmSync(dir, { recursive: true, force: true }));
+const run = promisify(execFile);
+const scratch = mkdtempSync(join(tmpdir(), 'fw-lever-slice-'));
+afterAll(() => rmSync(scratch, { recursive: true, force: true }));
 
-function supportLines(name: string, mesh: IndexedMesh): number {
-  const stl = join(dir, `${name}.stl`);
-  const gcode = join(dir, `${name}.gcode`);
-  writeFileSync(stl, writeStlBinary(mesh));
-  execFileSync(SLICER, ['--export-gcode', '--support-material', '--support-material-auto', '--support-material-threshold', '45', '--center', '110,110', '-o', gcode, stl], {
-    stdio: 'ignore',
-    timeout: 120_000,
-  });
-  return readFileSync(gcode, 'utf8').split('\n').filter((l) => l.startsWith(';TYPE:Support material')).length;
-}
-
-describe.skipIf(!present)('PrusaSlicer adds no support (45-degree threshold) to the lever and rim parts', () => {
-  it('arm, pivot pin, floor frame, rim frame, hanger and stem', async () => {
-    const tray = demoTray();
-    const bucket = demoBucket();
-    const parts: [string, IndexedMesh][] = [
-      ['arm', await buildLeverArmMesh(tray.arm, 'preview')],
-      ['pivot-pin', await buildPinMesh(tray.pin, 'preview')],
-      ['frame-floor', await buildLeverFrameMesh(tray.frame, 'preview')],
-      ['frame-rim', await buildLeverFrameMesh(bucket.frame, 'preview')],
-      ['hanger', await buildRimHangerMesh(bucket.rim!, 'preview')],
-      ['stem', await buildSlottedStemMesh(bucket.rim!, 'preview')],
-    ];
-    for (const [name, mesh] of parts) expect(supportLines(name, mesh), name).toBe(0);
-  }, 120_000);
+describe.skipIf(!present)('PrusaSlicer adds no support to a lever valve, float included (45-degree threshold, five perimeters)', () => {
+  it.concurrent.each([
+    ['tray lever on the floor', TRAY_LEVER],
+    ['bucket lever on the rim', BUCKET_RIM],
+  ] as const)('%s', async (label, doc) => {
+    const { sizing, document } = sizeAnyDoc(doc);
+    const dir = join(scratch, label.replace(/\W+/g, '-'));
+    const written = await writeDesignFiles(sizing, document, dir, { quality: 'preview' });
+    const stls = written.files.filter((p) => p.endsWith('.stl')).map((p) => (p.startsWith('/') ? p : join(dir, p)));
+    expect(stls.length).toBe(valvePartNames(sizing).length);
+    const out = join(dir, 'plate.gcode');
+    await run(SLICER, [
+      '--export-gcode', '--merge', '--support-material', '--support-material-auto', '--support-material-threshold', '45',
+      '--perimeters', '5',
+      '--layer-height', '0.3', '--first-layer-height', '0.3', '--bed-shape', '0x0,300x0,300x300,0x300', '--center', '150,150',
+      '-o', out, ...stls,
+    ], { timeout: 120_000 });
+    const gcode = readFileSync(out, 'utf8');
+    const byType = extrusionByType(gcode);
+    expect(byType.get('External perimeter') ?? 0).toBeGreaterThan(100);
+    const tallest = Math.max(...written.parts.map((p) => p.bounds.max[2] - p.bounds.min[2]));
+    const topZ = Math.max(...[...gcode.matchAll(/^;Z:([\d.]+)/gm)].map((m) => Number(m[1])));
+    expect(Math.abs(topZ - tallest)).toBeLessThan(0.6);
+    const support = (byType.get('Support material') ?? 0) + (byType.get('Support material interface') ?? 0);
+    expect(support * Math.PI * 0.875 ** 2).toBe(0);
+  }, 180_000);
 });

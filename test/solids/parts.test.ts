@@ -54,7 +54,7 @@ describe('every part is a closed 2-manifold resting on z = 0', () => {
         expect(b.min[2], name).toBe(0);
       }
       // genus (manifold-3d): the float is a shell around one sealed cavity (two surfaces, genus -1)
-      const float = meshToManifold(wasm, parts.float, 'float');
+      const float = meshToManifold(wasm, parts.float!, 'float');
       expect(float.genus()).toBe(-1);
       float.delete();
     });

@@ -38,7 +38,7 @@ describe('the bed in the sizing and the written plates', () => {
   const bed = (mm: number): Partial<DesignInputs> => ({ bedWidthM: mm / 1e3, bedDepthM: mm / 1e3 });
 
   it('a bed too small for the housing refuses the design and offers a bed that works', () => {
-    const inp = defaultInputs(bed(60));
+    const inp = defaultInputs({ ...bed(60), architecture: 'direct' });
     const r = sizeDesign(inp) as SizingFailure;
     expect(r.ok).toBe(false);
     expect(r.reasons.map((x) => x.code)).toContain('bed-size');

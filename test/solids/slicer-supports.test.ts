@@ -20,7 +20,7 @@ import { join } from 'node:path';
 import { promisify } from 'node:util';
 import { afterAll, describe, expect, it } from 'vitest';
 import { writeDesignFiles } from '../../generator/solids/write-design-files.ts';
-import { presetFiles, sizePreset } from './helpers.ts';
+import { extrusionByType, presetFiles, sizePreset } from './helpers.ts';
 
 const SLICER = '/usr/bin/prusa-slicer';
 const have = existsSync(SLICER);
@@ -30,31 +30,6 @@ if (!have) console.warn('prusa-slicer not found at /usr/bin/prusa-slicer: skippi
 const run = promisify(execFile);
 const scratch = mkdtempSync(join(tmpdir(), 'fw-slicer-'));
 afterAll(() => rmSync(scratch, { recursive: true, force: true }));
-
-/** Filament pushed (mm) in each ;TYPE: section of a G-code file, absolute (M82) or relative (M83) extrusion. */
-export function extrusionByType(gcode: string): Map<string, number> {
-  const out = new Map<string, number>();
-  let relative = false;
-  let e = 0;
-  let type = '';
-  for (const line of gcode.split('\n')) {
-    if (line.startsWith(';TYPE:')) type = line.slice(6).trim();
-    else if (line.startsWith('M82')) relative = false;
-    else if (line.startsWith('M83')) relative = true;
-    else if (line.startsWith('G92')) {
-      const m = / E(-?[\d.]+)/.exec(line);
-      if (m) e = Number(m[1]);
-    } else if (line.startsWith('G1 ') || line.startsWith('G0 ')) {
-      const m = / E(-?[\d.]+)/.exec(line);
-      if (!m) continue;
-      const v = Number(m[1]);
-      const d = relative ? v : v - e;
-      if (!relative) e = v;
-      if (d > 0) out.set(type, (out.get(type) ?? 0) + d);
-    }
-  }
-  return out;
-}
 
 describe.skipIf(!have)('PrusaSlicer adds no support to any part, supports on at a 45-degree threshold', () => {
   it('reads extrusion per section from absolute and relative G-code', () => {

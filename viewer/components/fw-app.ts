@@ -2,6 +2,7 @@ import { LitElement, css, html, nothing } from 'lit';
 import { customElement, query, state } from 'lit/decorators.js';
 import { parseDesign } from '../../generator/doc/schema.ts';
 import type { SizingResult, SizingSuccess, WayOut } from '../../generator/sizing/result.ts';
+import { PART_NAMES, valvePartNames } from '../../generator/solids/part-names.ts';
 import { BuildClient, type WorkerFactory } from '../lib/build-client.ts';
 import { setAt, type Doc } from '../lib/doc-path.ts';
 import { docToSize } from '../lib/doc-to-size.ts';
@@ -547,7 +548,7 @@ export class FwApp extends LitElement {
           <div class="viewbar">
             <fieldset>
               <legend>Float</legend>
-              <label><input type="radio" name="pose" .checked=${this.view.pose === 'rest'} @change=${() => this.setView({ pose: 'rest' })} /> resting on its pin</label>
+              <label><input type="radio" name="pose" .checked=${this.view.pose === 'rest'} @change=${() => this.setView({ pose: 'rest' })} /> ${good?.architecture === 'lever' ? 'at rest, the arm down' : 'resting on its pin'}</label>
               <label><input type="radio" name="pose" .checked=${this.view.pose === 'seal'} @change=${() => this.setView({ pose: 'seal' })} /> shut against the nozzle</label>
             </fieldset>
             <label><input type="checkbox" name="section" .checked=${this.view.section} @change=${(e: Event) => this.setView({ section: (e.target as HTMLInputElement).checked })} /> cut open</label>
@@ -563,7 +564,7 @@ export class FwApp extends LitElement {
         <div class="side">
         <div class="summary">
           <fw-results show="summary" .result=${this.resultInUnits()} .lastGood=${good} .units=${this.units} .stale=${Object.keys(this.errors).length > 0 || outOfDate} @apply-way-out=${this.applyWayOut}></fw-results>
-          <fw-file-bar .disabled=${blocked !== null} .reason=${blocked ?? ''} .busy=${this.busy} @export-request=${this.exportRequest} @import-file=${this.importFile} @share-link=${this.shareLink}></fw-file-bar>
+          <fw-file-bar .disabled=${blocked !== null} .reason=${blocked ?? ''} .busy=${this.busy} @export-request=${this.exportRequest} @import-file=${this.importFile} .parts=${good ? valvePartNames(good) : PART_NAMES} @share-link=${this.shareLink}></fw-file-bar>
         </div>
         <div class="right">
           <fw-results show="details" .result=${this.result} .lastGood=${good} .units=${this.units} .stale=${Object.keys(this.errors).length > 0 || outOfDate} .timing=${this.timing}></fw-results>

@@ -1,7 +1,7 @@
 import { LitElement, css, html, nothing } from 'lit';
 import { customElement, property } from 'lit/decorators.js';
 import type { ExportKind } from '../worker/protocol.ts';
-import { PART_NAMES, type PartName } from '../worker/parts-contract.ts';
+import { PART_NAMES, PART_WORDS, type PartName } from '../worker/parts-contract.ts';
 import { shared } from './shared-styles.ts';
 
 export interface ExportRequest {
@@ -9,7 +9,6 @@ export interface ExportRequest {
   part?: PartName;
 }
 
-const PART_WORDS: Record<PartName, string> = { housing: 'Housing', float: 'Float', nozzle: 'Nozzle', pin: 'Pin' };
 
 /**
  * Downloads, opening a saved design, and the share link. Emits `export-request`, `import-file`, `share-link`.
@@ -38,6 +37,8 @@ export class FwFileBar extends LitElement {
   @property() busy = '';
   /** why the files cannot be made now (shown while disabled) */
   @property() reason = '';
+  /** the parts of the valve on screen, one button each (a direct valve's until a sizing says otherwise) */
+  @property({ attribute: false }) parts: readonly PartName[] = PART_NAMES;
 
   private ask(kind: ExportRequest['kind'], part?: PartName) {
     this.dispatchEvent(new CustomEvent<ExportRequest>('export-request', { detail: { kind, part }, bubbles: true, composed: true }));
@@ -55,7 +56,7 @@ export class FwFileBar extends LitElement {
       </div>
       <div class="row">
         <span>One part (.stl)</span>
-        ${PART_NAMES.map((p) => html`<button ?disabled=${d} data-part=${p} @click=${() => this.ask('stl', p)}>${PART_WORDS[p]}</button>`)}
+        ${this.parts.map((p) => html`<button ?disabled=${d} data-part=${p} @click=${() => this.ask('stl', p)}>${PART_WORDS[p]}</button>`)}
       </div>
       <div class="row">
         <span>Design</span>

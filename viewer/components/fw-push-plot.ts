@@ -66,14 +66,15 @@ export class FwPushPlot extends LitElement {
     const heldMax = levelAxis(c.holdsAtHeadMaxMm, u);
     const heldMin = levelAxis(c.holdsAtHeadMinMm, u);
     const digits = u === 'metric' ? 1 : 2;
+    const lever = s.architecture === 'lever';
     return html`<figure style="margin:0">
-      <svg viewBox="0 0 ${W} ${H}" role="img" aria-label="Float push against water depth. The valve holds ${heldMax.toFixed(digits)} ${unit} with the tank full${same ? '' : ` and ${heldMin.toFixed(digits)} ${unit} with the tank low`}.">
+      <svg viewBox="0 0 ${W} ${H}" role="img" aria-label="${lever ? 'Push at the seal pad' : 'Float push'} against water depth. The valve holds ${heldMax.toFixed(digits)} ${unit} with the tank full${same ? '' : ` and ${heldMin.toFixed(digits)} ${unit} with the tank low`}.">
         ${yTicks.map((y) => svg`<line class="grid" x1=${L} x2=${W - R} y1=${py(y)} y2=${py(y)}></line><text x=${L - 6} y=${py(y) + 4} text-anchor="end">${y.toFixed(yDigits)}</text>`)}
         ${xTicks.map((x) => svg`<line class="grid" y1=${T} y2=${H - B} x1=${px(x)} x2=${px(x)}></line><text x=${px(x)} y=${H - B + 14} text-anchor="middle">${Number(x.toFixed(3))}</text>`)}
         <line class="axis" x1=${L} x2=${W - R} y1=${py(0)} y2=${py(0)}></line>
         <line class="axis" x1=${L} x2=${L} y1=${T} y2=${H - B}></line>
         <text x=${(L + W - R) / 2} y=${H - 6} text-anchor="middle">water depth in the container (${unit})</text>
-        <text transform="translate(12 ${(T + H - B) / 2}) rotate(-90)" text-anchor="middle">float push (${pushUnit})</text>
+        <text transform="translate(12 ${(T + H - B) / 2}) rotate(-90)" text-anchor="middle">${lever ? 'push at the seal pad' : 'float push'} (${pushUnit})</text>
         <line class="need-max" x1=${L} x2=${W - R} y1=${py(needMax)} y2=${py(needMax)}></line>
         <text class="lab-max" x=${L + 4} y=${py(needMax) - 4}>needed to shut, tank full</text>
         ${same ? nothing : svg`<line class="need-min" x1=${L} x2=${W - R} y1=${py(needMin)} y2=${py(needMin)}></line>
@@ -86,7 +87,7 @@ export class FwPushPlot extends LitElement {
           <text class="lab-held" x=${px(heldMin) - 4} y=${H - B - 16} text-anchor="end">${heldMin.toFixed(digits)}</text>` : nothing}
         <path class="curve" d=${path}></path>
       </svg>
-      <figcaption>The green line is the float's push with the pad on the nozzle. It shuts the water off where it crosses the push needed:
+      <figcaption>The green line is ${lever ? `the push the float gives at the pad through the arm (${s.lever.ratio.toFixed(1)} times its own, less the arm's weight)` : "the float's push"} with the pad on the nozzle. It shuts the water off where it crosses the push needed:
         <b data-result="plot-held-full">${heldMax.toFixed(digits)} ${unit}</b> with the tank full${same ? '' : html`, <b>${heldMin.toFixed(digits)} ${unit}</b> with the tank low`}.</figcaption>
     </figure>`;
   }

@@ -1,6 +1,8 @@
 import { LitElement, css, html, nothing } from 'lit';
 import { customElement, property } from 'lit/decorators.js';
 import { CONSTRAINT_TEXT } from '../../generator/sizing/layout/constraint-text.ts';
+import { LEVER_CONSTRAINT_TEXT } from '../../generator/sizing/lever/lever-constraint-text.ts';
+import { PART_WORDS, valvePartNames } from '../../generator/solids/part-names.ts';
 import type { SizingResult, SizingSuccess, WayOut } from '../../generator/sizing/result.ts';
 import { labelFor, shownMessage } from '../lib/field-label.ts';
 import { textInUnits } from '../../generator/doc/text-in-units.ts';
@@ -23,6 +25,7 @@ export class FwResults extends LitElement {
       section { background: var(--panel); border: 1px solid var(--line); border-radius: 8px; padding: 0.5rem 0.8rem; margin-bottom: 0.7rem; }
       dl { display: grid; grid-template-columns: auto auto; gap: 0.1rem 0.8rem; margin: 0; }
       dt { color: var(--muted); }
+      .why { margin: 0.4rem 0 0; font-size: 0.9rem; color: var(--muted); }
       dd { margin: 0; font-variant-numeric: tabular-nums; text-align: right; }
       .headline { display: flex; gap: 0.6rem; flex-wrap: wrap; }
       .big { background: var(--leaf-soft); border-radius: 6px; padding: 0.3rem 0.6rem; }
@@ -61,9 +64,12 @@ export class FwResults extends LitElement {
         <h2>Your valve</h2>
         <div class="headline">
           <div class="big" data-result="float">Float <b>${f.lengthMm(s.float.outerDiameterMm, u)} × ${f.lengthMm(s.float.heightMm, u)}</b></div>
-          <div class="big" data-result="housing">Housing <b>${f.lengthMm(s.housing.outerDiameterMm, u)} × ${f.lengthMm(s.housing.heightMm, u)}</b></div>
+          ${s.architecture === 'direct'
+            ? html`<div class="big" data-result="housing">Housing <b>${f.lengthMm(s.housing.outerDiameterMm, u)} × ${f.lengthMm(s.housing.heightMm, u)}</b></div>`
+            : html`<div class="big" data-result="lever">On an arm <b>${s.lever.ratio.toFixed(1)}×</b>, ${s.mount === 'rim' ? 'hung from the rim' : 'on the floor'}, <b>${f.lengthMm(s.footprintMm, u)}</b> wide</div>`}
           <div class="big" data-result="held-full">Holds water at <b>${f.lengthMm(s.levels.heldAtDemandMm, u)}</b></div>
         </div>
+        <p class="why" data-result="choice">${shownMessage(textInUnits(s.choice.reason, u))}</p>
       </section>`;
   }
 
@@ -81,7 +87,7 @@ export class FwResults extends LitElement {
           <dt>Half flow / a tenth / a hundredth, tank full</dt><dd>${f.lengthMm(s.levels.flow50Mm, u)} / ${f.lengthMm(s.levels.flow10Mm, u)} / ${f.lengthMm(s.levels.flow1Mm, u)}</dd>
           <dt>${markTerms('Shut tight (the highest it can rise), tank full', ['shut-tight'])}</dt><dd data-result="level-full">${f.lengthMm(s.levels.shutOffAtHeadMaxMm, u)}</dd>
           ${same ? nothing : html`<dt>Shut tight, tank low</dt><dd data-result="level-low">${f.lengthMm(s.levels.shutOffAtHeadMinMm, u)}</dd>`}
-          <dt>${markTerms('Float lifts off its retainer pin at', ['retainer-pin'])}</dt><dd>${f.lengthMm(s.levels.liftOffMm, u)}</dd>
+          <dt>${s.architecture === 'direct' ? markTerms('Float lifts off its retainer pin at', ['retainer-pin']) : 'Float lifts off its rest (the arm down) at'}</dt><dd>${f.lengthMm(s.levels.liftOffMm, u)}</dd>
           <dt>Shallowest depth this float can hold</dt><dd>${f.lengthMm(s.levels.minimumReachableMm, u)}</dd>
         </dl>
       </section>
@@ -94,8 +100,11 @@ export class FwResults extends LitElement {
           ${s.fill.timeToHeldMin !== null ? html`<dt>Refill time while the plants drink</dt><dd data-result="fill-time">${f.minutes(s.fill.timeToHeldMin)}</dd>` : nothing}
           <dt>Push needed to shut, tank full</dt><dd>${f.forceN(s.closingForce.atHeadMaxN, u)}</dd>
           <dt>${markTerms("Float's lift under water, and its spare lift", ['spare-lift'])}</dt><dd data-result="spare-lift">${f.forceN(s.float.availableForceN, u)}, ${s.float.reserve.toFixed(2)}×</dd>
-          <dt>${markTerms('Drain slots at the bottom', ['drain-slots'])}</dt><dd>${s.drain.notchCount}, ${f.areaMm2(s.drain.providedAreaMm2, u)} (needs ${f.areaMm2(s.drain.requiredAreaMm2, u)})</dd>
-          <dt>${markTerms('Air vents on top', ['air-vents'])}</dt><dd>${s.vents.count} × ${f.printMm(s.vents.diameterMm)}</dd>
+          ${s.architecture === 'direct'
+            ? html`<dt>${markTerms('Drain slots at the bottom', ['drain-slots'])}</dt><dd>${s.drain.notchCount}, ${f.areaMm2(s.drain.providedAreaMm2, u)} (needs ${f.areaMm2(s.drain.requiredAreaMm2, u)})</dd>
+                <dt>${markTerms('Air vents on top', ['air-vents'])}</dt><dd>${s.vents.count} × ${f.printMm(s.vents.diameterMm)}</dd>`
+            : html`<dt>Float's push, tank full (the arm multiplies it ${s.lever.ratio.toFixed(2)}×)</dt><dd>${f.forceN(s.lever.floatPushAtHeadMaxN, u)}</dd>
+                <dt>Reopens below where it shut by (pivot friction)</dt><dd data-result="hysteresis">${f.printMm(s.lever.hysteresisMm, 2)}</dd>`}
           ${s.closingForce.fromCalibration ? html`<dt>${markTerms('Nozzle lip width your bench points act like', ['nozzle-lip', 'bench-points'])}</dt><dd data-result="calibrated-lip">${f.printMm(s.closingForce.equivalentSealDiameterMm, 2)}</dd>` : nothing}
         </dl>
       </section>
@@ -112,23 +121,22 @@ export class FwResults extends LitElement {
       </section>
       <section aria-label="Holding down">
         <h2>${markTerms('Hold-down', ['hold-down'])}</h2>
-        <p data-result="ballast">${s.holdDown.ballastSteelG > 0
+        <p data-result="ballast">${s.architecture === 'lever' && s.mount === 'rim'
+          ? (s.holdDown.anchorForceN > 0 ? html`If the container floods the float lifts the valve ${f.forceN(s.holdDown.upliftN, u)}: tighten the hanger's clamp screw against the wall.` : 'The valve is heavy enough to stay on the rim if the container floods.')
+          : s.holdDown.ballastSteelG > 0
           ? html`If the container floods the float lifts ${f.forceN(s.holdDown.upliftN, u)}: pin the foot down or add <b>${f.massG(s.holdDown.ballastSteelG, u)}</b> of steel.`
           : 'The valve is heavy enough to stay put if the container floods.'}</p>
       </section>
       <section aria-label="Plastic">
         <h2>Plastic (${s.inputs.materialName})</h2>
         <dl>
-          <dt>Housing</dt><dd>${f.massG(s.mass.byPart.housing, u, 1)}</dd>
-          <dt>Float</dt><dd>${f.massG(s.mass.byPart.float, u, 1)}</dd>
-          <dt>Nozzle</dt><dd>${f.massG(s.mass.byPart.nozzle, u, 1)}</dd>
-          <dt>Pin</dt><dd>${f.massG(s.mass.byPart.pin, u, 1)}</dd>
+          ${valvePartNames(s).map((p) => html`<dt>${PART_WORDS[p]}</dt><dd>${f.massG((s.mass.byPart as Record<string, number>)[p] ?? 0, u, 1)}</dd>`)}
           <dt>All parts</dt><dd data-result="mass-total"><b>${f.massG(s.mass.totalG, u)}</b>, ${f.filamentLength(s.mass.filamentM, u)} of filament</dd>
         </dl>
       </section>
       <section aria-label="What set the size">
         <h2>What set the size</h2>
-        <ul>${s.boundBy.map((b) => html`<li>${shownMessage(textInUnits((CONSTRAINT_TEXT as Record<string, string>)[b] ?? b, u))}</li>`)}</ul>
+        <ul>${s.boundBy.map((b) => html`<li>${shownMessage(textInUnits(((s.architecture === 'lever' ? LEVER_CONSTRAINT_TEXT : CONSTRAINT_TEXT) as Record<string, string>)[b] ?? b, u))}</li>`)}</ul>
         ${s.warnings.map((w) => html`<div class="warn" data-warning=${w.code}>${shownMessage(textInUnits(w.message, u))}</div>`)}
       </section>
       ${this.timing ? html`<p class="timing" data-timing>${this.timing}</p>` : nothing}`;

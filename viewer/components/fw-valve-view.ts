@@ -19,11 +19,14 @@ export interface ViewOptions {
   water: boolean;
 }
 
-const COLOURS: Record<ShownPart, number> = { housing: 0xcdbb98, float: 0xe07b39, nozzle: 0x4f7b9a, pin: 0x6d8f4e, pad: 0x2e2e2e };
-/** Legend entries: swatch colour (the water as drawn, translucent) and words. */
-const LEGEND: readonly [string, string][] = [
-  ['#cdbb98', 'housing'], ['#e07b39', 'float'], ['#4f7b9a', 'nozzle'], ['#6d8f4e', 'pin'], ['#2e2e2e', 'pad'], ['#9cc5e6', 'water held (tank full)'],
-];
+const COLOURS: Record<ShownPart, number> = {
+  housing: 0xcdbb98, frame: 0xcdbb98, arm: 0x8a6d9e, hanger: 0xa89c84, stem: 0xa89c84, float: 0xe07b39, nozzle: 0x4f7b9a, pin: 0x6d8f4e, pad: 0x2e2e2e,
+};
+/** Legend entries: swatch colour (the water as drawn, translucent) and words, for the parts on screen. */
+const LEGEND_WORDS: Record<ShownPart, string> = {
+  housing: 'housing', frame: 'frame', arm: 'arm', hanger: 'rim hanger', stem: 'slotted stem', float: 'float', nozzle: 'nozzle', pin: 'pin', pad: 'pad',
+};
+const hex = (c: number) => `#${c.toString(16).padStart(6, '0')}`;
 
 /**
  * Cut faces: a pale, unlit tint of each part's colour with diagonal hatching
@@ -31,7 +34,9 @@ const LEGEND: readonly [string, string][] = [
  * a cut wall reads as solid plastic, stands out from the shaded inside
  * surfaces, and stays told apart from its neighbour.
  */
-const CUT_COLOURS: Record<ShownPart, number> = { housing: 0xf1e6cf, float: 0xf9c7a4, nozzle: 0xb3cde0, pin: 0xc6dcb2, pad: 0x9a9a9a };
+const CUT_COLOURS: Record<ShownPart, number> = {
+  housing: 0xf1e6cf, frame: 0xf1e6cf, arm: 0xd9c8e6, hanger: 0xe3dccd, stem: 0xe3dccd, float: 0xf9c7a4, nozzle: 0xb3cde0, pin: 0xc6dcb2, pad: 0x9a9a9a,
+};
 /** hatch period and line width, in device pixels */
 const HATCH_PERIOD_PX = 7;
 const HATCH_LINE_PX = 2;
@@ -238,11 +243,25 @@ export class FwValveView extends LitElement {
   private explodeOffset(name: ShownPart): THREE.Vector3 {
     const s = this.sizing;
     if (!this.options.exploded || !s) return new THREE.Vector3();
-    const foot = s.housing.footDiameterMm;
+    const foot = s.footprintMm;
+    const tall = s.architecture === 'direct' ? s.housing.heightMm : s.frame.heightMm;
+    if (s.architecture === 'lever') {
+      // the float, arm and pad down and out along the arm, the nozzle up, the pin out sideways, the rim mount back
+      switch (name) {
+        case 'float': return new THREE.Vector3(foot * 0.3, 0, -Math.max(20, tall * 0.25));
+        case 'arm':
+        case 'pad': return new THREE.Vector3(0, 0, -Math.max(10, tall * 0.1));
+        case 'nozzle': return new THREE.Vector3(0, 0, Math.max(25, tall * 0.35));
+        case 'pin': return new THREE.Vector3(0, -foot * 0.6, 0);
+        case 'hanger':
+        case 'stem': return new THREE.Vector3(-foot * 0.3, 0, 0);
+        default: return new THREE.Vector3();
+      }
+    }
     switch (name) {
       case 'float':
       case 'pad': return new THREE.Vector3(foot * 0.95, 0, 0);
-      case 'nozzle': return new THREE.Vector3(0, 0, Math.max(25, s.housing.heightMm * 0.35));
+      case 'nozzle': return new THREE.Vector3(0, 0, Math.max(25, tall * 0.35));
       case 'pin': return new THREE.Vector3(-foot * 1.15, 0, 0);
       default: return new THREE.Vector3();
     }
@@ -253,7 +272,8 @@ export class FwValveView extends LitElement {
     const planes = this.options.section ? [this.cut] : [];
     for (const [name, mesh] of this.parts) {
       const m = new THREE.Matrix4();
-      if (t) m.fromArray(t[name]);
+      const placed = t?.[name];
+      if (placed) m.fromArray(placed);
       const off = this.explodeOffset(name);
       mesh.matrix.copy(new THREE.Matrix4().makeTranslation(off.x, off.y, off.z).multiply(m));
       mesh.matrixWorldNeedsUpdate = true;
@@ -274,7 +294,7 @@ export class FwValveView extends LitElement {
       this.scene.add(this.water);
     }
     // the water in the container up to the level held with the tank full, as a block cut with the parts
-    const size = s.housing.footDiameterMm * 1.5;
+    const size = s.footprintMm * 1.5;
     const level = Math.max(0.1, s.levels.shutOffAtHeadMaxMm);
     this.water.scale.set(size, size, level);
     this.water.position.set(0, 0, level / 2);
@@ -329,6 +349,13 @@ export class FwValveView extends LitElement {
     this.dataset.polarDeg = THREE.MathUtils.radToDeg(this.controls.getPolarAngle()).toFixed(1);
   }
 
+  /** The parts on screen for the legend: the sizing's own (a lever's frame and arm), else the direct valve's. */
+  private legendParts(): ShownPart[] {
+    const s = this.sizing;
+    if (s?.architecture === 'lever') return ['frame', 'arm', 'float', 'nozzle', 'pin', ...(s.rim ? (['hanger', 'stem'] as const) : []), 'pad'];
+    return ['housing', 'float', 'nozzle', 'pin', 'pad'];
+  }
+
   /** Put the camera back to its first view. */
   resetView(): void {
     if (this.parts.size === 0) return;
@@ -338,7 +365,7 @@ export class FwValveView extends LitElement {
 
   override render() {
     return html`<div class="stage">${this.webglError ? html`<p class="fallback">This browser could not start 3D drawing (${this.webglError}). The sizes, plot and downloads still work.</p>` : ''}</div>
-      <div class="legend" aria-hidden="true">${LEGEND.map(([colour, words]) => html`<i><span style="background:${colour}"></span>${words}</i>`)}${this.options.section ? html`<i><span class="cut"></span>cut faces</i>` : ''}</div>`;
+      <div class="legend" aria-hidden="true">${[...this.legendParts().map((p): [string, string] => [hex(COLOURS[p]), LEGEND_WORDS[p]]), ['#9cc5e6', 'water held (tank full)']].map(([colour, words]) => html`<i><span style="background:${colour}"></span>${words}</i>`)}${this.options.section ? html`<i><span class="cut"></span>cut faces</i>` : ''}</div>`;
   }
 }
 

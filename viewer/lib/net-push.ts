@@ -1,6 +1,7 @@
 /**
  * The float's net upward push against the reservoir level, with the float held
- * at its sealed position: F(L) = rho g V_sub(L - z_b) - m g (Archimedes), where
+ * at its sealed position: F(L) = rho g V_sub(L - z_b) - m g (Archimedes) (for a
+ * lever, the push that gives at the pad through the arm), where
  * z_b is the float's bottom when sealed and V_sub the displaced volume of its
  * outer envelope. The level where F reaches the force needed to close at a head
  * is the level the valve holds at that head.
@@ -14,7 +15,11 @@ export function netPushN(sizing: SizingSuccess, levelMm: number): number {
   const f = sizing.parts.float;
   const depth = levelMm - sizing.parts.mount.floatSealZMm;
   const rho = sizing.inputs.liquidDensityKgM3;
-  return rho * STANDARD_GRAVITY * submergedVolumeMm3(f, depth) * 1e-9 - (sizing.float.massG / 1000) * STANDARD_GRAVITY;
+  const floatPush = rho * STANDARD_GRAVITY * submergedVolumeMm3(f, depth) * 1e-9 - (sizing.float.massG / 1000) * STANDARD_GRAVITY;
+  if (sizing.architecture === 'direct') return floatPush;
+  // a lever: the push at the pad, through the arm (the moment balance, lever.padForceFromPush)
+  const m = sizing.lever.padForceFromPush;
+  return m.perNewton * floatPush + m.offsetN;
 }
 
 export interface PushCurve {

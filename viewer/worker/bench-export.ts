@@ -13,7 +13,7 @@ import { printBedMm } from '../../generator/sizing/parts/print-bed.ts';
 import { buildSheetHtml, buildSheetMarkdown } from '../../generator/doc/build-sheet.ts';
 import { fileStem } from '../../generator/doc/file-stem.ts';
 import { plates, stlFile } from './export-files.ts';
-import { PART_NAMES, type PartMeshes } from './parts-contract.ts';
+import { valvePartNames, type PartMeshes } from './parts-contract.ts';
 import type { ExportFile } from './protocol.ts';
 
 
@@ -32,9 +32,10 @@ export async function benchZip(result: PlanResult, name = 'bench'): Promise<Expo
     const meshes = (await buildParts(d.sizing, { quality: 'export' })) as PartMeshes;
     // the files as `floatwright plan` names them (generator/solids/write-design-files.ts): <id>-<part>.stl, <id>-plate.3mf, ...
     const plateFiles = plates(d.id, meshes, document, d.sizing);
-    const sheetFiles = { stl: Object.fromEntries(PART_NAMES.map((p) => [p, `${d.id}-${p}.stl`])), plate3mf: plateFiles[0]!.name };
+    const names = valvePartNames(d.sizing);
+    const sheetFiles = { stl: Object.fromEntries(names.map((p) => [p, `${d.id}-${p}.stl`])), plate3mf: plateFiles[0]!.name };
     const set: ExportFile[] = [
-      ...PART_NAMES.map((p) => stlFile(d.id, p, meshes)),
+      ...names.map((p) => stlFile(d.id, p, meshes)),
       ...plateFiles,
       { name: `${d.id}-design.json`, mime: 'application/json', bytes: strToU8(`${JSON.stringify(document, null, 2)}\n`) },
       { name: `${d.id}-build-sheet.md`, mime: 'text/markdown', bytes: strToU8(buildSheetMarkdown(d.sizing, document, sheetFiles)) },
@@ -42,7 +43,7 @@ export async function benchZip(result: PlanResult, name = 'bench'): Promise<Expo
     ];
     files[d.id] = set.map((f) => `${folder}/${f.name}`);
     for (const f of set) entries[`${folder}/${f.name}`] = f.bytes;
-    designs.push({ id: d.id, quantity: d.quantity, meshes: Object.fromEntries(PART_NAMES.map((p) => [p, meshes[p]])) });
+    designs.push({ id: d.id, quantity: d.quantity, meshes: Object.fromEntries(names.map((p) => [p, meshes[p]!])) });
   }
   // the plan's plates on the smallest bed of its designs (print.bed), as the command line does
   const bed = result.designs.reduce<{ widthMm: number; depthMm: number } | undefined>((b, d) => {

@@ -9,7 +9,7 @@ import type { SizingSuccess } from '../../generator/sizing/result.ts';
 import { fileStem } from '../../generator/doc/file-stem.ts';
 import type { TextUnits } from '../../generator/doc/text-in-units.ts';
 import { buildSheet } from './sheet-source.ts';
-import { PART_NAMES, type PartMeshes, type PartName } from './parts-contract.ts';
+import { valvePartNames, type PartMeshes, type PartName } from './parts-contract.ts';
 import type { ExportFile, ExportKind } from './protocol.ts';
 
 /** The 3MF plate: the design's bed (print.bed, 220 x 220 mm by default, common practice), 8 mm between parts. */
@@ -21,7 +21,9 @@ export function baseName(document: unknown): string {
 }
 
 export function stlFile(base: string, part: PartName, meshes: PartMeshes): ExportFile {
-  return { name: `${base}-${part}.stl`, mime: 'model/stl', bytes: writeStlBinary(meshes[part], { header: `floatwright ${part}, millimetres` }) };
+  const mesh = meshes[part];
+  if (!mesh) throw new Error(`this valve has no ${part}`);
+  return { name: `${base}-${part}.stl`, mime: 'model/stl', bytes: writeStlBinary(mesh, { header: `floatwright ${part}, millimetres` }) };
 }
 
 /** `units` (default metric): the system the build sheet is written in; parts and plates are in millimetres either way. */
@@ -33,7 +35,7 @@ export function exportFiles(kind: ExportKind, sizing: SizingSuccess, document: u
   };
   switch (kind) {
     case 'stl':
-      return [stlFile(base, part ?? 'housing', need())];
+      return [stlFile(base, part ?? valvePartNames(sizing)[0]!, need())];
     case '3mf':
       return plates(base, need(), document, sizing);
     case 'sheet':
@@ -41,7 +43,7 @@ export function exportFiles(kind: ExportKind, sizing: SizingSuccess, document: u
     case 'zip': {
       const m = need();
       const entries: Record<string, Uint8Array> = {};
-      for (const p of PART_NAMES) {
+      for (const p of valvePartNames(sizing)) {
         const f = stlFile(base, p, m);
         entries[f.name] = f.bytes;
       }
@@ -58,14 +60,15 @@ export function plates(base: string, meshes: PartMeshes, document: unknown, sizi
   const title = document && typeof document === 'object' && typeof (document as { name?: unknown }).name === 'string' ? (document as { name: string }).name : 'floatwright valve';
   const bed = printBedMm(sizing.inputs);
   const plate = { ...PLATE, plateWidthMm: bed.widthMm, plateDepthMm: bed.depthMm };
-  const footprints = PART_NAMES.map((name) => {
-    const b = meshBounds(meshes[name]);
+  const names = valvePartNames(sizing);
+  const footprints = names.map((name) => {
+    const b = meshBounds(meshes[name]!);
     return { name, widthMm: b.max[0] - b.min[0], depthMm: b.max[1] - b.min[1] };
   });
   const groups = packPlates(footprints, plate);
   return groups.map((g, k) => ({
     name: groups.length === 1 ? `${base}-plate.3mf` : `${base}-plate-${k + 1}.3mf`,
     mime: 'model/3mf',
-    bytes: write3mf(g.map((i) => ({ name: PART_NAMES[i], mesh: meshes[PART_NAMES[i]] })), { ...plate, title }),
+    bytes: write3mf(g.map((i) => ({ name: names[i]!, mesh: meshes[names[i]!]! })), { ...plate, title }),
   }));
 }

@@ -6,12 +6,14 @@
  * rubber by default).
  */
 import type { IndexedMesh } from '../../generator/solids/mesh/types.ts';
-import type { PartName } from '../../generator/solids/assembly.ts';
+import { PART_NAMES, PART_WORDS, valvePartNames, type PartName } from '../../generator/solids/part-names.ts';
 
-export const PART_NAMES: readonly PartName[] = ['housing', 'float', 'nozzle', 'pin'];
+/** The direct valve's parts (PART_NAMES) or a sized valve's own (valvePartNames: a lever's frame, arm, ...). */
+export { PART_NAMES, PART_WORDS, valvePartNames };
 export type { PartName };
 export type ShownPart = PartName | 'pad';
-export type PartMeshes = Record<PartName, IndexedMesh> & { pad?: IndexedMesh };
-export type PartTransforms = Record<ShownPart, number[]>;
+/** The meshes of the parts the valve has (a direct valve's housing, a lever's frame and arm, ...). */
+export type PartMeshes = Partial<Record<PartName, IndexedMesh>> & { pad?: IndexedMesh };
+export type PartTransforms = Partial<Record<ShownPart, number[]>>;
 export type FloatPose = 'rest' | 'seal';
 export type { IndexedMesh };

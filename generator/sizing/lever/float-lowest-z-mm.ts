@@ -15,6 +15,7 @@
 export function floatLowestZMm(floatArmMm: number, radiusMm: number, bottomZMm: number, pivotZMm: number, thetaRad: number): number {
   const s = Math.sin(thetaRad);
   const c = Math.cos(thetaRad);
-  const z = (x: number) => pivotZMm - x * s + (bottomZMm - pivotZMm) * c;
-  return Math.min(z(floatArmMm - radiusMm), z(floatArmMm + radiusMm));
+  // no inner function: this runs inside the lever search's bisections
+  const bottom = pivotZMm + (bottomZMm - pivotZMm) * c;
+  return Math.min(bottom - (floatArmMm - radiusMm) * s, bottom - (floatArmMm + radiusMm) * s);
 }

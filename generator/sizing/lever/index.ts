@@ -25,3 +25,4 @@ export { leverHoldDown, type LeverHoldDownOptions } from './lever-hold-down.ts';
 export { searchLever, shortestPadArmMm, type LeverSearchOptions, type LeverSearchOutcome } from './search-lever.ts';
 export * from './lever-constants.ts';
 export type * from './lever-types.ts';
+export { LEVER_CONSTRAINT_TEXT } from './lever-constraint-text.ts';

@@ -5,6 +5,7 @@ import { PIN_DIAMETER_MM, pinSpec } from '../parts/pin-spec.ts';
 import { rimMountSpec, type RimMountSpec } from '../rim/rim-mount-spec.ts';
 import { rimMountVolumesMm3 } from '../rim/rim-mount-volumes.ts';
 import { RIM_ADJUST_MM } from '../rim/rim-constants.ts';
+import { fitsBed, printBedMm } from '../parts/print-bed.ts';
 import { armStopTurnRad } from './arm-stop-turn-rad.ts';
 import { armWeightInLiquidN } from './arm-weight-in-liquid-n.ts';
 import { leverHoldDown } from './lever-hold-down.ts';
@@ -67,9 +68,10 @@ export function padForceFromPush(load: ArmLoad, floatPushN: number): number {
   return leverPadForceN(floatPushN, load.arm.floatArmMm + k, load.weightN, load.centroidMm + k, load.arm.padArmMm + k);
 }
 
-/** Reserve and seal depth of a float on this arm at H_max (what its cylinder height settles). */
-export function leverFloatChecks(lb: LeverBasis, load: ArmLoad, f: LeverFloat): { reserve: number; sealDepthMm: number; pushN: number } {
+/** Reserve and seal depth of a float on this arm at H_max (what its cylinder height settles); with no float, the push alone. */
+export function leverFloatChecks(lb: LeverBasis, load: ArmLoad, f: LeverFloat | null): { reserve: number; sealDepthMm: number; pushN: number } {
   const push = floatPushForHead(lb, load, lb.basis.inputs.headMaxM).floatPushN;
+  if (!f) return { reserve: NaN, sealDepthMm: NaN, pushN: push };
   return {
     reserve: padForceFromPush(load, f.availableN) / lb.sealForceN(lb.basis.inputs.headMaxM),
     sealDepthMm: depthForForceMm(f.float, push, f.massKg, lb.basis.inputs.liquidDensityKgM3),
@@ -144,7 +146,8 @@ export function layoutLever(lb: LeverBasis, o: LeverLayoutOptions): LeverCandida
   if (lowestAt(restTravel) < floorZ) {
     let lo = 0;
     let hi = restTravel;
-    for (let i = 0; i < 40; i++) {
+    // 30 halvings: a few tenths of a micrometre on any travel
+    for (let i = 0; i < 30; i++) {
       const mid = (lo + hi) / 2;
       if (lowestAt(mid) >= floorZ) lo = mid;
       else hi = mid;
@@ -213,13 +216,28 @@ export function layoutLever(lb: LeverBasis, o: LeverLayoutOptions): LeverCandida
   if (seal.reserve < inp.reserve) violations.push('reserve');
   if (!(sealDepth <= f.cylinderHeightMm)) violations.push('seal-in-cylinder');
   if (restTravel < b.minimumTravelMm - 1e-9 || floatBottom < floorZ) violations.push('travel');
-  if (arm.floatArmMm - R < frame.postHalfLengthMm + FLOAT_TO_FRAME_GAP_MM - 1e-9) violations.push('float-clearance');
+  // clear of the frame at the seal and at rest: turned nose down by theta about the pivot, the float's near bottom
+  // corner (a_f - R, z_b) swings back towards the frame to (a_f - R) cos(theta) - (z_p - z_b) sin(theta)
+  const restTurn = Math.asin(Math.min(1, (restTravel + delta) / arm.padArmMm));
+  const nearAtRest = (arm.floatArmMm - R) * Math.cos(restTurn) - (pivot - floatBottom) * Math.sin(restTurn);
+  if (Math.min(arm.floatArmMm - R, nearAtRest) < frame.postHalfLengthMm + FLOAT_TO_FRAME_GAP_MM - 1e-9) violations.push('float-clearance');
   if (contact.lipGapMm > delta / 2 + 1e-9) violations.push('pad-arc');
   if (footprint > inp.maxOuterDiameterM * 1e3 + 1e-9) violations.push('outer-diameter-limit');
   if (frame.heightMm > PART_SIZE_CAP_MM || arm.tipXMm - arm.tailXMm > PART_SIZE_CAP_MM || f.outerDiameterMm > PART_SIZE_CAP_MM || (rim && rim.stem.lengthMm > PART_SIZE_CAP_MM)) {
     violations.push('part-size');
   }
   if (rim && (rim.tooLow || frame.cheekBottomZMm < RIM_ADJUST_MM)) violations.push('rim-height');
+  // every part's print footprint on the bed, either way round: frame deck down, arm top face down, float, pin,
+  // hanger on its side, stem flat
+  const bed = printBedMm(inp);
+  const footprints: [number, number][] = [
+    [frame.deckFrontXMm - frame.footBackXMm, Math.max(frame.footWidthMm, frame.deckWidthMm)],
+    [arm.tipXMm - arm.tailXMm, Math.max(arm.barWidthMm, 2 * arm.tableHalfSideMm)],
+    [f.outerDiameterMm, f.outerDiameterMm],
+    [pin.lengthMm + pin.head.lengthMm, pin.head.widthMm],
+    ...(rim ? ([[rim.hanger.gapMm + 2 * rim.hanger.legMm, rim.hanger.innerLegLengthMm + rim.hanger.legMm], [rim.stem.lengthMm, rim.stem.widthMm]] as [number, number][]) : []),
+  ];
+  if (!footprints.every(([w, dd]) => fitsBed(w, dd, bed))) violations.push('bed-size');
   // the stop must leave the tight seal free: it may only take the push past the seal's indentation
   if (!(lb.padStopIndentationMm > delta)) violations.push('pad-stop');
 

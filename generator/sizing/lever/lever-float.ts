@@ -13,10 +13,10 @@ export interface LeverFloat {
 }
 
 /**
- * The lever's float: the direct valve's float shape (generator/sizing/float, its
- * cone and walls whatever they are), whose pad pocket becomes a socket for the
- * arm's round tongue (FLOAT_SOCKET_DEPTH_MM deep, the tongue's diameter plus the
- * print clearance). It carries no pad, so its mass is its shell alone.
+ * The lever's float: the direct valve's float shape (generator/sizing/float: the
+ * 50-degree cone and a collar inside which the cavity closes to a point), whose
+ * pad pocket becomes a socket for the arm's round tongue (FLOAT_SOCKET_DEPTH_MM
+ * deep, the tongue's diameter plus the print clearance) in a collar at least as tall. It carries no pad, so its mass is its shell alone.
  * Returns null when the shape does not close.
  */
 export function leverFloat(
@@ -36,10 +36,10 @@ export function leverFloat(
     padProudMm: 0,
     clearanceMm: PRINT_CLEARANCE_MM,
     rimMm: shellMm,
-    // 45 degrees, as the lever's layout was built and checked for: at 50 its float meets the frame
-    // at rest (the lever's layout has no float-to-frame rule yet). A slicer at a 45-degree threshold
-    // may support inside this cavity; issue 13's layout should take the 50-degree cone.
-    coneRise: 1,
+    // a collar round the socket, at least as tall as the socket is deep, so the tongue is held all its length
+    // and the cavity's 50-degree roof closes to a point inside it: no flat roof, no bridge (a slicer would fill
+    // a bridged cavity with support that can never come out; see float-shape.ts)
+    collarHeightMm: FLOAT_SOCKET_DEPTH_MM,
   });
   if (!float) return null;
   const shell = floatShellVolumeMm3(float);

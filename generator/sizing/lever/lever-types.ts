@@ -178,4 +178,5 @@ export type LeverConstraint =
   | 'outer-diameter-limit'
   | 'part-size'
   | 'rim-height'
+  | 'bed-size'
   | 'pad-stop';

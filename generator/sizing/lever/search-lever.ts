@@ -1,7 +1,7 @@
 import { PART_SIZE_CAP_MM, PRINT_CLEARANCE_MM } from '../constants.ts';
 import { HEIGHT_STEP_MM } from '../layout/search-size.ts';
 import { shortestWorkingHeightMm } from '../layout/shortest-working-height.ts';
-import { armLoad, layoutLever, leverFloatChecks, type ArmLoad } from './layout-lever.ts';
+import { armLoad, layoutLever, leverFloatChecks, padForceFromPush, type ArmLoad } from './layout-lever.ts';
 import { leverArmSpec } from './lever-arm-spec.ts';
 import {
   FLOAT_ARM_STEP_MM,
@@ -16,9 +16,16 @@ import { leverPad } from './lever-pad.ts';
 import type { LeverBasis, LeverCandidate, LeverConstraint } from './lever-types.ts';
 
 const SMALLEST_FLOAT_MM = 16;
+/** The coarse grid the search walks first (then the fine one round its lightest), mm. */
+const COARSE_DIAMETER_STEP_MM = 3;
+const COARSE_ARM_STEP_MM = 5;
+/** Where the coarse grid fits nothing, the fine grid is searched round this many of its lightest near misses (one rule failed). */
+const NEAR_MISSES_REFINED = 8;
 
 export interface LeverSearchOptions {
   mount: 'floor' | 'rim';
+  /** pad arms tried past the shortest, mm; default PAD_ARM_EXTRA_MM */
+  padArmExtrasMm?: readonly number[];
   rim?: { rimHeightMm: number; wallThicknessMm: number };
 }
 
@@ -28,6 +35,10 @@ export interface LeverSearchOutcome {
   rejections: Map<LeverConstraint, number>;
   /** candidates laid out (for the benchmark) */
   evaluated: number;
+  /** the constraints that rejected a lighter candidate than the best (what bound it), most often first; 'least-mass' when none did */
+  boundBy: (LeverConstraint | 'least-mass')[];
+  /** the smallest footprint of any candidate that passed every rule, mm (Infinity without one) */
+  smallestFootprintMm: number;
 }
 
 /**
@@ -40,16 +51,55 @@ export function shortestPadArmMm(lb: LeverBasis, postHalfLengthMm: number, table
   return Math.ceil(Math.max(2 * sealMm, postHalfLengthMm + PRINT_CLEARANCE_MM + tableHalfSideMm) * 2 - 1e-9) / 2;
 }
 
-/** Shortest cylinder (on the height grid) meeting the reserve and the seal-in-cylinder rule on this arm, or null. Both ease with height, as in the direct search. */
+/**
+ * Shortest cylinder (on the height grid) meeting the reserve and the seal-in-cylinder rule on this arm, or null.
+ * Both are linear in the cylinder's height h while the water line is on the straight side: the lift
+ * F(h) = rho g V(h) - m(h) g and the float's mass m(h) grow linearly with h (the cone and the collar above do
+ * not change), so the reserve asks F(h) >= F_1 and the seal depth (push + m(h) g) / (rho g pi R^2) <= h.
+ * Two floats, at h = 10 and 20 mm, give the lines; their meeting heights, up to the grid, are then checked on
+ * the real shape (stepping up the grid while fuzz or the cone says no).
+ * Source: Archimedes' principle; straight lines through two points.
+ */
 function shortestCylinderMm(lb: LeverBasis, load: ArmLoad, diameterMm: number): number | null {
   const inp = lb.basis.inputs;
+  const rho = inp.liquidDensityKgM3;
+  const shell = lb.basis.floatShellMm;
+  const at = (h: number) => leverFloat(diameterMm, h, load.arm.tongueDiameterMm, shell, inp.materialDensityKgM3, rho);
+  const pushAtHeadMaxN = leverFloatChecks(lb, load, null).pushN;
+  const needed = inp.reserve * lb.sealForceN(inp.headMaxM);
   const ok = (h: number) => {
-    const f = leverFloat(diameterMm, h, load.arm.tongueDiameterMm, lb.basis.floatShellMm, inp.materialDensityKgM3, inp.liquidDensityKgM3);
+    const f = at(h);
     if (!f) return false;
-    const c = leverFloatChecks(lb, load, f);
-    return c.reserve >= inp.reserve && c.sealDepthMm <= h;
+    // sealed on the straight side: the volume displaced at the seal fits in the cylinder (no depth search)
+    const sealVolumeMm3 = ((pushAtHeadMaxN / 9.80665 + f.massKg) / rho) * 1e9;
+    return padForceFromPush(load, f.availableN) >= needed && sealVolumeMm3 <= Math.PI * (diameterMm / 2) ** 2 * h;
   };
-  return shortestWorkingHeightMm(ok, HEIGHT_STEP_MM, 0.5, PART_SIZE_CAP_MM);
+  const a = at(10);
+  const b = at(20);
+  if (!a || !b) return shortestWorkingHeightMm(ok, HEIGHT_STEP_MM, 0.5, PART_SIZE_CAP_MM);
+  const g = 9.80665;
+  const pushN = pushAtHeadMaxN;
+  // the float's own lift needed for the reserve, through the arm: padForceFromPush is linear and rising in the push
+  const neededPadN = needed;
+  const liftSlope = (b.availableN - a.availableN) / 10;
+  const padA = padForceFromPush(load, a.availableN);
+  const padB = padForceFromPush(load, b.availableN);
+  const padSlope = (padB - padA) / 10;
+  if (!(liftSlope > 0) || !(padSlope > 0)) return shortestWorkingHeightMm(ok, HEIGHT_STEP_MM, 0.5, PART_SIZE_CAP_MM);
+  const hReserve = 10 + (neededPadN - padA) / padSlope;
+  // seal depth on the straight side: (push + m(h) g) / (rho g A) <= h, m(h) = m_a + k (h - 10)
+  const areaM2 = Math.PI * (diameterMm / 2) ** 2 * 1e-6;
+  const k = (b.massKg - a.massKg) / 10;
+  const perMm = rho * g * areaM2 * 1e-3; // N of lift per mm of depth
+  const hSeal = (pushN + (a.massKg - 10 * k) * g) / (perMm - k * g);
+  if (!(perMm > k * g)) return shortestWorkingHeightMm(ok, HEIGHT_STEP_MM, 0.5, PART_SIZE_CAP_MM);
+  let h = Math.max(0.5, Number((Math.ceil(Math.max(hReserve, hSeal) / HEIGHT_STEP_MM - 1e-6) * HEIGHT_STEP_MM).toFixed(6)));
+  if (h > PART_SIZE_CAP_MM) return null;
+  // the grid point just below may already hold (rounding): the search's height is the least that holds
+  const below = Number((h - HEIGHT_STEP_MM).toFixed(6));
+  if (below >= 0.5 && ok(below)) return shortestWorkingHeightMm(ok, HEIGHT_STEP_MM, 0.5, below);
+  for (let i = 0; i < 20; i++, h = Number((h + HEIGHT_STEP_MM).toFixed(6))) if (ok(h)) return h;
+  return shortestWorkingHeightMm(ok, HEIGHT_STEP_MM, h, PART_SIZE_CAP_MM);
 }
 
 /** Round a mass to 0.01 g so that ties go to the smaller footprint. */
@@ -76,6 +126,10 @@ export function searchLever(lb: LeverBasis, o: LeverSearchOptions): LeverSearchO
   const rejections = new Map<LeverConstraint, number>();
   let best: LeverCandidate | null = null;
   let evaluated = 0;
+  let smallestFootprintMm = Infinity;
+  const rejected: { massKg: number; violations: LeverConstraint[] }[] = [];
+  // the arm's rest stop is built for the preferred travel; where nothing fits so (shallow trays), for the least
+  let stopTravelMm = lb.basis.preferredTravelMm;
   const armFor = (padArm: number, floatArm: number) =>
     leverArmSpec({
       padArmMm: padArm,
@@ -85,36 +139,99 @@ export function searchLever(lb: LeverBasis, o: LeverSearchOptions): LeverSearchO
       padDiameterMm: pad.diameterMm,
       padThicknessMm: pad.thicknessMm,
       padProudMm: pad.proudMm,
-      restTurnRad: Math.asin(Math.min(1, (lb.basis.preferredTravelMm + lb.indentationMm) / padArm)),
+      restTurnRad: Math.asin(Math.min(1, (stopTravelMm + lb.indentationMm) / padArm)),
     });
   const probe = armFor(100, 200);
   // the frame's post reaches a clearance and a wall past the eye (leverFrameSpec)
   const post = probe.eyeHalfLengthMm + PRINT_CLEARANCE_MM + wallMm;
   const shortest = shortestPadArmMm(lb, post, probe.tableHalfSideMm);
-  for (const extra of PAD_ARM_EXTRA_MM) {
-    const padArm = shortest + extra;
-    for (let d = SMALLEST_FLOAT_MM; d <= Math.min(limitMm, PART_SIZE_CAP_MM) + 1e-9; d += LEVER_DIAMETER_STEP_MM) {
-      const first = Math.max(MIN_LEVER_RATIO * padArm, post + d / 2 + FLOAT_TO_FRAME_GAP_MM);
-      for (let k = Math.ceil(first / FLOAT_ARM_STEP_MM - 1e-9); k * FLOAT_ARM_STEP_MM <= MAX_LEVER_RATIO * padArm + 1e-9; k++) {
-        const floatArm = k * FLOAT_ARM_STEP_MM;
+  const maxD = Math.min(limitMm, PART_SIZE_CAP_MM);
+  const seen = new Set<number>();
+  /** Lays out one candidate (pad arm, float diameter, float arm); returns it, or null when no float shape fits. */
+  const evaluate = (padArm: number, d: number, floatArm: number): LeverCandidate | null => {
+    // pad arms on 0.5 mm, diameters on 1 mm and float arms on 2.5 mm grids: one number each
+    const key = ((stopTravelMm === lb.basis.preferredTravelMm ? 0 : 1) * 4096 + Math.round(padArm * 2) * 4096 + Math.round(d)) * 4096 + Math.round(floatArm * 2);
+    if (seen.has(key)) return null;
+    seen.add(key);
+    const load = armLoad(lb, armFor(padArm, floatArm));
+    const h = shortestCylinderMm(lb, load, d);
+    if (h === null) return null;
+    const f = leverFloat(d, h, load.arm.tongueDiameterMm, lb.basis.floatShellMm, inp.materialDensityKgM3, inp.liquidDensityKgM3);
+    if (!f) return null;
+    const c = layoutLever(lb, { mount: o.mount, rim: o.rim, load, float: f });
+    evaluated++;
+    for (const v of c.violations) rejections.set(v, (rejections.get(v) ?? 0) + 1);
+    if (c.violations.length) rejected.push({ massKg: c.totalMassKg, violations: c.violations });
+    else smallestFootprintMm = Math.min(smallestFootprintMm, c.footprintMm);
+    return c;
+  };
+  /** The lightest candidate of one pad arm over a grid of diameters and float arms (each float arm row stops past the limit). */
+  /** candidates of the last scan that failed one rule only (where a window the coarse grid stepped over may lie) */
+  let near: LeverCandidate[] = [];
+  const scan = (padArm: number, diameters: number[], armStep: number, armFrom = -Infinity, armTo = Infinity): LeverCandidate | null => {
+    let found: LeverCandidate | null = null;
+    near = [];
+    for (const d of diameters) {
+      const first = Math.max(MIN_LEVER_RATIO * padArm, post + d / 2 + FLOAT_TO_FRAME_GAP_MM, armFrom);
+      const last = Math.min(MAX_LEVER_RATIO * padArm, armTo);
+      for (let k = Math.ceil(first / armStep - 1e-9); k * armStep <= last + 1e-9; k++) {
+        const floatArm = Number((k * armStep).toFixed(6));
         // the float's far rim alone is past the limit from here on
         if (floatArm + d / 2 + post > limitMm + 1e-9) break;
-        const load = armLoad(lb, armFor(padArm, floatArm));
-        const h = shortestCylinderMm(lb, load, d);
-        if (h === null) continue;
-        const f = leverFloat(d, h, load.arm.tongueDiameterMm, lb.basis.floatShellMm, inp.materialDensityKgM3, inp.liquidDensityKgM3);
-        if (!f) continue;
-        const c = layoutLever(lb, { mount: o.mount, rim: o.rim, load, float: f });
-        evaluated++;
-        for (const v of c.violations) rejections.set(v, (rejections.get(v) ?? 0) + 1);
+        const c = evaluate(padArm, d, floatArm);
+        if (!c) continue;
+        if (c.violations.length === 1) near.push(c);
         if (c.violations.length === 0) {
-          const lighter = !best || massKey(c.totalMassKg) < massKey(best.totalMassKg);
-          const tie = best && massKey(c.totalMassKg) === massKey(best.totalMassKg) && c.footprintMm < best.footprintMm;
-          if (lighter || tie) best = c;
+          const lighter = !found || massKey(c.totalMassKg) < massKey(found.totalMassKg);
+          const tie = found && massKey(c.totalMassKg) === massKey(found.totalMassKg) && c.footprintMm < found.footprintMm;
+          if (lighter || tie) found = c;
         }
         if (c.violations.includes('outer-diameter-limit')) break;
       }
     }
+    return found;
+  };
+  const grid = (from: number, to: number, step: number) => {
+    const out: number[] = [];
+    for (let k = Math.ceil(from / step - 1e-9); k * step <= to + 1e-9; k++) out.push(Number((k * step).toFixed(6)));
+    return out;
+  };
+  const lighterOf = (a: LeverCandidate | null, b: LeverCandidate | null) =>
+    !a ? b : !b ? a : massKey(b.totalMassKg) < massKey(a.totalMassKg) || (massKey(b.totalMassKg) === massKey(a.totalMassKg) && b.footprintMm < a.footprintMm) ? b : a;
+  for (const stop of [lb.basis.preferredTravelMm, lb.basis.minimumTravelMm]) {
+    if (best) break;
+    stopTravelMm = stop;
+    for (const extra of o.padArmExtrasMm ?? PAD_ARM_EXTRA_MM) {
+      const padArm = shortest + extra;
+      // coarse, then fine round the coarse best; a pad arm whose coarse grid fits nothing gets the whole fine grid
+      const coarse = scan(padArm, grid(SMALLEST_FLOAT_MM, maxD, COARSE_DIAMETER_STEP_MM), COARSE_ARM_STEP_MM);
+      // fine round a candidate of the coarse grid
+      const around = (c: LeverCandidate) =>
+        scan(
+          padArm,
+          grid(Math.max(SMALLEST_FLOAT_MM, c.float.outerDiameterMm - COARSE_DIAMETER_STEP_MM), Math.min(maxD, c.float.outerDiameterMm + COARSE_DIAMETER_STEP_MM), LEVER_DIAMETER_STEP_MM),
+          FLOAT_ARM_STEP_MM,
+          c.arm.floatArmMm - COARSE_ARM_STEP_MM,
+          c.arm.floatArmMm + COARSE_ARM_STEP_MM,
+        );
+      let here: LeverCandidate | null;
+      if (coarse) here = lighterOf(coarse, around(coarse));
+      else {
+        // nothing on the coarse grid: look between its points only round the lightest few that failed one rule
+        here = null;
+        const closest = [...near].sort((x, y) => x.totalMassKg - y.totalMassKg).slice(0, NEAR_MISSES_REFINED);
+        for (const c of closest) here = lighterOf(here, around(c));
+      }
+      // a longer pad arm is heavier once one fits: go on only while the lightest keeps falling
+      if (best && (!here || massKey(here.totalMassKg) >= massKey(best.totalMassKg))) break;
+      best = lighterOf(best, here);
+    }
   }
-  return { best, rejections, evaluated };
+  const bound = new Map<LeverConstraint, number>();
+  if (best) {
+    for (const r of rejected) if (massKey(r.massKg) < massKey(best.totalMassKg)) for (const v of r.violations) bound.set(v, (bound.get(v) ?? 0) + 1);
+  }
+  const boundBy: (LeverConstraint | 'least-mass')[] = [...bound.entries()].sort((a, b) => b[1] - a[1]).map(([code]) => code);
+  if (best && boundBy.length === 0) boundBy.push('least-mass');
+  return { best, rejections, evaluated, boundBy, smallestFootprintMm };
 }

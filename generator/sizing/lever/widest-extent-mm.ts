@@ -21,10 +21,20 @@ export function widestExtentMm(shapes: readonly PlanShape[]): number {
     if (s.kind === 'rect') corners.push([s.x0, s.y0], [s.x0, s.y1], [s.x1, s.y0], [s.x1, s.y1]);
     else circles.push(s);
   }
-  let best = 0;
+  // corner to corner compared squared (one root at the end), then the circles
+  let best2 = 0;
   for (let i = 0; i < corners.length; i++) {
-    for (let j = i + 1; j < corners.length; j++) best = Math.max(best, Math.hypot(corners[i][0] - corners[j][0], corners[i][1] - corners[j][1]));
-    for (const c of circles) best = Math.max(best, Math.hypot(corners[i][0] - c.x, corners[i][1] - c.y) + c.r);
+    const [xi, yi] = corners[i];
+    for (let j = i + 1; j < corners.length; j++) {
+      const dx = xi - corners[j][0];
+      const dy = yi - corners[j][1];
+      const d2 = dx * dx + dy * dy;
+      if (d2 > best2) best2 = d2;
+    }
+  }
+  let best = Math.sqrt(best2);
+  for (const c of circles) {
+    for (const [x, y] of corners) best = Math.max(best, Math.hypot(x - c.x, y - c.y) + c.r);
   }
   for (let i = 0; i < circles.length; i++) {
     for (let j = i; j < circles.length; j++) {

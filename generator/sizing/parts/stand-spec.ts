@@ -18,10 +18,11 @@ import type { FloatSpec, HousingSpec, NozzleSpec, SizingSuccess } from '../resul
  *   on the bed; the pad pocket opens upward.
  */
 export interface StandSpecOptions {
-  housing: HousingSpec;
+  /** the nozzle's seat: the housing's (or the lever frame's), the same fields */
+  housing: Pick<HousingSpec, 'deckThicknessMm' | 'bossHeightMm' | 'seatBoreMm'>;
   nozzle: NozzleSpec;
-  /** the float carries the pad: its pocket and the pad's size are reused */
-  float: FloatSpec;
+  /** what carries the pad (the float, or the lever's arm): its pocket and how far the pad stands proud */
+  float: Pick<FloatSpec, 'pocketRadiusMm' | 'pocketDepthMm' | 'padProudMm'>;
   /** supply tube inner diameter, mm */
   tubeInnerDiameterMm: number;
   /** housing wall, mm: the base's walls and the plunger's stem */
@@ -341,10 +342,16 @@ export function standBaseVolumeMm3(b: StandBaseSpec): number {
 
 /** The stand for a sized design (the same parts, the design's pad, material and highest-head seal force). */
 export function standSpecOf(sizing: SizingSuccess): StandSpec {
+  const p = sizing.parts;
+  // a lever's nozzle sits in the frame's deck as in the housing's, and its pad in the arm's pocket
+  const carrier =
+    sizing.architecture === 'direct'
+      ? sizing.parts.float
+      : { pocketRadiusMm: sizing.parts.arm.pocketDiameterMm / 2, pocketDepthMm: sizing.parts.arm.pocketDepthMm, padProudMm: sizing.inputs.padThicknessM * 1e3 - sizing.parts.arm.pocketDepthMm };
   return standSpec({
-    housing: sizing.parts.housing,
-    nozzle: sizing.parts.nozzle,
-    float: sizing.parts.float,
+    housing: sizing.architecture === 'direct' ? sizing.parts.housing : sizing.parts.frame,
+    nozzle: p.nozzle,
+    float: carrier,
     tubeInnerDiameterMm: sizing.inputs.tubeInnerDiameterM * 1000,
     wallMm: sizing.inputs.wallM * 1000,
     lineWidthMm: sizing.inputs.lineWidthM * 1000,

@@ -46,17 +46,27 @@ export function designCharacteristic(b: DesignBasis, c: Candidate, headM: number
  * Computed once for the chosen design, never inside the size search.
  */
 export function throttleReport(b: DesignBasis, c: Candidate, openAtHeadMaxLph: number, openAtHeadMinLph: number): ThrottleReport {
+  return throttleReportOf(b, (headM, band) => designCharacteristic(b, c, headM, band), openAtHeadMaxLph, openAtHeadMinLph);
+}
+
+/** The same for any valve whose characteristic at a head and band `characteristicAt` gives (the lever's, say). */
+export function throttleReportOf(
+  b: DesignBasis,
+  characteristicAt: (headM: number, band: FlowBand) => Characteristic,
+  openAtHeadMaxLph: number,
+  openAtHeadMinLph: number,
+): ThrottleReport {
   const inp = b.inputs;
   const demandLph = inp.demandM3s * 3.6e6;
-  const headMax = designCharacteristic(b, c, inp.headMaxM);
-  const headMin = inp.headMinM === inp.headMaxM ? headMax : designCharacteristic(b, c, inp.headMinM);
+  const headMax = characteristicAt(inp.headMaxM, 'nominal');
+  const headMin = inp.headMinM === inp.headMaxM ? headMax : characteristicAt(inp.headMinM, 'nominal');
   const at = (ch: Characteristic, open: number, share: number) => levelAtFlowMm(ch, share * open);
   const heldAtDemandMm = levelAtFlowMm(headMax, demandLph);
   let timeToHeldMin: number | null = null;
   let fillFromMm: number | null = null;
   let fillToMm: number | null = null;
   if (inp.reservoirAreaM2 !== null && inp.reservoirRiseM !== null) {
-    const low = designCharacteristic(b, c, inp.headMaxM, 'low');
+    const low = characteristicAt(inp.headMaxM, 'low');
     const held = levelAtFlowMm(low, demandLph);
     fillFromMm = held - inp.reservoirRiseM * 1e3;
     fillToMm = held - 1;

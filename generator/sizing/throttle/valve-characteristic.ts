@@ -23,8 +23,15 @@ export interface CharacteristicOptions {
   indentationMm: number;
   /** float bottom resting on the pin, mm */
   restBottomMm: number;
-  /** the float's push for a tight seal at this head, N (sealForceN(H)) */
+  /** the pad's force for a tight seal at this head, N (sealForceN(H)) */
   sealForceN: number;
+  /**
+   * lever valve: how far the float moves per mm the pad moves (the arm's ratio a_float / a_pad), and the
+   * float push that holds a pad force (the moment balance with the arm's weight and the pivot's friction,
+   * closing); defaults 1 and the pad force itself (the direct valve: the float carries the pad)
+   */
+  floatPerPad?: number;
+  floatPushN?: (padForceN: number) => number;
 }
 
 export interface CharacteristicPoint {
@@ -58,6 +65,8 @@ const CONTACT_POINTS = 12;
  * with s = (F - F_c)/(F_s - F_c) the pad is squeezed s delta (the float rises s delta) and the leak
  * passes an equivalent film gap h_c (1 - s), so the flow falls monotonically to zero exactly at the
  * tight seal, where L = z_touch + delta + z(F_s) (the sizing's shut-off level).
+ * On a lever the float moves `floatPerPad` times as far as the pad (small turns) and pushes what holds the
+ * pad's force through the arm (`floatPushN`): L(h) = z_touch - ratio (h - h_c) + z(F_float(F_w(h))).
  * Q(L) is made non-increasing by a running minimum from the closed end (it already is whenever the
  * jet's momentum grows slower with the gap than the float's buoyancy, rho g A_f per metre).
  *
@@ -68,14 +77,17 @@ const CONTACT_POINTS = 12;
 export function valveCharacteristic(o: CharacteristicOptions): Characteristic {
   // The push never counts above the tight seal's force: a bench fit (or the gasket form) below the film's
   // p A_film says the pad holds with less, and the float is only sized to give that (with its reserve).
-  const depth = (forceN: number) => depthForForceMm(o.float, Math.min(Math.max(0, forceN), o.sealForceN), o.floatMassKg, o.line.densityKgM3);
+  const ratio = o.floatPerPad ?? 1;
+  const push = o.floatPushN ?? ((f: number) => f);
+  const depth = (forceN: number) => depthForForceMm(o.float, push(Math.min(Math.max(0, forceN), o.sealForceN)), o.floatMassKg, o.line.densityKgM3);
   const hc = CONTACT_GAP_M;
-  const travelM = Math.max(hc * 2, (o.touchBottomMm - o.restBottomMm) * 1e-3 + hc);
+  // the gap at the pad: the float's travel from its rest to the first touch, over the ratio
+  const travelM = Math.max(hc * 2, ((o.touchBottomMm - o.restBottomMm) * 1e-3) / ratio + hc);
   const raw: CharacteristicPoint[] = [];
   for (let i = 0; i <= GAP_POINTS; i++) {
     const h = travelM * (hc / travelM) ** (i / GAP_POINTS);
     const g = gapFlow(o.line, o.lip, h);
-    raw.push({ levelMm: o.touchBottomMm - (h - hc) * 1e3 + depth(g.forceN), flowLph: g.flowM3s * 3.6e6 });
+    raw.push({ levelMm: o.touchBottomMm - (h - hc) * 1e3 * ratio + depth(g.forceN), flowLph: g.flowM3s * 3.6e6 });
   }
   const contactForceN = Math.min(gapFlow(o.line, o.lip, hc).forceN, o.sealForceN);
   const contactMm = raw[raw.length - 1]!.levelMm;
@@ -84,7 +96,7 @@ export function valveCharacteristic(o: CharacteristicOptions): Characteristic {
     const s = i / CONTACT_POINTS;
     const forceN = contactForceN + s * (sealN - contactForceN);
     const flowLph = i === CONTACT_POINTS ? 0 : gapFlow(o.line, o.lip, hc * (1 - s)).flowM3s * 3.6e6;
-    raw.push({ levelMm: o.touchBottomMm + s * o.indentationMm + depth(forceN), flowLph });
+    raw.push({ levelMm: o.touchBottomMm + s * o.indentationMm * ratio + depth(forceN), flowLph });
   }
   // running extremes from the closed end: level never rising, flow never falling, as the gap opens
   const points = raw.slice();

@@ -9,7 +9,7 @@ import { geom3ToMesh, segmentsFor, type IndexedMesh, type Quality } from '../mes
 import type { FloatSpec } from '../../sizing/result.ts';
 import { revolveProfile } from '../shapes/revolve-profile.ts';
 
-export function buildPadMesh(f: FloatSpec, quality: Quality): IndexedMesh {
+export function buildPadMesh(f: Pick<FloatSpec, 'padDiameterMm' | 'padThicknessMm'>, quality: Quality): IndexedMesh {
   const r = f.padDiameterMm / 2;
   return geom3ToMesh(revolveProfile([[0, 0], [r, 0], [r, f.padThicknessMm], [0, f.padThicknessMm]], segmentsFor(r, quality)));
 }
