@@ -10,8 +10,8 @@
  * `-- --no-browser`).
  *
  * Then issue 13's coverage grid (coverage-grid.ts): the heads and depths that
- * get a valve at 90 and 120 mm footprints, measured for today's direct valve and
- * estimated with the lever and rim groundwork, with the time per cell (about
+ * get a valve at 90 and 120 mm footprints, measured through parseDesign and sizeDesign,
+ * with the time per cell (about
  * half a minute; skip it with `-- --no-coverage`).
  *
  * Targets (2-core machine): sizing at most 10 ms; assembly under 50 ms at preview and

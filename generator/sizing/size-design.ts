@@ -119,7 +119,8 @@ function largestWorking(lo: number, hi: number, ok: (x: number) => boolean, tole
   return lo;
 }
 
-function failure(b: DesignBasis, outcome: ReturnType<typeof searchSize>): SizingFailure {
+/** Why no direct valve fits, in words (cheap: what the search already counted). */
+function directReasons(b: DesignBasis, outcome: ReturnType<typeof searchSize>): Warning[] {
   const inp = b.inputs;
   const reasons: Warning[] = [...outcome.rejections.keys()].map((code) => ({ code, message: CONSTRAINT_TEXT[code] }));
   if (reasons.length === 0) {
@@ -130,6 +131,12 @@ function failure(b: DesignBasis, outcome: ReturnType<typeof searchSize>): Sizing
       message: `${CONSTRAINT_TEXT.reserve} (${fmt(b.forceAtHeadMaxN, 2)} N at ${fmt(inp.headMaxM, 2)} m); no float up to ${PART_SIZE_CAP_MM} mm can do that.`,
     });
   }
+  return reasons;
+}
+
+function failure(b: DesignBasis, outcome: ReturnType<typeof searchSize>): SizingFailure {
+  const inp = b.inputs;
+  const reasons = directReasons(b, outcome);
   const waysOut: WayOut[] = [];
   const targetMm = inp.targetLevelM * 1e3;
   if (Number.isFinite(outcome.lowestReachableMm) && outcome.lowestReachableMm > targetMm) {
@@ -304,7 +311,14 @@ type Flows = LeverFlows;
 type Option = { architecture: Architecture; mount: Mount };
 type Tried =
   | { option: Option; ok: true; plasticG: number; make: (choice: Choice, common: Warning[]) => SizingSuccess }
-  | { option: Option; ok: false; failure: SizingFailure };
+  /** `reasons` at once; `failure` (with its ways out, which re-size: dear) only if no option fits */
+  | { option: Option; ok: false; reasons: Warning[]; failure: () => SizingFailure };
+
+/** A failed option whose failure (ways out and all) is worked out once, when asked for. */
+function failed(option: Option, reasons: Warning[], make: () => SizingFailure): Tried {
+  let made: SizingFailure | null = null;
+  return { option, ok: false, reasons, failure: () => (made ??= make()) };
+}
 
 const ARCHITECTURE_WORDS: Record<Architecture, string> = { direct: 'a direct valve', lever: 'a lever valve' };
 const MOUNT_WORDS: Record<Mount, string> = { floor: 'standing on the container floor', rim: "hung from the container's rim" };
@@ -326,11 +340,21 @@ function tryDirect(b: DesignBasis, flows: Flows): Tried {
   const inp = b.inputs;
   // DESIGN second part: drains sized on the high end of the flow band
   const drainRequiredMm2 = drainAreaRequiredM2({ flowM3s: flows.qMaxHigh.flowM3s }) * 1e6;
+  // The housing stands from the floor to its deck, over the float, which seals on its straight side above the
+  // water line: at least the target, the pad proud less its squeeze, the nozzle under the deck, the boss and the
+  // deck. Past the part-size cap no float fits: said at once (the search runs only if no other valve fits either).
+  const lowestHousingMm = inp.targetLevelM * 1e3 + b.padProudMm - b.indentationMm + b.nozzle.protrusionMm + b.bossHeightMm + b.deckThicknessMm;
+  if (lowestHousingMm > PART_SIZE_CAP_MM) {
+    return failed(option, [{ code: 'part-size', message: CONSTRAINT_TEXT['part-size'] }], () => failure(b, searchSize(b, drainRequiredMm2)));
+  }
   const outcome = searchSize(b, drainRequiredMm2);
   const c = outcome.best;
-  if (!c) return { option, ok: false, failure: failure(b, outcome) };
+  if (!c) return failed(option, directReasons(b, outcome), () => failure(b, outcome));
   const shutOffMax = c.sealBottomMm + depthForForceMm(c.float, b.forceAtHeadMaxN, c.massKg, inp.liquidDensityKgM3);
-  if (inp.overflowM !== null && shutOffMax > (inp.overflowM - OVERFLOW_MARGIN_M) * 1e3 + 1e-9) return { option, ok: false, failure: overflowFailure(inp, shutOffMax) };
+  if (inp.overflowM !== null && shutOffMax > (inp.overflowM - OVERFLOW_MARGIN_M) * 1e3 + 1e-9) {
+    const f = overflowFailure(inp, shutOffMax);
+    return failed(option, f.reasons, () => f);
+  }
   const v = c.volumes;
   const plasticG = (v.housingMm3 + v.nozzleMm3 + v.pinMm3 + v.floatMm3) * 1e-9 * inp.materialDensityKgM3 * 1e3;
   return { option, ok: true, plasticG, make: (choice, common) => directSizing(b, c, outcome, flows, drainRequiredMm2, choice, common) };
@@ -342,8 +366,11 @@ function tryLever(b: DesignBasis, mount: Mount, flows: Flows): Tried {
   const inp = b.inputs;
   const outcome = searchLeverFor(b, mount)!;
   const c = outcome.best;
-  if (!c) return { option, ok: false, failure: leverFailure(b, mount, outcome) };
-  if (leverTooNearOverflow(c, inp.overflowM)) return { option, ok: false, failure: overflowFailure(inp, c.shutOffAtHeadMaxMm) };
+  if (!c) return failed(option, leverReasons(b, outcome), () => leverFailure(b, mount, outcome));
+  if (leverTooNearOverflow(c, inp.overflowM)) {
+    const f = overflowFailure(inp, c.shutOffAtHeadMaxMm);
+    return failed(option, f.reasons, () => f);
+  }
   return { option, ok: true, plasticG: leverPlasticG(c, inp.materialDensityKgM3), make: (choice, common) => leverSizing(b, c, outcome, flows, choice, common) };
 }
 
@@ -359,13 +386,19 @@ function leverWorks(inp: DesignInputs, mount: Mount): boolean {
 }
 
 /** No lever fits on this mount: the rules that rejected every candidate, and what would make one fit. */
-function leverFailure(b: DesignBasis, mount: Mount, outcome: LeverSearchOutcome): SizingFailure {
+function leverReasons(b: DesignBasis, outcome: LeverSearchOutcome): Warning[] {
   const inp = b.inputs;
   // the rule that turned away the most candidates first
-  const reasons: Warning[] = [...outcome.rejections.entries()].sort((x, y) => y[1] - x[1]).map(([code]) => ({ code, message: capital(`${LEVER_CONSTRAINT_TEXT[code]}.`) }));
+  const reasons: Warning[] = [...outcome.rejections.entries()].sort((x, y) => y[1] - x[1]).map(([code]) => ({ code, message: LEVER_CONSTRAINT_TEXT[code] }));
   if (reasons.length === 0) {
-    reasons.push({ code: 'reserve', message: `${capital(LEVER_CONSTRAINT_TEXT.reserve)} (${fmt(b.forceAtHeadMaxN, 2)} N at ${fmt(inp.headMaxM, 2)} m); no float and arm within the limits can do that.` });
+    reasons.push({ code: 'reserve', message: `${LEVER_CONSTRAINT_TEXT.reserve} (${fmt(b.forceAtHeadMaxN, 2)} N at ${fmt(inp.headMaxM, 2)} m); no float and arm within the limits can do that.` });
   }
+  return reasons;
+}
+
+function leverFailure(b: DesignBasis, mount: Mount, outcome: LeverSearchOutcome): SizingFailure {
+  const inp = b.inputs;
+  const reasons = leverReasons(b, outcome);
   const waysOut: WayOut[] = [];
   if (outcome.rejections.has('outer-diameter-limit')) {
     const wide = searchLeverFor(b, mount, 250);
@@ -405,7 +438,7 @@ function choiceFor(inp: DesignInputs, chosen: Tried & { ok: true }, tried: Tried
     architecture: t.option.architecture,
     mount: t.option.mount,
     plasticG: t.ok ? t.plasticG : null,
-    note: t.ok ? `${fmt(t.plasticG)} g of plastic` : `does not fit: ${t.failure.reasons[0]?.message ?? 'no size works'}`,
+    note: t.ok ? `${fmt(t.plasticG)} g of plastic` : `does not fit: ${t.reasons[0]?.message ?? 'no size works'}`,
   }));
   const what = capital(optionWords(chosen.option));
   const limit = `${fmt(inp.maxOuterDiameterM * 1e3, 0)} mm`;
@@ -418,7 +451,7 @@ function choiceFor(inp: DesignInputs, chosen: Tried & { ok: true }, tried: Tried
   }
   const others = tried
     .filter((t) => t !== chosen)
-    .map((t) => (t.ok ? `${optionWords(t.option)} takes ${fmt(t.plasticG)} g` : `${optionWords(t.option)} does not fit (${lowerFirst(t.failure.reasons[0]?.message ?? 'no size works').replace(/\.$/, '')})`));
+    .map((t) => (t.ok ? `${optionWords(t.option)} takes ${fmt(t.plasticG)} g` : `${optionWords(t.option)} does not fit (${lowerFirst(t.reasons[0]?.message ?? 'no size works').replace(/\.$/, '')})`));
   const reason = `${what}: the least plastic that fits within ${limit}, ${fmt(chosen.plasticG)} g; ${others.join('; ')}.${fixed.length ? ` The design fixes ${fixed.join(' and ')}.` : ''}`;
   return { by: 'least-plastic', reason, options };
 }
@@ -427,12 +460,11 @@ function choiceFor(inp: DesignInputs, chosen: Tried & { ok: true }, tried: Tried
 function combinedFailure(inp: DesignInputs, b: DesignBasis, tried: (Tried & { ok: false })[]): SizingFailure {
   if (tried.length === 1) {
     const only = tried[0]!;
-    const waysOut = [...only.failure.waysOut];
-    return { ...only.failure, waysOut };
+    return only.failure();
   }
-  const reasons = tried.flatMap((t) => t.failure.reasons.map((r) => ({ code: r.code, message: `${capital(optionWords(t.option))}: ${r.message}` })));
+  const reasons = tried.flatMap((t) => t.failure().reasons.map((r) => ({ code: r.code, message: `${capital(optionWords(t.option))}: ${r.message}` })));
   const seen = new Set<string>();
-  const waysOut = tried.flatMap((t) => t.failure.waysOut).filter((w) => {
+  const waysOut = tried.flatMap((t) => t.failure().waysOut).filter((w) => {
     const key = `${w.field}=${w.value}`;
     if (seen.has(key)) return false;
     seen.add(key);

@@ -14,7 +14,7 @@ import type { Io } from '../../generator/cli/command.ts';
 
 const ROOT = fileURLToPath(new URL('../..', import.meta.url));
 const BIN = join(ROOT, 'generator/cli/bin.js');
-const PRESETS = ['rooftop-tubs', 'greenhouse-trays', 'bucket-tote'];
+const PRESETS = ['rooftop-tubs', 'greenhouse-trays', 'bucket-tote', 'shallow-trays', 'deep-buckets'];
 
 interface Run {
   status: number | null;
@@ -35,22 +35,26 @@ function json(run: Run): any {
 }
 const flat = (text: string) => text.replace(/\s+/g, ' ');
 
-/** Every field the issue asks the JSON to carry (paths into SizingSuccess). */
+/** Every field the issue asks the JSON to carry (paths into SizingSuccess); the direct valve's own and the lever's own below. */
 const REQUIRED_NUMBERS = [
+  'footprintMm',
   'closingForce.atHeadMaxN', 'closingForce.atHeadMinN',
   'float.outerDiameterMm', 'float.heightMm', 'float.massG', 'float.volumeMm3', 'float.availableForceN',
-  'housing.boreMm', 'housing.outerDiameterMm', 'housing.heightMm', 'housing.massG',
   'nozzle.tipHeightMm', 'nozzle.travelMm',
   'levels.shutOffAtHeadMaxMm', 'levels.shutOffAtHeadMinMm', 'levels.liftOffMm', 'levels.minimumReachableMm',
   'flow.atHeadMaxLph', 'flow.atHeadMinLph', 'flow.reynoldsAtHeadMax',
-  'drain.requiredAreaMm2', 'drain.providedAreaMm2',
-  'holdDown.upliftN', 'holdDown.netWeightN', 'holdDown.ballastSteelG',
-  'tilt.maxAngleDeg', 'tilt.lipGapMm',
+  'holdDown.upliftN', 'holdDown.ballastSteelG',
   // issue 9 (seal and float integrity)
   'float.shellMm', 'float.leakToleranceMl', 'float.levelRisePerMlMm',
   'seal.padStiffnessKpa', 'seal.indentationMm', 'seal.worstStrain',
   'closingForce.modelAreaMm2', 'closingForce.seatN',
 ];
+const DIRECT_NUMBERS = [
+  'housing.boreMm', 'housing.outerDiameterMm', 'housing.heightMm', 'housing.massG',
+  'drain.requiredAreaMm2', 'drain.providedAreaMm2', 'holdDown.netWeightN', 'tilt.maxAngleDeg', 'tilt.lipGapMm',
+];
+/** issue 13, Interface: a lever's own (rim.adjustMm on the rim) */
+const LEVER_NUMBERS = ['lever.ratio', 'lever.pivotHeightMm', 'lever.armLengthMm', 'lever.hysteresisMm', 'frame.heightMm', 'holdDown.anchorForceN'];
 const at = (obj: any, path: string) => path.split('.').reduce((o, k) => (o == null ? undefined : o[k]), obj);
 
 describe('floatwright size --design PRESET --json', () => {
@@ -66,9 +70,12 @@ describe('floatwright size --design PRESET --json', () => {
     expect(run.status).toBe(0);
     const result = json(run);
     expect(result.ok).toBe(true);
-    for (const path of REQUIRED_NUMBERS) {
+    const own = result.architecture === 'lever' ? [...LEVER_NUMBERS, ...(result.mount === 'rim' ? ['rim.adjustMm'] : [])] : DIRECT_NUMBERS;
+    for (const path of [...REQUIRED_NUMBERS, ...own]) {
       expect(Number.isFinite(at(result, path)), path).toBe(true);
     }
+    expect(['direct', 'lever']).toContain(result.architecture);
+    expect(['floor', 'rim']).toContain(result.mount);
     expect(Array.isArray(result.boundBy)).toBe(true);
     expect(result.boundBy.length).toBeGreaterThan(0);
     expect(Array.isArray(result.warnings)).toBe(true);

@@ -10,8 +10,8 @@ const DIR = fileURLToPath(new URL('../../presets/', import.meta.url));
 const files = readdirSync(DIR).filter((f) => f.endsWith('.json') && !f.startsWith('plan-'));
 
 describe('presets', () => {
-  it('has the three scenarios', () => {
-    expect(files).toEqual(expect.arrayContaining(['bucket-tote.json', 'greenhouse-trays.json', 'rooftop-tubs.json']));
+  it('has the five scenarios', () => {
+    expect(files).toEqual(expect.arrayContaining(['bucket-tote.json', 'greenhouse-trays.json', 'rooftop-tubs.json', 'shallow-trays.json', 'deep-buckets.json']));
   });
 
   it.each(files)('%s parses, with a name and notes', (file) => {
@@ -32,5 +32,8 @@ describe('presets', () => {
     expect(read('rooftop-tubs.json')).toMatchObject({ headMaxM: 2.2, headMinM: 1.6, targetLevelM: 0.045, materialName: 'PETG' });
     expect(read('greenhouse-trays.json')).toMatchObject({ headMaxM: 1.2, headMinM: 0.9, targetLevelM: 0.03, materialName: 'ASA' });
     expect(read('bucket-tote.json')).toMatchObject({ headMaxM: 0.6, headMinM: 0.3, targetLevelM: 0.025, materialName: 'PLA' });
+    // issue 13's two: a 25 mm tray at 2 m, a 250 mm bucket at 1.5 m with its rim given (360 mm; 1 ft = 304.8 mm, NIST SP 811, for scale)
+    expect(read('shallow-trays.json')).toMatchObject({ headMaxM: 2, headMinM: 1.5, targetLevelM: 0.025, architecture: 'auto', mount: 'auto' });
+    expect(read('deep-buckets.json')).toMatchObject({ headMaxM: 1.5, targetLevelM: 0.25, rimHeightM: 0.36, containerWallM: 0.0025 });
   });
 });

@@ -9,6 +9,7 @@
  * same thing), recalled from memory; the rule names are the sizing's own
  * (generator/sizing/layout/constraint-text.ts), the words the glossary's.
  */
+import { LEVER_CONSTRAINT_TEXT } from '../../generator/sizing/lever/lever-constraint-text.ts';
 import { readFileSync, readdirSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { buildSheetHtml, buildSheetMarkdown } from '../../generator/doc/build-sheet.ts';
@@ -46,7 +47,8 @@ describe('build sheet and text report in plain words', () => {
     const { sizing, md, html, text } = reports(doc);
     expect(sizing.boundBy.length).toBeGreaterThan(0);
     for (const code of sizing.boundBy) {
-      const words = (CONSTRAINT_TEXT as Record<string, string>)[code];
+      // a lever's rules in the lever's words (issue 13)
+      const words = ((sizing.architecture === 'lever' ? LEVER_CONSTRAINT_TEXT : CONSTRAINT_TEXT) as Record<string, string>)[code];
       expect(md).toContain(words);
       expect(text.replace(/\s+/g, ' ')).toContain(words);
     }

@@ -13,7 +13,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { writeDesignFiles } from '../../generator/solids/write-design-files.ts';
-import { presetFiles, sizePreset } from './helpers.ts';
+import { presetFiles, sizeAnyPreset } from './helpers.ts';
 
 const ADMESH = '/usr/bin/admesh';
 const have = existsSync(ADMESH);
@@ -46,7 +46,7 @@ function admeshReport(file: string): Record<string, number> {
 describe.skipIf(!have)('admesh finds nothing to repair in the written STL files', () => {
   for (const preset of presetFiles()) {
     it(preset, async () => {
-      const { sizing, document } = sizePreset(preset);
+      const { sizing, document } = sizeAnyPreset(preset);
       const dir = join(scratch, preset.replace('.json', ''));
       const written = await writeDesignFiles(sizing, document, dir, { quality: 'export' });
       for (const part of written.parts) {

@@ -22,6 +22,11 @@ import { segmentsFor, type Quality } from '../../generator/solids/mesh/index.ts'
 
 export const ROOT = fileURLToPath(new URL('../..', import.meta.url));
 
+/** The design presets whose own choice is the direct valve (the housing's tests run on these). */
+export function directPresetFiles(): string[] {
+  return presetFiles().filter((f) => sizeAnyPreset(f).sizing.architecture === 'direct');
+}
+
 export function presetFiles(): string[] {
   return readdirSync(join(ROOT, 'presets'))
     .filter((f) => f.endsWith('.json'))

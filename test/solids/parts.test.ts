@@ -21,7 +21,7 @@ import {
   type ManifoldToplevel,
 } from '../../generator/solids/mesh/index.ts';
 import { overhangFaces } from './overhang-faces.ts';
-import { cornersOn, facetedHousingMm3, facetedNozzleMm3, facetedPinMm3, presetFiles, SCALE_EXAMPLE, sizeDoc, sizePreset } from './helpers.ts';
+import { cornersOn, directPresetFiles, facetedHousingMm3, facetedNozzleMm3, facetedPinMm3, SCALE_EXAMPLE, sizeDoc, sizePreset } from './helpers.ts';
 
 let wasm: ManifoldToplevel;
 const { sizing } = sizeDoc(SCALE_EXAMPLE);
@@ -125,7 +125,7 @@ describe('print poses', () => {
     expect(b.max[1] - b.min[1]).toBeCloseTo(P.pin.head.widthMm, 4);
   });
 
-  it.each(presetFiles())('%s: no downward-facing face is flatter than 50 degrees from the bed, except on the bed and the stated bridge', async (file) => {
+  it.each(directPresetFiles())('%s: no downward-facing face is flatter than 50 degrees from the bed, except on the bed and the stated bridge', async (file) => {
     // Printability rule of issue 9: slicers add automatic supports under faces flatter than their
     // threshold, 45 degrees by default (common practice); every face here is 50 degrees or steeper.
     const { sizing: s } = sizePreset(file);

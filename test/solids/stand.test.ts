@@ -25,7 +25,7 @@ import { transformMesh, translation } from '../../generator/solids/shapes/transf
 import { buildSheetMarkdown } from '../../generator/doc/build-sheet.ts';
 import { CAUTIONS } from '../../generator/doc/cautions.ts';
 import { overhangFaces } from './overhang-faces.ts';
-import { presetFiles, ROOT, sizePreset } from './helpers.ts';
+import { presetFiles, ROOT, sizeAnyPreset, sizePreset } from './helpers.ts';
 
 const scratch = mkdtempSync(join(tmpdir(), 'fw-stand-'));
 afterAll(() => rmSync(scratch, { recursive: true, force: true }));
@@ -40,7 +40,7 @@ describe('revolvedVolumeMm3 (Pappus over a polygon)', () => {
 });
 
 describe.each(presetFiles())('test stand for %s', (preset) => {
-  const { sizing } = sizePreset(preset);
+  const { sizing } = sizeAnyPreset(preset);
   const stand = standSpecOf(sizing);
 
   it('both parts are closed 2-manifolds on z = 0 with nothing overhanging past 50 degrees', async () => {
@@ -62,7 +62,13 @@ describe.each(presetFiles())('test stand for %s', (preset) => {
     expect(Math.abs(plunger - stand.plunger.plasticVolumeMm3) / stand.plunger.plasticVolumeMm3).toBeLessThan(0.015);
   });
 
-  it('the seat is the housing seat: same bore, same length, flats on the same nominal circle', () => {
+  it('the seat is the housing seat (a lever: its frame\'s): same bore, same length, flats on the same nominal circle', () => {
+    if (sizing.architecture === 'lever') {
+      const fr = sizing.parts.frame;
+      expect(stand.base.seatBoreMm).toBe(fr.seatBoreMm);
+      expect(stand.base.seatLengthMm).toBeCloseTo(fr.deckThicknessMm + fr.bossHeightMm, 12);
+      return;
+    }
     const h = sizing.parts.housing;
     expect(stand.base.seatBoreMm).toBe(h.seatBoreMm);
     expect(stand.base.seatLengthMm).toBeCloseTo(h.deckThicknessMm + h.bossHeightMm, 12);

@@ -8,6 +8,7 @@ import { labelFor, shownMessage } from '../lib/field-label.ts';
 import { textInUnits } from '../../generator/doc/text-in-units.ts';
 import * as f from '../lib/format.ts';
 import { markTerms } from '../lib/mark-terms.ts';
+import { GLOSSARY, type TermKey } from '../../generator/doc/glossary.ts';
 import type { UnitSystem } from '../lib/units-system.ts';
 import { flowBandWords } from './fw-flow-plot.ts';
 import { shared } from './shared-styles.ts';
@@ -69,7 +70,7 @@ export class FwResults extends LitElement {
             : html`<div class="big" data-result="lever">On an arm <b>${s.lever.ratio.toFixed(1)}×</b>, ${s.mount === 'rim' ? 'hung from the rim' : 'on the floor'}, <b>${f.lengthMm(s.footprintMm, u)}</b> wide</div>`}
           <div class="big" data-result="held-full">Holds water at <b>${f.lengthMm(s.levels.heldAtDemandMm, u)}</b></div>
         </div>
-        <p class="why" data-result="choice">${shownMessage(textInUnits(s.choice.reason, u))}</p>
+        <p class="why" data-result="choice">${markTerms(shownMessage(textInUnits(s.choice.reason, u)), Object.keys(GLOSSARY) as TermKey[])}</p>
       </section>`;
   }
 

@@ -1,17 +1,20 @@
 import type { LeverConstraint } from './lever-types.ts';
 
-/** Plain words for each rule a lever valve must meet, for `boundBy` readers and failure reasons. */
+/**
+ * Each rule a lever valve must meet as a grower would say it, for `boundBy` readers and failure reasons
+ * (the codes stay in JSON output), in the glossary's words as the direct valve's (layout/constraint-text.ts).
+ */
 export const LEVER_CONSTRAINT_TEXT: Record<LeverConstraint | 'least-mass', string> = {
-  'float-shape': 'the float is too small to close around the socket for the arm and its walls',
-  reserve: "the float, through the arm, must give the reserve times the pad's force for a tight seal at the highest head",
-  'seal-in-cylinder': 'at the highest head the float must seal while the water line is still on its straight side',
-  travel: 'the float must seal high enough off the floor (on the rim: the floor less the adjustment) and leave the pad its travel when the arm drops',
-  'float-clearance': 'the float must hang clear of the frame round the pivot, at the seal and with the arm dropped to its rest',
-  'pad-arc': "turning on the arm, the pad must meet the lip squarely enough to close its far side (the gap at most half the pad's squeeze)",
-  'outer-diameter-limit': 'the valve, seen from above, must fit within the outer-diameter limit',
+  'float-shape': 'a smaller float has no room for the socket the arm fits in and for its walls',
+  reserve: 'the float, through the arm, must give its spare lift times the push the seal pad needs to shut at tank full',
+  'seal-in-cylinder': 'with the tank full, the float must shut while the water line is still on its straight side',
+  travel: 'the float must shut high enough above the floor (hung from the rim: the floor less the reach of the slotted stem) for the seal pad to drop clear of the nozzle lip when the arm comes down',
+  'float-clearance': 'the float must hang clear of the frame round the pivot, shut and with the arm down',
+  'pad-arc': 'turning on the arm, the seal pad must meet the nozzle lip square enough to close its far side (open by no more than half the pad squeeze)',
+  'outer-diameter-limit': 'the valve, seen from above, must fit in the widest valve you allow',
   'part-size': 'no part may be larger than 250 mm',
-  'rim-height': 'hung from the rim, the valve must sit below the slotted stem with room to be lowered by the whole adjustment',
-  'bed-size': "every part must fit the printer's bed (print.bed) in its print pose",
-  'pad-stop': "the pad's hard stop must leave the tight seal free",
+  'rim-height': 'hung from the rim, the valve must sit under the slotted stem with room to be lowered by the whole reach of its slot',
+  'bed-size': "every part must fit your printer's bed as it lies for printing",
+  'pad-stop': "the seal pad's hard stop must leave the tight seal free",
   'least-mass': 'another float or arm would use more plastic',
 };

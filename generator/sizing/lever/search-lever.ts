@@ -145,6 +145,18 @@ export function searchLever(lb: LeverBasis, o: LeverSearchOptions): LeverSearchO
   // the frame's post reaches a clearance and a wall past the eye (leverFrameSpec)
   const post = probe.eyeHalfLengthMm + PRINT_CLEARANCE_MM + wallMm;
   const shortest = shortestPadArmMm(lb, post, probe.tableHalfSideMm);
+  // On the floor the frame stands from the floor to its deck, above the arm, which rests on the float's top,
+  // which stands above the water line (the float seals on its straight side): at least the target level, the
+  // bar, the pad standing proud less its squeeze, the nozzle under the deck, the boss and the deck. Past the
+  // part-size cap no candidate can fit: said at once, without the search.
+  if (o.mount === 'floor') {
+    const b = lb.basis;
+    const lowest = inp.targetLevelM * 1e3 + probe.barDepthMm + pad.proudMm - lb.indentationMm + b.nozzle.protrusionMm + b.bossHeightMm + b.deckThicknessMm;
+    if (lowest > PART_SIZE_CAP_MM) {
+      rejections.set('part-size', 1);
+      return { best: null, rejections, evaluated: 0, boundBy: [], smallestFootprintMm: Infinity };
+    }
+  }
   const maxD = Math.min(limitMm, PART_SIZE_CAP_MM);
   const seen = new Set<number>();
   /** Lays out one candidate (pad arm, float diameter, float arm); returns it, or null when no float shape fits. */
