@@ -42,4 +42,24 @@ describe('BuildClient', () => {
     workers[0].reply(c);
     expect(got).toEqual([[a, true], [c, false]]);
   });
+
+  it('once the first build is back, a relief worker takes a newer input while the first is still busy; the older reply is then dropped', () => {
+    const workers: FakeWorker[] = [];
+    const got: [number, boolean][] = [];
+    const client = new BuildClient((r, newer) => got.push([r.id, newer]), () => {}, () => {
+      const w = new FakeWorker();
+      workers.push(w);
+      return w as unknown as Worker;
+    });
+    const a = client.build(inputs(1));
+    workers[0].reply(a);
+    expect(workers).toHaveLength(2); // the relief worker starts when the page is idle
+    const slow = client.build(inputs(0.005)); // a half-typed value whose sizing searches long
+    const typed = client.build(inputs(0.051)); // the value typed 40 ms later does not wait behind it
+    expect(workers[0].sent.map((r) => r.id)).toEqual([a, slow]);
+    expect(workers[1].sent.map((r) => r.id)).toEqual([typed]);
+    workers[1].reply(typed);
+    workers[0].reply(slow);
+    expect(got).toEqual([[a, false], [typed, false]]);
+  });
 });

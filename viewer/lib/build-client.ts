@@ -1,8 +1,13 @@
 /**
- * The page's side of the build worker. `build` keeps at most one job running
- * and one waiting: a newer input replaces the waiting one, so typing fast never
- * piles up stale builds. Exports go to a second worker so they never wait behind
- * (or hold up) the preview.
+ * The page's side of the build workers. `build` keeps at most one job waiting:
+ * a newer input replaces the waiting one, so typing fast never piles up stale
+ * builds. A second, "relief" worker (started once the first build is back, when
+ * the page is idle) takes a new input while the first is still busy with an
+ * older one: a design that does not size can take the sizing's searches several
+ * hundred milliseconds (a level typed half way, "5" on the way to "51"), and the
+ * newer input must not wait behind it. A reply older than one already shown is
+ * dropped. Exports go to a third worker so they never wait behind (or hold up)
+ * the preview.
  */
 import type { DesignInputs } from '../../generator/sizing/inputs.ts';
 import type { TextUnits } from '../../generator/doc/text-in-units.ts';
@@ -14,12 +19,22 @@ export type WorkerFactory = () => Worker;
 
 export const defaultWorkerFactory: WorkerFactory = () => takeEarlyWorker() ?? newBuildWorker();
 
+interface Slot {
+  worker: Worker;
+  /** id of the build it runs, null when idle */
+  running: number | null;
+}
+
+/** Build workers at most: the first, and one relief (see above). */
+const BUILD_WORKERS = 2;
+
 export class BuildClient {
-  private worker: Worker | null = null;
+  private slots: Slot[] = [];
   private exporter: Worker | null = null;
   private nextId = 1;
-  private running: number | null = null;
   private waiting: WorkerRequest | null = null;
+  /** the newest build id handed to onBuilt */
+  private shown = 0;
   private exports = new Map<number, { resolve: (f: ExportFile[]) => void; reject: (e: Error) => void }>();
 
   constructor(
@@ -31,11 +46,12 @@ export class BuildClient {
   /** Ask for a build of these inputs; returns its id (ids grow with every request). */
   build(inputs: DesignInputs): number {
     const req: WorkerRequest = { type: 'build', id: this.nextId++, inputs };
-    if (this.running === null) this.send(req);
+    if (this.slots.length === 0) this.addSlot();
+    const idle = this.slots.find((s) => s.running === null);
+    if (idle) this.send(idle, req);
     else this.waiting = req;
     return req.id;
   }
-
   /** `units`: the system the build sheet is written in (default metric); the parts are in millimetres either way */
   exportFiles(inputs: DesignInputs, document: unknown, kind: ExportKind, part?: PartName, units: TextUnits = 'metric'): Promise<ExportFile[]> {
     if (!this.exporter) {
@@ -55,29 +71,38 @@ export class BuildClient {
   }
 
   dispose(): void {
-    this.worker?.terminate();
+    for (const s of this.slots) s.worker.terminate();
     this.exporter?.terminate();
   }
 
-  private send(req: WorkerRequest): void {
-    if (!this.worker) {
-      this.worker = this.factory();
-      this.worker.onmessage = (e: MessageEvent<WorkerReply>) => this.receive(e.data);
-      this.worker.onerror = (e) => {
-        this.running = null;
-        this.onError(e.message || 'the build worker stopped');
-      };
-    }
-    this.running = req.id;
-    this.worker.postMessage(req);
+  private addSlot(): Slot {
+    const slot: Slot = { worker: this.factory(), running: null };
+    slot.worker.onmessage = (e: MessageEvent<WorkerReply>) => this.receive(slot, e.data);
+    slot.worker.onerror = (e) => {
+      slot.running = null;
+      this.onError(e.message || 'the build worker stopped');
+    };
+    this.slots.push(slot);
+    return slot;
   }
 
-  private receive(reply: WorkerReply): void {
-    this.running = null;
+  private send(slot: Slot, req: WorkerRequest): void {
+    slot.running = req.id;
+    slot.worker.postMessage(req);
+  }
+
+  private receive(slot: Slot, reply: WorkerReply): void {
+    slot.running = null;
     const next = this.waiting;
     this.waiting = null;
-    if (next) this.send(next);
-    if (reply.type === 'built') this.onBuilt(reply, next !== null);
-    else if (reply.type === 'error') this.onError(reply.message);
+    if (next) this.send(slot, next);
+    // the first build is back and the page is idle: start the relief worker (it loads its kernel now)
+    if (this.slots.length < BUILD_WORKERS) this.addSlot();
+    if (reply.id < this.shown) return; // a newer build is already on screen
+    const newer = next !== null || this.slots.some((s) => s.running !== null && s.running > reply.id);
+    if (reply.type === 'built') {
+      this.shown = reply.id;
+      this.onBuilt(reply, newer);
+    } else if (reply.type === 'error') this.onError(reply.message);
   }
 }
