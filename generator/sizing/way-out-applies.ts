@@ -3,7 +3,7 @@
  * values that go with it) lies inside the design document's range for the
  * field, and the document's rules between fields still hold after it
  * (the orifice narrower than the lip; the lowest head at most the highest; bench
- * points whose fit still gives a seal area above 0).
+ * points whose fit still gives a seal area above 0; the level no higher than the rim, when given).
  * A way out the document would refuse (`nozzle.orifice = -0.8 mm`) is never
  * offered. The ranges are the document's own (generator/doc FIELD_SPECS), read
  * here rather than copied, so the two can never drift apart.
@@ -59,6 +59,10 @@ export function wayOutApplies(inp: DesignInputs, w: WayOut): boolean {
   const headMax = set.get('supply.headMax') ?? inp.headMaxM;
   const headMin = set.get('supply.headMin') ?? inp.headMinM;
   if (!(orifice < lip && headMin <= headMax * (1 + 1e-12))) return false;
+  // the rim, when given, stays at or above the level (the container is as it is: a way out never raises its rim)
+  const target = set.get('level.target') ?? inp.targetLevelM;
+  const rim = set.get('container.rimHeight') ?? inp.rimHeightM;
+  if (rim !== null && rim !== undefined && target > rim * (1 + 1e-12)) return false;
   return inp.calibration.length === 0 || calibrationStillFits(changedInputs(inp, changes, set));
 }
 

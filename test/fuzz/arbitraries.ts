@@ -11,7 +11,7 @@
  * The accepted space (ranges copied from the design-document schema, which
  * takes them from DESIGN.md "Symbols and defaults" and "Caps"): heads from a
  * few centimetres to the 3.05 m (10 ft) cap, given as heights or as pressures
- * (H = p / (rho g), hydrostatics); targets 5 mm to 250 mm; every table
+ * (H = p / (rho g), hydrostatics); targets 5 mm to 300 mm; every table
  * material and custom densities; walls from two line widths upward; orifice
  * and seal sizes with the orifice inside the lip; 0 to 20 calibration points.
  *
@@ -140,6 +140,10 @@ export interface DesignSpec {
   reservoir: { areaM2: number; riseMm: number; areaSpelling: Spelling } | null;
   lengthSpelling: Spelling;
   name: string | null;
+  /** issue 13: valve.architecture and valve.mount as written (any case), or null to leave the section out */
+  valve: { architecture: string | null; mount: string | null } | null;
+  /** the container's rim above its level (mm; the rim at least the level) and its wall, or null */
+  rim: { aboveLevelMm: number; wallMm: number | null } | null;
 }
 
 /** A float in [min, max] (no NaN, no infinities), with the ends themselves likely. */
@@ -167,7 +171,7 @@ export function designSpec(options: SpecOptions = {}): fc.Arbitrary<DesignSpec> 
     headMaxSpelling: spelling(LENGTH_UNITS.length),
     headMinSpelling: spelling(LENGTH_UNITS.length),
     headAsPressure: fc.boolean(),
-    targetMm: p ? fc.oneof(between(25, 250), between(5, 250)) : between(5, 250),
+    targetMm: p ? fc.oneof(between(25, 300), between(5, 300)) : between(5, 300),
     targetSpelling: spelling(LENGTH_UNITS.length),
     densityKgM3: maybe(between(900, 1300), absent),
     densitySpelling: spelling(DENSITY_UNITS.length),
@@ -210,6 +214,14 @@ export function designSpec(options: SpecOptions = {}): fc.Arbitrary<DesignSpec> 
     reservoir: maybe(fc.record({ areaM2: between(1e-4, 100), riseMm: between(1, 1000), areaSpelling: spelling(AREA_UNITS.length) }), 1),
     lengthSpelling: spelling(LENGTH_UNITS.length),
     name: maybe(fc.string({ maxLength: 80 }), 1),
+    valve: maybe(
+      fc.record({
+        architecture: maybe(fc.constantFrom('auto', 'direct', 'lever', 'Lever', ' DIRECT '), 1),
+        mount: maybe(fc.constantFrom('auto', 'floor', 'rim', 'Rim'), 1),
+      }),
+      p ? 4 : 3,
+    ),
+    rim: maybe(fc.record({ aboveLevelMm: fc.oneof(between(0, 300), between(50, 150)), wallMm: maybe(between(0.5, 25), 1) }), p ? 2 : 3),
   });
 }
 
@@ -303,6 +315,21 @@ export function toDocument(s: DesignSpec): Record<string, unknown> {
     doc.reservoir = { area: write(s.reservoir.areaM2, s.reservoir.areaSpelling, AREA_UNITS, 1), rise: write(s.reservoir.riseMm, s.targetSpelling, LENGTH_UNITS, 1) };
   }
   if (s.name !== null) doc.name = s.name;
+  if (s.rim !== null || (s.valve && s.valve.mount !== null && s.valve.mount.trim().toLowerCase() === 'rim')) {
+    // a rim is needed for the rim mount (the schema refuses one without); never below the level, never over its 1000 mm
+    const above = s.rim?.aboveLevelMm ?? 100;
+    doc.container = {
+      ...(doc.container ?? {}),
+      // at least 2 mm over the level: the two are written in their own units and roundings
+      rimHeight: write(Math.min(1000, Math.max(10, s.targetMm + Math.max(2, above))), s.lengthSpelling, LENGTH_UNITS, 1),
+      ...(s.rim?.wallMm != null ? { wallThickness: write(s.rim.wallMm, s.lengthSpelling, LENGTH_UNITS, 1) } : {}),
+    };
+  }
+  if (s.valve !== null) {
+    doc.valve = {};
+    if (s.valve.architecture !== null) doc.valve.architecture = s.valve.architecture;
+    if (s.valve.mount !== null) doc.valve.mount = s.valve.mount;
+  }
   return doc;
 }
 

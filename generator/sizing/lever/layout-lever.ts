@@ -1,4 +1,4 @@
-import { PART_SIZE_CAP_MM, STANDARD_GRAVITY } from '../constants.ts';
+import { PART_SIZE_CAP_MM, PRINT_CLEARANCE_MM, STANDARD_GRAVITY } from '../constants.ts';
 import { depthForForceMm } from '../float/depth-for-force.ts';
 import { nozzleVolumeMm3, pinVolumeMm3 } from '../parts/part-volumes.ts';
 import { PIN_DIAMETER_MM, pinSpec } from '../parts/pin-spec.ts';
@@ -221,6 +221,9 @@ export function layoutLever(lb: LeverBasis, o: LeverLayoutOptions): LeverCandida
   const restTurn = Math.asin(Math.min(1, (restTravel + delta) / arm.padArmMm));
   const nearAtRest = (arm.floatArmMm - R) * Math.cos(restTurn) - (pivot - floatBottom) * Math.sin(restTurn);
   if (Math.min(arm.floatArmMm - R, nearAtRest) < frame.postHalfLengthMm + FLOAT_TO_FRAME_GAP_MM - 1e-9) violations.push('float-clearance');
+  // and the arm's pad table, whose lower back edge swings back the same way, clear of the cheeks by a print clearance
+  const tableAtRest = (arm.padArmMm - arm.tableHalfSideMm) * Math.cos(restTurn) - (arm.barDepthMm - arm.holeCentreDepthMm) * Math.sin(restTurn);
+  if (tableAtRest < frame.postHalfLengthMm + PRINT_CLEARANCE_MM - 1e-9) violations.push('arm-clearance');
   if (contact.lipGapMm > delta / 2 + 1e-9) violations.push('pad-arc');
   if (footprint > inp.maxOuterDiameterM * 1e3 + 1e-9) violations.push('outer-diameter-limit');
   if (frame.heightMm > PART_SIZE_CAP_MM || arm.tipXMm - arm.tailXMm > PART_SIZE_CAP_MM || f.outerDiameterMm > PART_SIZE_CAP_MM || (rim && rim.stem.lengthMm > PART_SIZE_CAP_MM)) {

@@ -10,6 +10,7 @@ export const LEVER_CONSTRAINT_TEXT: Record<LeverConstraint | 'least-mass', strin
   'seal-in-cylinder': 'with the tank full, the float must shut while the water line is still on its straight side',
   travel: 'the float must shut high enough above the floor (hung from the rim: the floor less the reach of the slotted stem) for the seal pad to drop clear of the nozzle lip when the arm comes down',
   'float-clearance': 'the float must hang clear of the frame round the pivot, shut and with the arm down',
+  'arm-clearance': "the arm's seal pad table must swing clear of the frame's cheeks when the arm comes down",
   'pad-arc': 'turning on the arm, the seal pad must meet the nozzle lip square enough to close its far side (open by no more than half the pad squeeze)',
   'outer-diameter-limit': 'the valve, seen from above, must fit in the widest valve you allow',
   'part-size': 'no part may be larger than 250 mm',

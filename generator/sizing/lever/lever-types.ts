@@ -174,6 +174,7 @@ export type LeverConstraint =
   | 'seal-in-cylinder'
   | 'travel'
   | 'float-clearance'
+  | 'arm-clearance'
   | 'pad-arc'
   | 'outer-diameter-limit'
   | 'part-size'

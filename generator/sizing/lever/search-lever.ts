@@ -46,9 +46,18 @@ export interface LeverSearchOutcome {
  * pad table (wider than the cheek gap) a print clearance in front of the frame's
  * cheeks (which end postHalfLengthMm from the pivot); to the half millimetre.
  */
-export function shortestPadArmMm(lb: LeverBasis, postHalfLengthMm: number, tableHalfSideMm: number): number {
+export function shortestPadArmMm(lb: LeverBasis, postHalfLengthMm: number, tableHalfSideMm: number, below?: { tableBelowPivotMm: number; travelMm: number }): number {
   const sealMm = lb.basis.inputs.sealDiameterM * 1e3;
-  return Math.ceil(Math.max(2 * sealMm, postHalfLengthMm + PRINT_CLEARANCE_MM + tableHalfSideMm) * 2 - 1e-9) / 2;
+  let padArm = Math.ceil(Math.max(2 * sealMm, postHalfLengthMm + PRINT_CLEARANCE_MM + tableHalfSideMm) * 2 - 1e-9) / 2;
+  // turned nose down to its rest, the table's lower back edge (tableBelowPivot under the axis) swings back
+  // towards the cheeks: (a_p - h) cos(theta) - d sin(theta), theta = asin((travel + delta) / a_p)
+  if (below) {
+    for (let i = 0; i < 200; i++, padArm += 0.5) {
+      const theta = Math.asin(Math.min(1, (below.travelMm + lb.indentationMm) / padArm));
+      if ((padArm - tableHalfSideMm) * Math.cos(theta) - below.tableBelowPivotMm * Math.sin(theta) >= postHalfLengthMm + PRINT_CLEARANCE_MM - 1e-9) break;
+    }
+  }
+  return padArm;
 }
 
 /**
@@ -144,7 +153,7 @@ export function searchLever(lb: LeverBasis, o: LeverSearchOptions): LeverSearchO
   const probe = armFor(100, 200);
   // the frame's post reaches a clearance and a wall past the eye (leverFrameSpec)
   const post = probe.eyeHalfLengthMm + PRINT_CLEARANCE_MM + wallMm;
-  const shortest = shortestPadArmMm(lb, post, probe.tableHalfSideMm);
+  const shortest = shortestPadArmMm(lb, post, probe.tableHalfSideMm, { tableBelowPivotMm: probe.barDepthMm - probe.holeCentreDepthMm, travelMm: lb.basis.preferredTravelMm });
   // On the floor the frame stands from the floor to its deck, above the arm, which rests on the float's top,
   // which stands above the water line (the float seals on its straight side): at least the target level, the
   // bar, the pad standing proud less its squeeze, the nozzle under the deck, the boss and the deck. Past the
