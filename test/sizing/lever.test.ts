@@ -207,6 +207,30 @@ describe('the lightest lever valve (search)', () => {
   });
 });
 
+describe('a level under the float\'s own depth (Archimedes: with no push a float sinks to V = m / rho)', () => {
+  it('5 mm: every float of four 1.8 mm walls sinks deeper than that on its own, so nothing is laid out and the travel rule is named', () => {
+    const inp = defaultInputs({ targetLevelM: 0.005, maxOuterDiameterM: 0.12 });
+    const lb = leverBasisFromDesign(designBasis(inp));
+    const t0 = performance.now();
+    const out = searchLever(lb, { mount: 'floor' });
+    expect(out.best).toBeNull();
+    expect(out.evaluated).toBe(0);
+    expect([...out.rejections.keys()]).toEqual(['travel']);
+    // a bound, not a search: well under the time the grid takes (a loose check, not a timing test)
+    expect(performance.now() - t0).toBeLessThan(2000);
+  });
+
+  it('the bound never turns away a float that fits: the lightest at 20 mm (1 m, 120 mm) sinks on its own less than 20 mm', () => {
+    const inp = defaultInputs({ headMaxM: 1, headMinM: 0.75, targetLevelM: 0.02, maxOuterDiameterM: 0.12 });
+    const lb = leverBasisFromDesign(designBasis(inp));
+    const c = searchLever(lb, { mount: 'floor' }).best!;
+    expect(c).not.toBeNull();
+    // its bottom at the seal stands above the floor, so its own depth (seal depth less the push's) is under 20 mm
+    expect(c.floatBottomZMm).toBeGreaterThanOrEqual(0);
+    expect(c.sealDepthMm).toBeLessThan(20);
+  });
+});
+
 describe('shortest working height (bisection; Burden and Faires, Numerical Analysis, sec. 2.1, from memory)', () => {
   it('a rule holding from 12.34 mm on a 0.1 mm grid: 12.4; never holding: null; holding at once: the low end', async () => {
     const { shortestWorkingHeightMm } = await import('../../generator/sizing/layout/shortest-working-height.ts');

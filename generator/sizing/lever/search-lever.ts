@@ -12,6 +12,8 @@ import {
   PAD_ARM_EXTRA_MM,
 } from './lever-constants.ts';
 import { leverFloat } from './lever-float.ts';
+import { depthForForceMm } from '../float/depth-for-force.ts';
+import { RIM_ADJUST_MM } from '../rim/rim-constants.ts';
 import { leverPad } from './lever-pad.ts';
 import type { LeverBasis, LeverCandidate, LeverConstraint } from './lever-types.ts';
 
@@ -167,6 +169,29 @@ export function searchLever(lb: LeverBasis, o: LeverSearchOptions): LeverSearchO
     }
   }
   const maxD = Math.min(limitMm, PART_SIZE_CAP_MM);
+  const floorZ = o.mount === 'rim' ? RIM_ADJUST_MM : 0;
+  const hopeless = new Map<number, boolean>();
+  /**
+   * Whether no float of this diameter can float high enough: even with no push at all it sinks to its own
+   * depth, which only grows with its height (a taller float is heavier on the same waterplane), so where the
+   * target less that depth is under the floor (on the rim: the floor less the adjustment) every candidate of
+   * this diameter would break the travel rule. Said without laying any of them out: a half-typed level ('5'
+   * on the way to '51') is answered at once instead of after the whole grid.
+   */
+  const sinksBelowFloor = (d: number): boolean => {
+    let known = hopeless.get(d);
+    if (known === undefined) {
+      const floatOf = (h: number) => leverFloat(d, h, probe.tongueDiameterMm, lb.basis.floatShellMm, inp.materialDensityKgM3, inp.liquidDensityKgM3);
+      // the shortest float of this diameter whose shape closes
+      const h = shortestWorkingHeightMm((mm) => floatOf(mm) !== null, HEIGHT_STEP_MM, 0.5, PART_SIZE_CAP_MM);
+      const f = h === null ? null : floatOf(h);
+      const self = f ? depthForForceMm(f.float, 0, f.massKg, inp.liquidDensityKgM3) : Infinity;
+      known = inp.targetLevelM * 1e3 - self < floorZ;
+      hopeless.set(d, known);
+      if (known) rejections.set('travel', (rejections.get('travel') ?? 0) + 1);
+    }
+    return known;
+  };
   const seen = new Set<number>();
   /** Lays out one candidate (pad arm, float diameter, float arm); returns it, or null when no float shape fits. */
   const evaluate = (padArm: number, d: number, floatArm: number): LeverCandidate | null => {
@@ -193,6 +218,7 @@ export function searchLever(lb: LeverBasis, o: LeverSearchOptions): LeverSearchO
     let found: LeverCandidate | null = null;
     near = [];
     for (const d of diameters) {
+      if (sinksBelowFloor(d)) continue;
       const first = Math.max(MIN_LEVER_RATIO * padArm, post + d / 2 + FLOAT_TO_FRAME_GAP_MM, armFrom);
       const last = Math.min(MAX_LEVER_RATIO * padArm, armTo);
       for (let k = Math.ceil(first / armStep - 1e-9); k * armStep <= last + 1e-9; k++) {
