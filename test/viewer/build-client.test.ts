@@ -54,12 +54,40 @@ describe('BuildClient', () => {
     const a = client.build(inputs(1));
     workers[0].reply(a);
     expect(workers).toHaveLength(2); // the relief worker starts when the page is idle
+    // and warms up on the design on screen (a worker's first build runs cold code); that reply is never shown
+    expect(workers[1].sent).toHaveLength(1);
+    expect(workers[1].sent[0]!.id).toBeLessThan(0);
+    expect((workers[1].sent[0] as { inputs: DesignInputs }).inputs.headMaxM).toBe(1);
+    workers[1].reply(workers[1].sent[0]!.id);
     const slow = client.build(inputs(0.005)); // a half-typed value whose sizing searches long
     const typed = client.build(inputs(0.051)); // the value typed 40 ms later does not wait behind it
     expect(workers[0].sent.map((r) => r.id)).toEqual([a, slow]);
-    expect(workers[1].sent.map((r) => r.id)).toEqual([typed]);
+    expect(workers[1].sent.map((r) => r.id).slice(1)).toEqual([typed]);
     workers[1].reply(typed);
     workers[0].reply(slow);
     expect(got).toEqual([[a, false], [typed, false]]);
+  });
+});
+
+describe('BuildClient warm-up', () => {
+  it('an input that comes while the relief worker warms up and the first is busy waits for whichever is free first', () => {
+    const workers: FakeWorker[] = [];
+    const got: number[] = [];
+    const client = new BuildClient((r) => got.push(r.id), () => {}, () => {
+      const w = new FakeWorker();
+      workers.push(w);
+      return w as unknown as Worker;
+    });
+    const a = client.build(inputs(1));
+    workers[0].reply(a);
+    const warm = workers[1].sent[0]!.id;
+    const b = client.build(inputs(2)); // to the first, idle
+    const c = client.build(inputs(3)); // both busy: waits
+    expect(workers[0].sent.map((r) => r.id)).toEqual([a, b]);
+    workers[1].reply(warm); // the warm-up ends first: the waiting input goes to the relief worker
+    expect(workers[1].sent.map((r) => r.id)).toEqual([warm, c]);
+    workers[1].reply(c);
+    workers[0].reply(b); // older than the one shown: dropped
+    expect(got).toEqual([a, c]);
   });
 });

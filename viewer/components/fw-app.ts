@@ -36,8 +36,13 @@ void import('./fw-valve-view.ts');
 import './fw-file-bar.ts';
 import './fw-cautions.ts';
 
-/** Wait after the last keystroke before sizing: short enough to feel live, long enough to skip half-typed numbers. */
-export const TYPING_PAUSE_MS = 40;
+/**
+ * Wait after the last keystroke before sizing: only long enough to take a burst (a paste, a held key) as one
+ * input. A person types a key every 150 ms or more, so every number typed is sized anyway; a half-typed one
+ * that searches long ('5' on the way to '51') runs on one build worker while the next input takes the other
+ * (BuildClient), and waiting longer here would only add to every redraw.
+ */
+export const TYPING_PAUSE_MS = 10;
 
 type Notice = { kind: 'bad' | 'good'; text: string; link?: string; undo?: Doc; action?: { label: string; run: () => void } } | null;
 

@@ -6,8 +6,10 @@
  * older one: a design that does not size can take the sizing's searches several
  * hundred milliseconds (a level typed half way, "5" on the way to "51"), and the
  * newer input must not wait behind it. A reply older than one already shown is
- * dropped. Exports go to a third worker so they never wait behind (or hold up)
- * the preview.
+ * dropped. The relief worker's first job is a warm-up build of the design on
+ * screen (its reply dropped): a worker's first build runs cold code and takes
+ * twice as long, and the first input it takes for real must not pay that.
+ * Exports go to a third worker so they never wait behind (or hold up) the preview.
  */
 import type { DesignInputs } from '../../generator/sizing/inputs.ts';
 import type { TextUnits } from '../../generator/doc/text-in-units.ts';
@@ -33,6 +35,10 @@ export class BuildClient {
   private exporter: Worker | null = null;
   private nextId = 1;
   private waiting: WorkerRequest | null = null;
+  /** the inputs of the newest build asked for (the relief worker warms up on them) */
+  private lastInputs: DesignInputs | null = null;
+  /** warm-up builds carry ids below zero, so no reply of theirs is ever shown */
+  private nextWarmId = -1;
   /** the newest build id handed to onBuilt */
   private shown = 0;
   private exports = new Map<number, { resolve: (f: ExportFile[]) => void; reject: (e: Error) => void }>();
@@ -46,6 +52,7 @@ export class BuildClient {
   /** Ask for a build of these inputs; returns its id (ids grow with every request). */
   build(inputs: DesignInputs): number {
     const req: WorkerRequest = { type: 'build', id: this.nextId++, inputs };
+    this.lastInputs = inputs;
     if (this.slots.length === 0) this.addSlot();
     const idle = this.slots.find((s) => s.running === null);
     if (idle) this.send(idle, req);
@@ -96,9 +103,12 @@ export class BuildClient {
     const next = this.waiting;
     this.waiting = null;
     if (next) this.send(slot, next);
-    // the first build is back and the page is idle: start the relief worker (it loads its kernel now)
-    if (this.slots.length < BUILD_WORKERS) this.addSlot();
-    if (reply.id < this.shown) return; // a newer build is already on screen
+    // the first build is back and the page is idle: start the relief worker (it loads its kernel now) and warm it up
+    if (this.slots.length < BUILD_WORKERS) {
+      const relief = this.addSlot();
+      if (this.lastInputs) this.send(relief, { type: 'build', id: this.nextWarmId--, inputs: this.lastInputs });
+    }
+    if (reply.id < 0 || reply.id < this.shown) return; // a warm-up, or a newer build is already on screen
     const newer = next !== null || this.slots.some((s) => s.running !== null && s.running > reply.id);
     if (reply.type === 'built') {
       this.shown = reply.id;
