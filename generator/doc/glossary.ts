@@ -99,6 +99,16 @@ export const GLOSSARY = {
     name: 'bench points',
     explain: 'Your own test of your pad: at two or more heads, the smallest weight on the pad that stops the flow. With them, the sizing uses your pad instead of book values.',
   },
+  'rim-height': {
+    name: 'rim height',
+    explain:
+      "The top of the container's wall, measured from its floor. Given it, the valve can hang from the rim on a hanger, with a slotted stem that trims the level about 10 mm up or down after printing.",
+  },
+  'valve-kind': {
+    name: 'valve kind',
+    explain:
+      'Direct: the float sits under the nozzle and pushes the pad straight up. On an arm: the float rides at the end of a pivoted arm with the pad near the pivot, so the arm multiplies its push; it suits shallow water.',
+  },
   'line-width': {
     name: 'line width',
     explain: "The width of one line of plastic your printer lays (your slicer's extrusion width). Walls are whole numbers of lines.",

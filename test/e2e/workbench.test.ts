@@ -285,6 +285,43 @@ describe.skipIf(!haveChromium)('workbench in Chromium', () => {
     await expect.poll(() => app().getAttribute('data-result')).toBe('sized');
   });
 
+  it('hangs a lever valve from the rim of a deep bucket given its rim height; a rim asked for without one is named by its label', async () => {
+    const head = page.getByLabel('Tank full: water height above the valve');
+    const level = page.getByLabel('Water depth to hold');
+    const rim = page.getByLabel('Rim height', { exact: true });
+    const mounting = page.getByLabel('Mounting', { exact: true });
+    const kept = { head: await head.inputValue(), level: await level.inputValue() };
+    // a 250 mm level: too tall for a valve standing on the floor (the 250 mm part cap), so nothing fits without a rim
+    let before = await buildId();
+    await level.fill('250');
+    await waitBuildAfter(before);
+    await expect.poll(() => app().getAttribute('data-result')).toBe('no-fit');
+    before = await buildId();
+    await rim.fill('360');
+    await waitBuildAfter(before);
+    await expect.poll(() => app().getAttribute('data-result')).toBe('sized');
+    expect(await page.locator('[data-result="choice"]').textContent()).toMatch(/lever valve hung from the container.s rim/i);
+    expect(await page.locator('[data-result="lever"]').textContent()).toMatch(/^On an arm, hung from the rim [\d.]+ mm across, [\d.]+× push$/);
+    expect(await mounting.inputValue()).toBe('auto');
+    await shot('09-rim-lever');
+    await page.getByLabel('Valve kind', { exact: true }).scrollIntoViewIfNeeded();
+    await shot('09-valve-kind-menus');
+    // the rim asked for, the rim height cleared: the Rim height box says what it needs, in labels
+    await mounting.selectOption('rim');
+    await rim.fill('');
+    await expect.poll(() => rim.getAttribute('aria-invalid')).toBe('true');
+    const message = await page.locator('#f-container-rimHeight-msg').textContent();
+    expect(message).toMatch(/rim height/i);
+    expect(message).not.toMatch(/valve\.mount|container\.rimHeight/);
+    // back as it was
+    await mounting.selectOption('auto');
+    before = await buildId();
+    await head.fill(kept.head);
+    await level.fill(kept.level);
+    await waitBuildAfter(before);
+    await expect.poll(() => app().getAttribute('data-result')).toBe('sized');
+  });
+
   it('takes a filament of the grower\'s own, keeps it over a unit switch and a share link, and goes back to a table one', async () => {
     // densities: the table's PETG, 1.27 g/cm3 (typical datasheet figure, from memory); 1150 kg/m3 = 1.15 g/cm3 (NIST SP 811)
     const filament = page.getByLabel('Filament', { exact: true });

@@ -49,7 +49,7 @@ export async function mountApp(): Promise<App> {
 export async function settle(app: App) {
   for (let i = 0; i < 5; i++) {
     for (const w of workers) w.answer();
-    await new Promise((r) => setTimeout(r, 60)); // the typing pause (40 ms) and Lit's update
+    await new Promise((r) => setTimeout(r, 60)); // the typing pause (TYPING_PAUSE_MS, 10 ms) and Lit's update
     await app.updateComplete;
   }
 }

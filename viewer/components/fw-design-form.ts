@@ -4,7 +4,7 @@ import { MAX_NOTES_LENGTH } from '../../generator/doc/schema.ts';
 import { materialNames } from '../../generator/sizing/materials.ts';
 import { AUTO_PAD, findPad, padNames } from '../../generator/sizing/seal/pads.ts';
 import { getAt, type Doc } from '../lib/doc-path.ts';
-import { FIELD_GROUPS } from '../lib/form-fields.ts';
+import { FIELD_GROUPS, VALVE_MENUS, type MenuDef } from '../lib/form-fields.ts';
 import { MATERIAL_DENSITY_FIELD, OTHER_FILAMENT, materialChoice, otherFilamentValue } from '../lib/material-choice.ts';
 import { fileStem } from '../../generator/doc/file-stem.ts';
 import { fieldDefault } from '../lib/field-default.ts';
@@ -40,6 +40,8 @@ export class FwDesignForm extends LitElement {
       .box { display: flex; align-items: center; gap: 0.35rem; }
       textarea { font: inherit; width: 100%; box-sizing: border-box; padding: 0.25rem 0.4rem; border: 1px solid #b9b3a0; border-radius: 5px; resize: vertical; }
       input, select { font: inherit; padding: 0.25rem 0.4rem; border: 1px solid #b9b3a0; border-radius: 5px; width: 8.5rem; background: #fff; }
+      /* a menu as wide as its longest choice, never wider than the column */
+      select { width: auto; min-width: 8.5rem; max-width: 100%; }
       .unit { color: var(--muted); min-width: 2.2rem; flex: none; white-space: nowrap; }
       .note { color: var(--muted); font-size: 0.8rem; }
       .note:empty { display: none; }
@@ -121,6 +123,38 @@ export class FwDesignForm extends LitElement {
     const padSelect = this.renderRoot.querySelector<HTMLSelectElement>('#f-seal-pad');
     const padValue = this.padValue();
     if (padSelect && padSelect.value !== padValue) padSelect.value = padValue;
+    for (const def of VALVE_MENUS) {
+      const menu = this.renderRoot.querySelector<HTMLSelectElement>(`select[name="${def.path}"]`);
+      const v = this.menuValue(def);
+      if (menu && menu.value !== v) menu.value = v;
+    }
+  }
+
+  /** A valve menu's value for the document: its choice, 'auto' when the document has none. */
+  private menuValue(def: MenuDef): string {
+    const raw = getAt(this.doc, def.path);
+    return raw === undefined ? 'auto' : String(raw);
+  }
+
+  /** One of the valve's menus (VALVE_MENUS): "auto" leaves the document without the key. */
+  private renderMenu(def: MenuDef) {
+    const id = `f-${def.path.replace(/\./g, '-')}`;
+    const error = this.errors[def.path];
+    const value = this.menuValue(def);
+    return html`<div class="field ${error ? 'bad' : ''}">
+      <div class="label-row"><label for=${id}>${def.label}</label>${def.term ? html`<fw-term marker term=${def.term}></fw-term>` : nothing}</div>
+      <div class="box">
+        <select id=${id} name=${def.path} data-menu aria-invalid=${error ? 'true' : 'false'} aria-describedby="${id}-msg"
+          @change=${(e: Event) => {
+            const v = (e.target as HTMLSelectElement).value;
+            this.emit(def.path, v === 'auto' ? undefined : v);
+          }}>
+          ${def.choices.map((c) => html`<option value=${c.value}>${c.words}</option>`)}
+          ${def.choices.some((c) => c.value === value) ? nothing : html`<option value=${value} disabled>${value} (not in the list)</option>`}
+        </select>
+      </div>
+      <div class="msg" id="${id}-msg" role=${error ? 'alert' : nothing}>${error ?? ''}</div>
+    </div>`;
   }
 
   /** The pad menu's value for the document: a table name, AUTO_PAD, or '' for text that is not a pad. */
@@ -228,6 +262,7 @@ export class FwDesignForm extends LitElement {
         ${g.intro ? html`<p class="intro">${markTerms(g.intro, g.introTerms ?? [])}</p>` : nothing}
         ${g.id === 'print' ? this.renderMaterial() : nothing}
         ${g.id === 'nozzle' ? this.renderPad() : nothing}
+        ${g.id === 'valve' ? VALVE_MENUS.map((m) => this.renderMenu(m)) : nothing}
         ${g.fields.map((f) => this.renderField(f))}
       </fieldset>`,
     )}

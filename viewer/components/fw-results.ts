@@ -67,7 +67,7 @@ export class FwResults extends LitElement {
           <div class="big" data-result="float">Float <b>${f.lengthMm(s.float.outerDiameterMm, u)} × ${f.lengthMm(s.float.heightMm, u)}</b></div>
           ${s.architecture === 'direct'
             ? html`<div class="big" data-result="housing">Housing <b>${f.lengthMm(s.housing.outerDiameterMm, u)} × ${f.lengthMm(s.housing.heightMm, u)}</b></div>`
-            : html`<div class="big" data-result="lever">On an arm <b>${s.lever.ratio.toFixed(1)}×</b>, ${s.mount === 'rim' ? 'hung from the rim' : 'on the floor'}, <b>${f.lengthMm(s.footprintMm, u)}</b> wide</div>`}
+            : html`<div class="big" data-result="lever">On an arm, ${s.mount === 'rim' ? 'hung from the rim' : 'on the floor'} <b>${f.lengthMm(s.footprintMm, u)} across, ${s.lever.ratio.toFixed(1)}× push</b></div>`}
           <div class="big" data-result="held-full">Holds water at <b>${f.lengthMm(s.levels.heldAtDemandMm, u)}</b></div>
         </div>
         <p class="why" data-result="choice">${markTerms(shownMessage(textInUnits(s.choice.reason, u)), Object.keys(GLOSSARY) as TermKey[])}</p>

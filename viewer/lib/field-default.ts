@@ -3,8 +3,8 @@
  * the placeholder (a number in the box's unit, or a word) and a short note.
  *
  * Options (on the field definition):
- * - a default in DEFAULT_DOCUMENT (generator/doc/schema.ts): shown converted to the box's unit
- *   ("120 mm" shows as 4.72 in an inch box);
+ * - a default in DEFAULT_DOCUMENT (generator/doc/schema.ts), or the field's `blankUses`: shown converted to
+ *   the box's unit ("120 mm" shows as 4.72 in an inch box);
  * - `blankFrom` (default none): the path of the box a blank one copies ("Tank low" blank: same as "Tank full");
  * - `blankMeans` (default none): what a blank box means when it has no value to show ("no refill time").
  * Returns null for a box that is not optional.
@@ -24,7 +24,7 @@ export interface FieldDefault {
 export function fieldDefault(def: FieldDef, doc: Doc, system: UnitSystem): FieldDefault | null {
   if (!def.optional) return null;
   const unit = unitFor(def, system);
-  const fallback = getAt(DEFAULT_DOCUMENT, def.path);
+  const fallback = getAt(DEFAULT_DOCUMENT, def.path) ?? def.blankUses;
   if (fallback !== undefined) {
     const shown = displayText(convertValue(fallback, def, unit), def, system);
     return { placeholder: shown, note: `Blank uses ${shown}${unit ? ` ${unit}` : ''} (the usual value).` };

@@ -4,7 +4,7 @@
  * labels, never document paths.
  */
 import { superscriptUnits } from '../../generator/doc/superscript-units.ts';
-import { ALL_FIELDS } from './form-fields.ts';
+import { ALL_FIELDS, VALVE_MENUS } from './form-fields.ts';
 
 /** Paths that are not plain boxes of the form (bench rows, menus), or not on the valve page at all. */
 const OTHER_LABELS: [RegExp, (m: RegExpExecArray) => string][] = [
@@ -22,9 +22,9 @@ const OTHER_LABELS: [RegExp, (m: RegExpExecArray) => string][] = [
   [/^liquid\.density$/, () => 'Liquid density'],
   [/^liquid\.viscosity$/, () => 'Liquid viscosity'],
   [/^container\.demand$/, () => 'Plants\u2019 use per day'],
-  // issue 13's choices, until the form has boxes for them (container.rimHeight reads "Rim height" by its key)
-  [/^valve\.architecture$/, () => 'Valve kind (direct or on an arm)'],
-  [/^valve\.mount$/, () => 'Valve stands on the floor or hangs from the rim'],
+  // the two menus of the "Kind of valve" group (fw-design-form)
+  [/^valve\.architecture$/, () => VALVE_MENUS[0].label],
+  [/^valve\.mount$/, () => VALVE_MENUS[1].label],
   [/^name$/, () => 'Design name'],
   [/^notes$/, () => 'Notes'],
 ];

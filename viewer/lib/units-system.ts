@@ -26,6 +26,8 @@ export interface FieldDef {
   blankFrom?: string;
   /** an optional box without a default value: what a blank one means, in a few words (default none) */
   blankMeans?: string;
+  /** an optional box whose default the sizing takes outside DEFAULT_DOCUMENT (the container wall): that value, document text (default none) */
+  blankUses?: string;
   /** the glossary word the box is about, explained beside its label (default none) */
   term?: TermKey;
 }
