@@ -1,9 +1,11 @@
-import { STANDARD_GRAVITY, TUBE_ROUGHNESS_M } from '../constants.ts';
+import { TUBE_ROUGHNESS_M } from '../constants.ts';
+import { boreHeadCoreM } from './bore-head-core-m.ts';
 import { boreModel } from './bore-model.ts';
-import { contractionLossK } from './contraction-loss-k.ts';
-import { darcyFrictionFactor, type FrictionBridge } from './darcy-friction-factor.ts';
-import { jetHeadM } from './jet-head-m.ts';
-import { reynoldsNumber } from './reynolds-number.ts';
+import { checkRange, NON_NEGATIVE, POSITIVE } from './check-range.ts';
+import { RELATIVE_ROUGHNESS_RANGE } from './colebrook-friction-factor.ts';
+import { BETA_RANGE } from './contraction-loss-k.ts';
+import type { FrictionBridge } from './darcy-friction-factor.ts';
+import { DISCHARGE_COEFFICIENT_RANGE } from './jet-head-m.ts';
 
 export interface BoreHeadOptions {
   /** volume flow, m3/s (>= 0) */
@@ -40,14 +42,16 @@ export interface BoreHeadOptions {
  * Source: Crane Technical Paper 410 (contraction, exit); Darcy-Weisbach friction (White, Fluid Mechanics, ch. 6).
  */
 export function boreHeadM(o: BoreHeadOptions): number {
-  if (boreModel(o.boreLengthM, o.boreM) === 'orifice') {
-    return jetHeadM({ flowM3s: o.flowM3s, orificeM: o.boreM, dischargeCoefficient: o.dischargeCoefficient });
+  const flowM3s = checkRange('flowM3s', o.flowM3s, NON_NEGATIVE);
+  const boreM = checkRange('boreM', o.boreM, POSITIVE);
+  const roughnessM = o.roughnessM ?? TUBE_ROUGHNESS_M;
+  if (boreModel(o.boreLengthM, boreM) === 'orifice') {
+    checkRange('dischargeCoefficient', o.dischargeCoefficient, DISCHARGE_COEFFICIENT_RANGE);
+  } else if (flowM3s > 0) {
+    checkRange('densityKgM3', o.densityKgM3, POSITIVE);
+    checkRange('viscosityPaS', o.viscosityPaS, POSITIVE);
+    checkRange('relativeRoughness', roughnessM / boreM, RELATIVE_ROUGHNESS_RANGE);
+    checkRange('beta', Math.min(1, boreM / o.tubeInnerDiameterM), BETA_RANGE);
   }
-  if (o.flowM3s === 0) return 0;
-  const beta = Math.min(1, o.boreM / o.tubeInnerDiameterM);
-  const reynolds = reynoldsNumber({ flowM3s: o.flowM3s, innerDiameterM: o.boreM, densityKgM3: o.densityKgM3, viscosityPaS: o.viscosityPaS });
-  const f = darcyFrictionFactor(reynolds, (o.roughnessM ?? TUBE_ROUGHNESS_M) / o.boreM, o.bridge);
-  const k = contractionLossK(beta) + (f * o.boreLengthM) / o.boreM + 1.0;
-  const v = (4 * o.flowM3s) / (Math.PI * o.boreM * o.boreM);
-  return (k * v * v) / (2 * STANDARD_GRAVITY);
+  return boreHeadCoreM(flowM3s, boreM, o.boreLengthM, o.tubeInnerDiameterM, o.densityKgM3, o.viscosityPaS, o.dischargeCoefficient, roughnessM, o.bridge);
 }

@@ -1,4 +1,5 @@
 import { checkRange, POSITIVE } from './check-range.ts';
+import { colebrookFrictionFactorCore } from './colebrook-friction-factor-core.ts';
 
 /** Largest relative roughness e/d the friction-factor functions accept (the Moody chart stops at 0.05). */
 export const MAX_RELATIVE_ROUGHNESS = 0.1;
@@ -25,18 +26,5 @@ export const RELATIVE_ROUGHNESS_RANGE = Object.freeze({ min: 0, max: MAX_RELATIV
 export function colebrookFrictionFactor(reynolds: number, relativeRoughness: number): number {
   checkRange('reynolds', reynolds, POSITIVE);
   checkRange('relativeRoughness', relativeRoughness, RELATIVE_ROUGHNESS_RANGE);
-  const a = relativeRoughness / 3.7;
-  const b = 2.51 / reynolds;
-  let x = 7; // f of about 0.02, typical of tube flow
-  for (let i = 0; i < 100; i++) {
-    const s = a + b * x;
-    const g = x + 2 * Math.log10(s);
-    const slope = 1 + (2 * b) / (s * Math.LN10);
-    let next = x - g / slope;
-    if (!(next > 0)) next = x / 2;
-    // f = 1/x^2, so a relative change of 5e-13 in x is 1e-12 in f
-    if (Math.abs(next - x) <= 5e-13 * next) return 1 / (next * next);
-    x = next;
-  }
-  throw new Error(`colebrookFrictionFactor did not converge for reynolds = ${reynolds}, relativeRoughness = ${relativeRoughness}`);
+  return colebrookFrictionFactorCore(reynolds, relativeRoughness);
 }

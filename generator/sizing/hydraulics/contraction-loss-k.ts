@@ -1,4 +1,8 @@
-import { checkRange } from './check-range.ts';
+import { checkRange, type AllowedRange } from './check-range.ts';
+import { contractionLossKCore } from './contraction-loss-k-core.ts';
+
+/** Allowed diameter ratios: 0 < beta <= 1. */
+export const BETA_RANGE: AllowedRange = Object.freeze({ min: 0, minExclusive: true, max: 1 });
 
 /**
  * Loss coefficient of a sudden contraction, on the small pipe's velocity head.
@@ -12,6 +16,6 @@ import { checkRange } from './check-range.ts';
  * Source: Crane Technical Paper 410, sudden contraction (K on the small pipe's velocity).
  */
 export function contractionLossK(beta: number): number {
-  checkRange('beta', beta, { min: 0, minExclusive: true, max: 1 });
-  return 0.5 * (1 - beta * beta);
+  checkRange('beta', beta, BETA_RANGE);
+  return contractionLossKCore(beta);
 }

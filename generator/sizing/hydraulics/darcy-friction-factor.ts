@@ -1,7 +1,6 @@
 import { checkRange, POSITIVE } from './check-range.ts';
-import { colebrookFrictionFactor, RELATIVE_ROUGHNESS_RANGE } from './colebrook-friction-factor.ts';
-import { LAMINAR_LIMIT_REYNOLDS, TURBULENT_LIMIT_REYNOLDS } from './flow-regime.ts';
-import { laminarFrictionFactor } from './laminar-friction-factor.ts';
+import { RELATIVE_ROUGHNESS_RANGE } from './colebrook-friction-factor.ts';
+import { darcyFrictionFactorCore } from './darcy-friction-factor-core.ts';
 
 /**
  * How friction is taken between Re 2300 and 4000, where no formula is settled: 'linear' (the
@@ -9,16 +8,6 @@ import { laminarFrictionFactor } from './laminar-friction-factor.ts';
  * (the laminar and turbulent ends carried into the gap; used for the flow band).
  */
 export type FrictionBridge = 'linear' | 'low' | 'high';
-
-/** The bridge's turbulent end, f_Colebrook(4000, e/d): one value per roughness, kept for the last roughness asked
- * (a solver asks for the same tube's again and again, and Colebrook is an iteration). */
-let bridgeEnd = { relativeRoughness: NaN, f: NaN };
-function bridgeEndFrictionFactor(relativeRoughness: number): number {
-  if (bridgeEnd.relativeRoughness !== relativeRoughness) {
-    bridgeEnd = { relativeRoughness, f: colebrookFrictionFactor(TURBULENT_LIMIT_REYNOLDS, relativeRoughness) };
-  }
-  return bridgeEnd.f;
-}
 
 /**
  * Darcy friction factor over the whole Reynolds range, as the sizing model uses it.
@@ -41,15 +30,5 @@ function bridgeEndFrictionFactor(relativeRoughness: number): number {
 export function darcyFrictionFactor(reynolds: number, relativeRoughness: number, bridge: FrictionBridge = 'linear'): number {
   checkRange('reynolds', reynolds, POSITIVE);
   checkRange('relativeRoughness', relativeRoughness, RELATIVE_ROUGHNESS_RANGE);
-  if (reynolds <= LAMINAR_LIMIT_REYNOLDS) return laminarFrictionFactor(reynolds);
-  if (reynolds >= TURBULENT_LIMIT_REYNOLDS) return colebrookFrictionFactor(reynolds, relativeRoughness);
-  if (bridge !== 'linear') {
-    const laminar = laminarFrictionFactor(reynolds);
-    const turbulent = colebrookFrictionFactor(reynolds, relativeRoughness);
-    return bridge === 'low' ? Math.min(laminar, turbulent) : Math.max(laminar, turbulent);
-  }
-  const fromF = laminarFrictionFactor(LAMINAR_LIMIT_REYNOLDS);
-  const toF = bridgeEndFrictionFactor(relativeRoughness);
-  const share = (reynolds - LAMINAR_LIMIT_REYNOLDS) / (TURBULENT_LIMIT_REYNOLDS - LAMINAR_LIMIT_REYNOLDS);
-  return fromF + (toF - fromF) * share;
+  return darcyFrictionFactorCore(reynolds, relativeRoughness, bridge);
 }

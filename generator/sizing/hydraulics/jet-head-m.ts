@@ -1,5 +1,9 @@
-import { ORIFICE_DISCHARGE_COEFFICIENT, STANDARD_GRAVITY } from '../constants.ts';
-import { checkRange, POSITIVE, NON_NEGATIVE } from './check-range.ts';
+import { ORIFICE_DISCHARGE_COEFFICIENT } from '../constants.ts';
+import { checkRange, POSITIVE, NON_NEGATIVE, type AllowedRange } from './check-range.ts';
+import { jetHeadCoreM } from './jet-head-core-m.ts';
+
+/** Allowed discharge coefficients: 0 < C_d <= 1. */
+export const DISCHARGE_COEFFICIENT_RANGE: AllowedRange = Object.freeze({ min: 0, minExclusive: true, max: 1 });
 
 export interface JetHeadOptions {
   /** volume flow through the orifice, m3/s (>= 0) */
@@ -25,11 +29,6 @@ export interface JetHeadOptions {
 export function jetHeadM(opts: JetHeadOptions): number {
   const flowM3s = checkRange('flowM3s', opts.flowM3s, NON_NEGATIVE);
   const orificeM = checkRange('orificeM', opts.orificeM, POSITIVE);
-  const cd = checkRange('dischargeCoefficient', opts.dischargeCoefficient ?? ORIFICE_DISCHARGE_COEFFICIENT, {
-    min: 0,
-    minExclusive: true,
-    max: 1,
-  });
-  const jetVelocityMS = flowM3s / (cd * Math.PI * orificeM * orificeM * 0.25);
-  return (jetVelocityMS * jetVelocityMS) / (2 * STANDARD_GRAVITY);
+  const cd = checkRange('dischargeCoefficient', opts.dischargeCoefficient ?? ORIFICE_DISCHARGE_COEFFICIENT, DISCHARGE_COEFFICIENT_RANGE);
+  return jetHeadCoreM(flowM3s, orificeM, cd);
 }

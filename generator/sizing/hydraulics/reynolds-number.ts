@@ -1,4 +1,5 @@
 import { checkRange, POSITIVE, NON_NEGATIVE } from './check-range.ts';
+import { reynoldsNumberCore } from './reynolds-number-core.ts';
 
 export interface ReynoldsOptions {
   /** volume flow through the tube, m3/s (>= 0) */
@@ -25,5 +26,5 @@ export function reynoldsNumber(opts: ReynoldsOptions): number {
   const d = checkRange('innerDiameterM', opts.innerDiameterM, POSITIVE);
   const rho = checkRange('densityKgM3', opts.densityKgM3, POSITIVE);
   const mu = checkRange('viscosityPaS', opts.viscosityPaS, POSITIVE);
-  return (4 * rho * flowM3s) / (Math.PI * mu * d);
+  return reynoldsNumberCore(flowM3s, d, rho, mu);
 }

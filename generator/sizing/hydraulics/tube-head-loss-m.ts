@@ -1,8 +1,8 @@
-import { STANDARD_GRAVITY, TUBE_ROUGHNESS_M } from '../constants.ts';
+import { TUBE_ROUGHNESS_M } from '../constants.ts';
 import { checkRange, POSITIVE, NON_NEGATIVE } from './check-range.ts';
 import { MAX_RELATIVE_ROUGHNESS } from './colebrook-friction-factor.ts';
-import { darcyFrictionFactor, type FrictionBridge } from './darcy-friction-factor.ts';
-import { reynoldsNumber } from './reynolds-number.ts';
+import type { FrictionBridge } from './darcy-friction-factor.ts';
+import { tubeHeadLossCoreM } from './tube-head-loss-core-m.ts';
 
 export interface TubeHeadLossOptions {
   /** volume flow, m3/s (>= 0) */
@@ -45,9 +45,7 @@ export function tubeHeadLossM(opts: TubeHeadLossOptions): number {
       ? roughnessRaw
       : checkRange('roughnessM', roughnessRaw, { min: 0, max: MAX_RELATIVE_ROUGHNESS * d, note: 'a tenth of innerDiameterM' });
   const minorLossK = checkRange('minorLossK', opts.minorLossK ?? 0, NON_NEGATIVE);
-  const reynolds = reynoldsNumber({ flowM3s, innerDiameterM: d, densityKgM3: opts.densityKgM3, viscosityPaS: opts.viscosityPaS });
-  if (flowM3s === 0) return 0;
-  const velocityMS = (4 * flowM3s) / (Math.PI * d * d);
-  const f = darcyFrictionFactor(reynolds, roughnessM / d, opts.bridge);
-  return ((minorLossK + (f * lengthM) / d) * velocityMS * velocityMS) / (2 * STANDARD_GRAVITY);
+  const densityKgM3 = checkRange('densityKgM3', opts.densityKgM3, POSITIVE);
+  const viscosityPaS = checkRange('viscosityPaS', opts.viscosityPaS, POSITIVE);
+  return tubeHeadLossCoreM(flowM3s, d, lengthM, densityKgM3, viscosityPaS, roughnessM, minorLossK, opts.bridge);
 }

@@ -1,10 +1,11 @@
 import { STANDARD_GRAVITY } from '../constants.ts';
 import { bisectIncreasing } from './bisect-increasing.ts';
 import { illinoisIncreasing } from './illinois-increasing.ts';
-import { boreHeadM } from './bore-head-m.ts';
+import { boreHeadCoreM } from './bore-head-core-m.ts';
 import { boreModel } from './bore-model.ts';
+import { checkValveLine } from './check-valve-line.ts';
 import type { FrictionBridge } from './darcy-friction-factor.ts';
-import { tubeHeadLossM } from './tube-head-loss-m.ts';
+import { tubeHeadLossCoreM } from './tube-head-loss-core-m.ts';
 
 /** Everything the steady energy balance of one tube-and-orifice line needs; SI, already checked. */
 export interface ValveLine {
@@ -43,29 +44,32 @@ export function valveFlowM3s(line: ValveLine, relativeTolerance: number, method:
   const boreLengthM = line.boreLengthM ?? 0;
   const c = boreModel(boreLengthM, line.orificeM) === 'short-tube' ? 1 : line.dischargeCoefficient;
   const upperM3s = c * orificeAreaM2 * Math.sqrt(2 * STANDARD_GRAVITY * line.headM);
+  // the line is checked once here; the residual, called a dozen times per solve, uses the unchecked cores
+  checkValveLine(line, boreLengthM);
+  const gapHeadM = line.gapHeadM;
   const residual = (flowM3s: number): number =>
-    tubeHeadLossM({
+    tubeHeadLossCoreM(
       flowM3s,
-      innerDiameterM: line.tubeInnerDiameterM,
-      lengthM: line.tubeLengthM,
-      densityKgM3: line.densityKgM3,
-      viscosityPaS: line.viscosityPaS,
-      roughnessM: line.roughnessM,
-      minorLossK: line.entranceLossK,
-      bridge: line.bridge,
-    }) +
-    boreHeadM({
+      line.tubeInnerDiameterM,
+      line.tubeLengthM,
+      line.densityKgM3,
+      line.viscosityPaS,
+      line.roughnessM,
+      line.entranceLossK,
+      line.bridge,
+    ) +
+    boreHeadCoreM(
       flowM3s,
-      boreM: line.orificeM,
+      line.orificeM,
       boreLengthM,
-      tubeInnerDiameterM: line.tubeInnerDiameterM,
-      densityKgM3: line.densityKgM3,
-      viscosityPaS: line.viscosityPaS,
-      dischargeCoefficient: line.dischargeCoefficient,
-      roughnessM: line.roughnessM,
-      bridge: line.bridge,
-    }) +
-    (line.gapHeadM ? line.gapHeadM(flowM3s) : 0) -
+      line.tubeInnerDiameterM,
+      line.densityKgM3,
+      line.viscosityPaS,
+      line.dischargeCoefficient,
+      line.roughnessM,
+      line.bridge,
+    ) +
+    (gapHeadM ? gapHeadM(flowM3s) : 0) -
     line.headM;
   const solve = method === 'illinois' ? illinoisIncreasing : bisectIncreasing;
   return solve(residual, 0, upperM3s, relativeTolerance).root;

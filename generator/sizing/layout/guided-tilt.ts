@@ -58,39 +58,40 @@ export interface GuidedTilt {
   lipGapMm: number;
 }
 
-/** Feasible pivot offsets [lo, hi] at tilt theta (lo > hi: none). */
-function pivotRange(o: GuidedTiltInput, theta: number): [number, number] {
-  const c = Math.cos(theta);
-  const s = Math.sin(theta);
-  const R = o.floatRadiusMm;
-  const Rb = o.boreRadiusMm;
-  let lo = -Rb + R * c + o.pivotZMm * s;
-  let hi = Rb - R * c + (o.pivotZMm - o.cylinderHeightMm) * s;
+/** Lowest feasible pivot offset at a tilt with cosine c and sine s. */
+function pivotLow(o: GuidedTiltInput, c: number, s: number): number {
+  const lo = -o.boreRadiusMm + o.floatRadiusMm * c + o.pivotZMm * s;
   const g = o.guide;
-  if (g) {
-    lo = Math.max(lo, -g.sleeveRadiusMm + g.collarRadiusMm * c + (o.pivotZMm - g.sleeveMouthZMm) * s);
-    hi = Math.min(hi, g.sleeveRadiusMm - g.collarRadiusMm * c + (o.pivotZMm - g.collarTopZMm) * s);
-  }
-  return [lo, hi];
+  return g ? Math.max(lo, -g.sleeveRadiusMm + g.collarRadiusMm * c + (o.pivotZMm - g.sleeveMouthZMm) * s) : lo;
 }
 
-function stopHolds(o: GuidedTiltInput, theta: number): boolean {
+/** Highest feasible pivot offset at a tilt with cosine c and sine s (below pivotLow: none). */
+function pivotHigh(o: GuidedTiltInput, c: number, s: number): number {
+  const hi = o.boreRadiusMm - o.floatRadiusMm * c + (o.pivotZMm - o.cylinderHeightMm) * s;
+  const g = o.guide;
+  return g ? Math.min(hi, g.sleeveRadiusMm - g.collarRadiusMm * c + (o.pivotZMm - g.collarTopZMm) * s) : hi;
+}
+
+function stopHolds(o: GuidedTiltInput, c: number, s: number): boolean {
   const g = o.guide;
   if (!g || !Number.isFinite(g.stopGapMm)) return false;
-  return g.collarRadiusMm * Math.sin(theta) - (o.pivotZMm - g.collarTopZMm) * (1 - Math.cos(theta)) > g.stopGapMm;
+  return g.collarRadiusMm * s - (o.pivotZMm - g.collarTopZMm) * (1 - c) > g.stopGapMm;
+}
+
+/** Some pivot offset works at tilt theta, and the stop ring does not hold it. */
+function feasible(o: GuidedTiltInput, theta: number): boolean {
+  const c = Math.cos(theta);
+  const s = Math.sin(theta);
+  return pivotLow(o, c, s) <= pivotHigh(o, c, s) && !stopHolds(o, c, s);
 }
 
 export function guidedTilt(o: GuidedTiltInput): GuidedTilt {
-  const feasible = (theta: number) => {
-    const [lo, hi] = pivotRange(o, theta);
-    return lo <= hi && !stopHolds(o, theta);
-  };
   let lo = 0;
   let hi = Math.PI / 4;
-  if (!feasible(0)) return { maxAngleDeg: 0, padOffsetMm: 0, lipGapMm: 0 };
+  if (!feasible(o, 0)) return { maxAngleDeg: 0, padOffsetMm: 0, lipGapMm: 0 };
   for (let i = 0; i < 40; i++) {
     const mid = (lo + hi) / 2;
-    if (feasible(mid)) lo = mid;
+    if (feasible(o, mid)) lo = mid;
     else hi = mid;
   }
   const thetaMax = lo;
@@ -99,8 +100,10 @@ export function guidedTilt(o: GuidedTiltInput): GuidedTilt {
   let offset = 0;
   const n = 8;
   for (let i = 0; i <= n; i++) {
-    const [a, b] = pivotRange(o, (thetaMax * i) / n);
-    offset = Math.max(offset, Math.abs(a), Math.abs(b));
+    const theta = (thetaMax * i) / n;
+    const c = Math.cos(theta);
+    const s = Math.sin(theta);
+    offset = Math.max(offset, Math.abs(pivotLow(o, c, s)), Math.abs(pivotHigh(o, c, s)));
   }
   return {
     maxAngleDeg: (thetaMax * 180) / Math.PI,
