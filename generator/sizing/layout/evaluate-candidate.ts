@@ -87,7 +87,13 @@ export function floatTilt(b: DesignBasis, f: FloatSpec): GuidedTilt & { padMargi
     pivotZMm: pivotZ,
     lipDiameterMm: b.inputs.sealDiameterM * 1e3,
   });
-  return { ...tilt, padMarginMm: b.padDiameterMm / 2 - (b.inputs.sealDiameterM * 1e3) / 2, pivotZMm: pivotZ };
+  return {
+    maxAngleDeg: tilt.maxAngleDeg,
+    padOffsetMm: tilt.padOffsetMm,
+    lipGapMm: tilt.lipGapMm,
+    padMarginMm: b.padDiameterMm / 2 - (b.inputs.sealDiameterM * 1e3) / 2,
+    pivotZMm: pivotZ,
+  };
 }
 
 /** The float constraints of its lift alone (reserve, seal depth): cheap, and they ease as the float grows taller. */
@@ -192,8 +198,15 @@ export function layoutCandidate(b: DesignBasis, f: FloatSizing, drainAreaMm2: nu
   const d = f.float.outerDiameterMm;
   const footprints: [number, number][] = [[foot, foot], [d, d], [pin.lengthMm + pin.head.lengthMm, pin.head.widthMm]];
   if (!footprints.every(([w, dd]) => fitsBed(w, dd, bed))) violations.push('bed-size');
+  // the float's sizing field by field: a spread here cost about as much as the rest of the layout
   return {
-    ...f,
+    float: f.float,
+    massKg: f.massKg,
+    outerVolumeMm3: f.outerVolumeMm3,
+    shellVolumeMm3: f.shellVolumeMm3,
+    availableN: f.availableN,
+    reserve: f.reserve,
+    sealDepthMm: f.sealDepthMm,
     housing,
     pin,
     pinTopMm: pinTop,

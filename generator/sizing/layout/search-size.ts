@@ -1,12 +1,14 @@
 import { PART_SIZE_CAP_MM } from '../constants.ts';
 import type { DesignBasis } from './design-basis.ts';
-import { floatLiftViolations, floatViolations, layoutCandidate, sizeFloat, type Candidate, type ConstraintCode } from './evaluate-candidate.ts';
+import { floatLiftViolations, floatViolations, layoutCandidate, sizeFloat, type Candidate, type ConstraintCode, type FloatSizing } from './evaluate-candidate.ts';
 
 /** Float diameters are tried on this grid, mm (a printer cannot hold finer anyway). */
 export const DIAMETER_STEP_MM = 0.5;
 /** Cylinder heights are rounded up to this, mm. */
 export const HEIGHT_STEP_MM = 0.1;
 const SMALLEST_FLOAT_MM = 16;
+/** The shortest cylinder tried, mm. */
+const SHORTEST_CYLINDER_MM = 0.5;
 
 export interface SearchOutcome {
   best: Candidate | null;
@@ -26,75 +28,104 @@ export interface SearchOutcome {
   nearestLevelAndFoot: { levelMm: number; footMm: number };
 }
 
-/** Smallest height in [lo, hi] where `ok` holds, to a quarter of the height grid (ok(hi) holds, ok monotone). */
-function bisectHeightMm(ok: (h: number) => boolean, lo: number, hi: number): number {
-  while (hi - lo > HEIGHT_STEP_MM / 4) {
-    const mid = (lo + hi) / 2;
-    if (ok(mid)) hi = mid;
-    else lo = mid;
+/** The height grid's k-th point, mm (k tenths, clear of floating-point fuzz). */
+const gridMm = (k: number) => Number((k * HEIGHT_STEP_MM).toFixed(6));
+
+/**
+ * Smallest k in [loK, hiK] with ok(k), for an `ok` that keeps holding once it holds, taken to hold at hiK
+ * (never asked there): galloping out from a guess (heights change little from one diameter to the next, so
+ * the bracket is narrow), then halving the bracket of whole grid steps. Without a guess (or one outside the
+ * range): from loK up.
+ */
+function firstWorkingK(ok: (k: number) => boolean, loK: number, hiK: number, guessK: number | null): number {
+  // bracket: fail < answer <= pass
+  let fail = loK - 1;
+  let pass = hiK;
+  const start = guessK !== null && guessK > loK && guessK < hiK ? guessK : loK;
+  if (start >= hiK) return hiK;
+  let step = 1;
+  if (ok(start)) {
+    pass = start;
+    for (;;) {
+      const below = pass - step;
+      if (below <= fail) break;
+      if (!ok(below)) {
+        fail = below;
+        break;
+      }
+      pass = below;
+      step *= 2;
+    }
+  } else {
+    fail = start;
+    for (;;) {
+      const above = fail + step;
+      if (above >= pass) break;
+      if (ok(above)) {
+        pass = above;
+        break;
+      }
+      fail = above;
+      step *= 2;
+    }
   }
-  return lo;
+  while (pass - fail > 1) {
+    const mid = (fail + pass) >> 1;
+    if (ok(mid)) pass = mid;
+    else fail = mid;
+  }
+  return pass;
+}
+
+/** Where the neighbouring diameters' searches ended (grid steps), to start the next one there; null: none. */
+interface HeightGuess {
+  liftK: number | null;
+  previousLiftK: number | null;
+  workingK: number | null;
 }
 
 /**
  * Shortest cylinder for a float diameter that meets the reserve, keeps the
- * seal depth inside the cylinder and holds the pad on the lip when tilted. All
- * ease monotonically as the cylinder grows (lift gains pi R^2 per mm against
- * 2 pi R t rho_m / rho of shell; a taller float tilts less in its bore), so
- * bisection finds the smallest; every other cost grows with height, so smallest
- * is best. The cheap lift rules are bisected first; the tilt (an inner
- * bisection of its own) is looked at only above the height they give.
+ * seal depth inside the cylinder and holds the pad on the lip when tilted, with
+ * its float; when even the tallest fails, no height and the tallest float. All ease monotonically as the
+ * cylinder grows (lift gains pi R^2 per mm against 2 pi R t rho_m / rho of
+ * shell; a taller float tilts less in its bore), so the smallest grid height
+ * that works is found by halving; every other cost grows with height, so
+ * smallest is best. The cheap lift rules are searched first; the tilt (an inner
+ * bisection of its own) is looked at only from the height they give up.
  */
-function shortestCylinderMm(b: DesignBasis, diameterMm: number, guessMm: number | null): number | null {
-  const liftOk = (h: number) => floatLiftViolations(b, sizeFloat(b, diameterMm, h)).length === 0;
-  const ok = (h: number) => floatViolations(b, sizeFloat(b, diameterMm, h)).length === 0;
-  const hi = PART_SIZE_CAP_MM;
-  if (!liftOk(hi) || !ok(hi)) return null;
-  let lo = liftOk(0.5) ? 0.5 : bisectHeightMm(liftOk, ...bracketHeightMm(liftOk, guessMm, 0.5, hi));
-  if (lo === 0.5 && ok(0.5)) return 0.5;
-  // from the lift's height up: the grid point there, or a bisection with the tilt when that binds
-  const grid = (k: number) => Number((k * HEIGHT_STEP_MM).toFixed(6));
-  let k = Math.ceil(lo / HEIGHT_STEP_MM - 1e-6);
-  if (ok(grid(k))) return grid(k);
-  lo = bisectHeightMm(ok, k * HEIGHT_STEP_MM, hi);
-  // to the height grid, clear of floating-point fuzz (the bound found works, so this ends within a step or two)
-  k = Math.ceil(lo / HEIGHT_STEP_MM - 1e-6);
-  while (!ok(grid(k))) k++;
-  return grid(k);
+function shortestCylinder(b: DesignBasis, diameterMm: number, guess: HeightGuess): { heightMm: number | null; float: FloatSizing | null } {
+  const sized = new Map<number, FloatSizing | null>();
+  const floatAt = (k: number) => {
+    let f = sized.get(k);
+    if (f === undefined) sized.set(k, (f = sizeFloat(b, diameterMm, gridMm(k))));
+    return f;
+  };
+  const liftOk = (k: number) => floatLiftViolations(b, floatAt(k)).length === 0;
+  const ok = (k: number) => floatViolations(b, floatAt(k)).length === 0;
+  const loK = Math.round(SHORTEST_CYLINDER_MM / HEIGHT_STEP_MM);
+  const hiK = Math.round(PART_SIZE_CAP_MM / HEIGHT_STEP_MM);
+  // the lift's trend over the last two diameters says where to start
+  const liftGuess = guess.liftK !== null && guess.previousLiftK !== null ? 2 * guess.liftK - guess.previousLiftK : guess.liftK;
+  // no neighbour to start from: a float too small for any height is told at once by the tallest
+  if (liftGuess === null && !liftOk(hiK)) return { heightMm: null, float: floatAt(hiK) };
+  const liftK = firstWorkingK(liftOk, loK, hiK, liftGuess);
+  if (liftK === hiK && !liftOk(hiK)) return { heightMm: null, float: floatAt(hiK) };
+  guess.previousLiftK = guess.liftK;
+  guess.liftK = liftK;
+  let k = liftK;
+  if (!ok(liftK)) {
+    if (!ok(hiK)) return { heightMm: null, float: floatAt(hiK) };
+    k = firstWorkingK(ok, liftK + 1, hiK, guess.workingK);
+  }
+  guess.workingK = k;
+  return { heightMm: gridMm(k), float: floatAt(k) };
 }
 
-/**
- * A bracket [failing, working] around the boundary of a monotone `ok` on [lo, hi] (ok(lo) fails, ok(hi) holds),
- * galloping out from a guess (the neighbouring diameter's height: heights change little from one diameter to
- * the next), so the bisection starts narrow. Without a guess: the whole range.
- */
-function bracketHeightMm(ok: (h: number) => boolean, guessMm: number | null, lo: number, hi: number): [number, number] {
-  if (guessMm === null || !(guessMm > lo && guessMm < hi)) return [lo, hi];
-  let step = 4 * HEIGHT_STEP_MM;
-  if (ok(guessMm)) {
-    let top = guessMm;
-    for (;;) {
-      const below = top - step;
-      if (below <= lo) return [lo, top];
-      if (!ok(below)) return [below, top];
-      top = below;
-      step *= 2;
-    }
-  }
-  let bottom = guessMm;
-  for (;;) {
-    const above = bottom + step;
-    if (above >= hi) return [bottom, hi];
-    if (ok(above)) return [bottom, above];
-    bottom = above;
-    step *= 2;
-  }
-}
-
-function candidateAt(b: DesignBasis, drainAreaMm2: number, diameterMm: number, guessMm: number | null): Candidate | ConstraintCode[] {
-  const h = shortestCylinderMm(b, diameterMm, guessMm);
-  if (h === null) return floatViolations(b, sizeFloat(b, diameterMm, PART_SIZE_CAP_MM));
-  const f = sizeFloat(b, diameterMm, h);
+function candidateAt(b: DesignBasis, drainAreaMm2: number, diameterMm: number, guess: HeightGuess): Candidate | ConstraintCode[] {
+  const shortest = shortestCylinder(b, diameterMm, guess);
+  const f = shortest.float;
+  if (shortest.heightMm === null) return floatViolations(b, f);
   if (!f) return ['float-shape'];
   return layoutCandidate(b, f, drainAreaMm2);
 }
@@ -119,13 +150,13 @@ export function searchSize(b: DesignBasis, drainAreaMm2: number): SearchOutcome 
   const targetMm = b.inputs.targetLevelM * 1e3;
   const results: (Candidate | ConstraintCode[])[] = [];
   const limitMm = b.inputs.maxOuterDiameterM * 1e3;
-  let guess: number | null = null;
+  const guess: HeightGuess = { liftK: null, previousLiftK: null, workingK: null };
   for (let i = 0; ; i++) {
     const d = SMALLEST_FLOAT_MM + i * DIAMETER_STEP_MM;
     if (d > PART_SIZE_CAP_MM) break;
     const c = candidateAt(b, drainAreaMm2, d, guess);
     results.push(c);
-    guess = Array.isArray(c) ? null : c.float.cylinderHeightMm;
+    if (Array.isArray(c)) Object.assign(guess, { liftK: null, previousLiftK: null, workingK: null });
     // a diameter with no workable cylinder at all is just too small; it explains nothing,
     // unless the tilt rules refuse even the tallest float (a lip too wide for the pad's indentation)
     if (Array.isArray(c)) {
