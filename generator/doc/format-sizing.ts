@@ -2,6 +2,7 @@
  * A sizing result as plain text: sections of label / value / unit rows,
  * aligned for a terminal. The build sheet and the plan report reuse the rows.
  */
+import { superscriptUnits } from './superscript-units.ts';
 import { cautionLines } from './cautions.ts';
 import type { FieldError } from './fields.ts';
 import { CONSTRAINT_TEXT } from '../sizing/layout/constraint-text.ts';
@@ -315,7 +316,8 @@ export function formatSizingText(result: SizingSuccess, heading?: string): strin
   parts.push(['What set the size', ...boundByLines(result.boundBy, result.architecture), ''].join('\n'));
   parts.push(['Warnings', ...(result.warnings.length ? warningLines(result.warnings) : ['  none']), ''].join('\n'));
   parts.push(formatCautions());
-  return parts.join('\n');
+  // units with their powers raised (mm², cm³), as on the screen and the build sheet
+  return superscriptUnits(parts.join('\n'));
 }
 
 /** A design no size fits: why, and what would make it work. */
@@ -327,7 +329,7 @@ export function formatFailureText(failure: SizingFailure): string {
   lines.push(...failure.waysOut.map((w) => `  - ${wrap(`${[w, ...(w.also ?? [])].map((c) => `${c.field} = ${c.value}`).join(' and ')}: ${w.message}`, 76)}`));
   if (failure.warnings.length) lines.push('', 'Warnings', ...warningLines(failure.warnings));
   lines.push('', formatCautions());
-  return lines.join('\n');
+  return superscriptUnits(lines.join('\n'));
 }
 
 /** Input problems, one per line, each with its field (and the flag that sets it, when given). */

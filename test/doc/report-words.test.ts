@@ -69,6 +69,11 @@ describe('build sheet and text report in plain words', () => {
     }
     expect(md).toContain('mm²');
     expect(md).not.toMatch(/\bmm2\b|\bcm3\b|g\/cm3\b/);
+    // the command line's text report too ("area the water pushes on", "displaced volume")
+    const { text } = reports(valvePresets[0].doc);
+    expect(text).toContain('mm²');
+    expect(text).toContain('cm³');
+    expect(text).not.toMatch(/\bmm2\b|\bcm3\b/);
   });
 
   it('says why no valve fits in the same words', () => {
@@ -78,6 +83,7 @@ describe('build sheet and text report in plain words', () => {
     expect(failure.ok).toBe(false);
     if (failure.ok) return;
     const text = formatFailureText(failure);
+    expect(text).not.toMatch(/\b(mm|cm|m)[23]\b/);
     expect(text).not.toMatch(RULE_NAMES);
     expect(text).not.toMatch(OLD_NAMES);
   });
