@@ -233,7 +233,7 @@ function leverSections(result: LeverSizing): { parts: Section[]; after: Section[
             title: 'Rim mount',
             rows: [
               row('rim above the floor / wall', `${fixed(rim.rimHeightMm, 1)} / ${fixed(rim.wallThicknessMm, 1)}`, 'mm'),
-              row('level adjustment on the slotted stem', `+-${fixed(rim.adjustMm, 0)}`, 'mm'),
+              row('level adjustment on the slotted stem', `±${fixed(rim.adjustMm, 0)}`, 'mm'),
               row('stem length', fixed(rim.stemLengthMm, 1), 'mm'),
             ],
           }]
