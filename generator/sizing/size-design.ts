@@ -442,11 +442,12 @@ function choiceFor(inp: DesignInputs, chosen: Tried & { ok: true }, tried: Tried
   }));
   const what = capital(optionWords(chosen.option));
   const limit = `${fmt(inp.maxOuterDiameterM * 1e3, 0)} mm`;
-  const fixed = [inp.architecture !== 'auto' ? `valve.architecture "${inp.architecture}"` : '', inp.mount !== 'auto' ? `valve.mount "${inp.mount}"` : ''].filter(Boolean);
+  // "valve.architecture set to ..." reads as '"Valve kind" set to ...' on the workbench (document paths become labels)
+  const fixed = [inp.architecture !== 'auto' ? `valve.architecture set to "${inp.architecture}"` : '', inp.mount !== 'auto' ? `valve.mount set to "${inp.mount}"` : ''].filter(Boolean);
   if (tried.length === 1) {
     const reason = fixed.length
       ? `${what}, as the design asks (${fixed.join(', ')}): ${fmt(chosen.plasticG)} g of plastic within ${limit}.`
-      : `${what}: it fits within ${limit} (${fmt(chosen.plasticG)} g of plastic), and floatwright makes the direct valve wherever it fits. valve.architecture "lever" asks for a lever valve instead.`;
+      : `${what}: it fits within ${limit} (${fmt(chosen.plasticG)} g of plastic), and floatwright makes the direct valve wherever it fits. For a lever valve instead, set valve.architecture to "lever".`;
     return { by: fixed.length ? 'document' : 'direct-first', reason, options };
   }
   const others = tried
