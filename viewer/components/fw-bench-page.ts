@@ -13,8 +13,8 @@ import type { BenchGroup, BenchReply, BenchSolved } from '../worker/bench-protoc
 import { shared } from './shared-styles.ts';
 import './fw-bench-drawing.ts';
 
-/** Wait after the last keystroke before solving the bench (as the valve page). */
-export const BENCH_TYPING_PAUSE_MS = 40;
+/** Wait after the last keystroke before solving the bench: a burst (a paste, a held key) is one input, as on the valve page (TYPING_PAUSE_MS). */
+export const BENCH_TYPING_PAUSE_MS = 10;
 
 export interface OpenValveDetail {
   /** the group's valve as a design document, heads filled in */
