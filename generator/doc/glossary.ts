@@ -109,6 +109,19 @@ export const GLOSSARY = {
     explain:
       'Direct: the float sits under the nozzle and pushes the pad straight up. On an arm: the float rides at the end of a pivoted arm with the pad near the pivot, so the arm multiplies its push; it suits shallow water.',
   },
+  main: {
+    name: 'main',
+    explain: "The one pipe from the tank that every group's branch tube tees off. Its width and length share the tank's head out among the groups.",
+  },
+  branch: {
+    name: 'branch tube',
+    explain: "The tube from a tee on the main to one group's valves. Each group has its own.",
+  },
+  starves: {
+    name: 'starves',
+    explain:
+      'A group starves when, with every valve on the bench open at once, it gets less than a set share (half, unless the bench file says otherwise) of the flow it gets alone.',
+  },
   'line-width': {
     name: 'line width',
     explain: "The width of one line of plastic your printer lays (your slicer's extrusion width). Walls are whole numbers of lines.",

@@ -18,6 +18,7 @@ import { join } from 'node:path';
 import { strFromU8, unzipSync } from 'fflate';
 import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { GLOSSARY } from '../../generator/doc/glossary.ts';
 import { checkBinaryStl } from './stl-check.ts';
 import { ROOT, SHOTS, haveChromium, serveWorkbench, type ServedWorkbench } from './served-workbench.ts';
 
@@ -96,6 +97,13 @@ describe.skipIf(!haveChromium)('bench page in Chromium', () => {
     expect(await flagged.textContent()).toMatch(/^Starves: gets \d+ % of its own flow with every valve open/);
     expect(await page.locator('[data-drawn-group="4"]').textContent()).toContain('STARVES');
     expect(await page.locator('[data-starving-summary]').textContent()).toContain('new group 5');
+    // the words of the bench explain themselves on hover, as on the valve page (the glossary's text)
+    const starve = page.locator('[data-starving-summary] fw-term[term="starves"]');
+    await starve.locator('[data-term]').hover();
+    await expect.poll(() => starve.locator('[role="tooltip"]').isVisible()).toBe(true);
+    expect(await starve.locator('[role="tooltip"]').textContent()).toContain(GLOSSARY.starves.explain);
+    await page.mouse.move(0, 0);
+    for (const key of ['main', 'branch', 'water-depth'] as const) expect(await page.locator(`fw-bench-page fw-term[term="${key}"]`).count(), key).toBeGreaterThan(0);
     await shot('bench-02-starving-1400');
   });
 

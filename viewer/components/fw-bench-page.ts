@@ -12,6 +12,7 @@ import type { UnitSystem } from '../lib/units-system.ts';
 import type { BenchGroup, BenchReply, BenchSolved } from '../worker/bench-protocol.ts';
 import { shared } from './shared-styles.ts';
 import './fw-bench-drawing.ts';
+import './fw-term.ts';
 
 /** Wait after the last keystroke before solving the bench: a burst (a paste, a held key) is one input, as on the valve page (TYPING_PAUSE_MS). */
 export const BENCH_TYPING_PAUSE_MS = 10;
@@ -348,7 +349,7 @@ export class FwBenchPage extends LitElement {
     const unit = unitOf(f, this.units);
     const shownUnit = superscriptUnits(unit);
     return html`<label class="box">
-      <span>${f.label}${f.optional ? html` <small>(optional)</small>` : nothing}</span>
+      <span>${f.label}${f.optional ? html` <small>(optional)</small>` : nothing}${f.term ? html`<fw-term marker term=${f.term}></fw-term>` : nothing}</span>
       <span class="entry">
         <input
           data-field=${path}
@@ -480,7 +481,7 @@ export class FwBenchPage extends LitElement {
         ? html`<div class="card summary ${stale ? 'stale' : ''}" data-summary>
               <h2>The whole bench</h2>
               ${starving.length
-                ? html`<p class="status-starves" data-starving-summary>${starving.length} of ${s.groups.length} groups would starve with every valve open: ${starving.map((g) => `"${g.name}"`).join(', ')}. A wider main, shorter runs or a higher tank help.</p>`
+                ? html`<p class="status-starves" data-starving-summary>${starving.length} of ${s.groups.length} groups would <fw-term term="starves">starve</fw-term> with every valve open: ${starving.map((g) => `"${g.name}"`).join(', ')}. A wider <fw-term term="main">main</fw-term>, shorter runs or a higher tank help.</p>`
                 : html`<p class="status-ok">No group starves: each gets at least ${Math.round(s.starvingShare * 100)} % of its own flow with every valve open.</p>`}
               <p>${s.groups.reduce((n, g) => n + g.count, 0)} valves from ${s.designs} design${s.designs === 1 ? '' : 's'} (groups whose valves come out the same share one).</p>
               <p>Tank outflow with every valve open: ${this.totalFlow(s)}.</p>

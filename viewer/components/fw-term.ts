@@ -15,7 +15,8 @@ export class FwTerm extends LitElement {
   static override styles = [
     shared,
     css`
-      :host { display: inline; position: relative; }
+      /* a word in running text keeps the text's colour and weight (the shared styles set the workbench's own) */
+      :host { display: inline; position: relative; color: inherit; font: inherit; }
       .word { border-bottom: 1px dotted currentColor; cursor: help; }
       .word:focus-visible { outline: 3px solid #e0a030; outline-offset: 1px; border-radius: 2px; }
       .marker { display: inline-block; width: 1.05rem; height: 1.05rem; margin-left: 0.25rem; border-radius: 50%; border: 1px solid var(--muted); color: var(--muted);

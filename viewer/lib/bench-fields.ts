@@ -7,6 +7,7 @@
 import { fromSi, parseQuantity, type QuantityKind } from '../../generator/doc/units.ts';
 import { shownNumber } from '../../generator/doc/shown-number.ts';
 import type { UnitSystem } from './units-system.ts';
+import type { TermKey } from '../../generator/doc/glossary.ts';
 
 export interface BenchField {
   /** path in the plan document; for a group, relative to its row */
@@ -17,21 +18,23 @@ export interface BenchField {
   imperial: string;
   hint?: string;
   optional?: boolean;
+  /** the glossary word the box is about, explained beside its label (default none) */
+  term?: TermKey;
 }
 
 export const TANK_FIELDS: readonly BenchField[] = [
   { path: 'tank.fullSurfaceElevation', label: 'Tank water surface, full', kind: 'length', metric: 'm', imperial: 'ft', hint: 'height above your reference level (the ground, a deck)' },
   { path: 'tank.lowSurfaceElevation', label: 'Tank water surface, low', kind: 'length', metric: 'm', imperial: 'ft', optional: true, hint: 'the lowest you let it run; blank: same as full' },
-  { path: 'main.innerDiameter', label: 'Main pipe, inside width', kind: 'length', metric: 'mm', imperial: 'in' },
+  { path: 'main.innerDiameter', label: 'Main pipe, inside width', kind: 'length', metric: 'mm', imperial: 'in', term: 'main' },
 ];
 
 export const GROUP_FIELDS: readonly BenchField[] = [
   { path: 'name', label: 'Name', kind: 'text', metric: '', imperial: '' },
   { path: 'count', label: 'How many', kind: 'number', metric: '', imperial: '', hint: 'identical containers on one tee' },
   { path: 'floorElevation', label: 'Floor height', kind: 'length', metric: 'm', imperial: 'ft', hint: 'container floor above the reference level' },
-  { path: 'level', label: 'Water depth to hold', kind: 'length', metric: 'mm', imperial: 'in' },
+  { path: 'level', label: 'Water depth to hold', kind: 'length', metric: 'mm', imperial: 'in', term: 'water-depth' },
   { path: 'mainLength', label: 'Distance along the main', kind: 'length', metric: 'm', imperial: 'ft', hint: 'from the tank to this group\u2019s tee' },
-  { path: 'branch.length', label: 'Branch tube, length', kind: 'length', metric: 'm', imperial: 'ft' },
+  { path: 'branch.length', label: 'Branch tube, length', kind: 'length', metric: 'm', imperial: 'ft', term: 'branch' },
   { path: 'branch.innerDiameter', label: 'Branch tube, inside width', kind: 'length', metric: 'mm', imperial: 'in' },
   { path: 'reservoirArea', label: 'Water surface area', kind: 'area', metric: 'm2', imperial: 'ft2', optional: true, hint: 'for the refill time' },
   { path: 'design.container.demand', label: 'Plants\u2019 use per container', kind: 'flow', metric: 'L/day', imperial: 'gal/day', optional: true, hint: 'blank: 3 L/day' },
