@@ -6,7 +6,7 @@ import { circleArea } from './hydrostatics/circle-area.ts';
 import { pressurePa } from './hydrostatics/pressure-pa.ts';
 import { fillTimeS, type SupplyFlowResult } from './hydraulics/index.ts';
 import type { DesignBasis } from './layout/design-basis.ts';
-import { armLoad, floatPushForHead, padForceFromPush } from './lever/layout-lever.ts';
+import { armLoad, floatPushForHead, floatPushForPadForce, padForceFromPush } from './lever/layout-lever.ts';
 import { leverBasisFromDesign } from './lever/lever-basis.ts';
 import { leverPad } from './lever/lever-pad.ts';
 import type { LeverCandidate } from './lever/lever-types.ts';
@@ -58,7 +58,7 @@ export function leverSizing(b: DesignBasis, c: LeverCandidate, outcome: LeverSea
   const f = c.float;
   const massKg = c.floatMassKg;
   const loadFull = armLoad(lb, c.arm);
-  const pushFor = (padForceN: number) => floatPushForHead({ ...lb, sealForceN: () => padForceN }, loadFull, inp.headMaxM).floatPushN;
+  const pushFor = (padForceN: number) => floatPushForPadForce(loadFull, padForceN).floatPushN;
   const depthAt = (pushN: number, kg = massKg) => depthForForceMm(f, pushN, kg, rho);
   const delta = b.indentationMm;
   const ratio = c.ratio;

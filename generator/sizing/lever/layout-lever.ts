@@ -46,8 +46,13 @@ const PIN_RADIUS_MM = PIN_DIAMETER_MM / 2;
 
 /** Float push (closing, friction against it) that holds the seal force of a head. */
 export function floatPushForHead(lb: LeverBasis, load: ArmLoad, headM: number, direction: 'closing' | 'opening' = 'closing') {
+  return floatPushForPadForce(load, lb.sealForceN(headM), direction);
+}
+
+/** Float push (closing, friction against it) that holds a pad force, N. */
+export function floatPushForPadForce(load: ArmLoad, padForceN: number, direction: 'closing' | 'opening' = 'closing') {
   return leverFloatPushN({
-    padForceN: lb.sealForceN(headM),
+    padForceN,
     padArmMm: load.arm.padArmMm,
     floatArmMm: load.arm.floatArmMm,
     armWeightN: load.weightN,
@@ -88,6 +93,14 @@ export interface LeverLayoutOptions {
 }
 
 /**
+ * The float's lowest point with the pad `travelMm` below the lip (the arm turned theta = asin((travel + delta) / a_pad)),
+ * mm: floatLowestZMm. A function of its own, not a closure: layoutLever runs for every candidate of the search.
+ */
+function lowestAtTravel(arm: LeverArmSpec, floatRadiusMm: number, floatBottomMm: number, pivotZMm: number, indentationMm: number, travelMm: number): number {
+  return floatLowestZMm(arm.floatArmMm, floatRadiusMm, floatBottomMm, pivotZMm, Math.asin(Math.min(1, (travelMm + indentationMm) / arm.padArmMm)));
+}
+
+/**
  * Lays out a lever valve (heights in mm above the floor):
  * - the float seals at H_max with its bottom at z_b = L - z(F_float), F_float the
  *   closing push with friction (so the level never rises past the target);
@@ -116,8 +129,7 @@ export function layoutLever(lb: LeverBasis, o: LeverLayoutOptions): LeverCandida
   const closeMax = floatPushForHead(lb, load, inp.headMaxM);
   const openMax = floatPushForHead(lb, load, inp.headMaxM, 'opening');
   const closeMin = floatPushForHead(lb, load, inp.headMinM);
-  const depth = (n: number) => depthForForceMm(f, n, lf.massKg, rho);
-  const sealDepth = depth(closeMax.floatPushN);
+  const sealDepth = depthForForceMm(f, closeMax.floatPushN, lf.massKg, rho);
   const floatBottom = targetMm - sealDepth;
   const armTop = floatBottom + f.heightMm + arm.barDepthMm;
   const tip = armTop + pad.proudMm - delta;
@@ -140,16 +152,15 @@ export function layoutLever(lb: LeverBasis, o: LeverLayoutOptions): LeverCandida
   // far bottom corner meets the floor (on the rim: the floor less the adjustment), whichever first; the pad
   // has then dropped a_p sin(theta) - delta from the lip
   const floorZ = o.mount === 'rim' ? RIM_ADJUST_MM : 0;
-  const lowestAt = (travel: number) => floatLowestZMm(arm.floatArmMm, R, floatBottom, pivot, Math.asin(Math.min(1, (travel + delta) / arm.padArmMm)));
   const stopTurn = armStopTurnRad(-arm.tailXMm, arm.eyeDepthMm - arm.holeCentreDepthMm, frame.postHalfLengthMm);
   let restTravel = Number.isFinite(stopTurn) ? arm.padArmMm * Math.sin(stopTurn) - delta : arm.padArmMm - delta;
-  if (lowestAt(restTravel) < floorZ) {
+  if (lowestAtTravel(arm, R, floatBottom, pivot, delta, restTravel) < floorZ) {
     let lo = 0;
     let hi = restTravel;
     // 30 halvings: a few tenths of a micrometre on any travel
     for (let i = 0; i < 30; i++) {
       const mid = (lo + hi) / 2;
-      if (lowestAt(mid) >= floorZ) lo = mid;
+      if (lowestAtTravel(arm, R, floatBottom, pivot, delta, mid) >= floorZ) lo = mid;
       else hi = mid;
     }
     restTravel = lo;
@@ -240,7 +251,7 @@ export function layoutLever(lb: LeverBasis, o: LeverLayoutOptions): LeverCandida
     [pin.lengthMm + pin.head.lengthMm, pin.head.widthMm],
     ...(rim ? ([[rim.hanger.gapMm + 2 * rim.hanger.legMm, rim.hanger.innerLegLengthMm + rim.hanger.legMm], [rim.stem.lengthMm, rim.stem.widthMm]] as [number, number][]) : []),
   ];
-  if (!footprints.every(([w, dd]) => fitsBed(w, dd, bed))) violations.push('bed-size');
+  if (!footprints.every((p) => fitsBed(p[0], p[1], bed))) violations.push('bed-size');
   // the stop must leave the tight seal free: it may only take the push past the seal's indentation
   if (!(lb.padStopIndentationMm > delta)) violations.push('pad-stop');
 
@@ -264,7 +275,7 @@ export function layoutLever(lb: LeverBasis, o: LeverLayoutOptions): LeverCandida
     tipZMm: tip,
     pivotZMm: pivot,
     shutOffAtHeadMaxMm: floatBottom + sealDepth,
-    shutOffAtHeadMinMm: floatBottom + depth(closeMin.floatPushN),
+    shutOffAtHeadMinMm: floatBottom + depthForForceMm(f, closeMin.floatPushN, lf.massKg, rho),
     hysteresisMm: frictionLevelBandMm(closeMax.floatPushN, openMax.floatPushN, Math.PI * R * R, rho),
     pivotReactionN: closeMax.pivotReactionN,
     frictionTorqueNmm: closeMax.frictionTorqueNmm,
@@ -274,7 +285,7 @@ export function layoutLever(lb: LeverBasis, o: LeverLayoutOptions): LeverCandida
     lipGapMm: contact.lipGapMm,
     padSlideMm: contact.slideMm,
     restTravelMm: restTravel,
-    restLowestZMm: lowestAt(restTravel),
+    restLowestZMm: lowestAtTravel(arm, R, floatBottom, pivot, delta, restTravel),
     footprintMm: footprint,
     volumes,
     holdDown,

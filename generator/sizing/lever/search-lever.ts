@@ -74,20 +74,13 @@ export function shortestPadArmMm(lb: LeverBasis, postHalfLengthMm: number, table
 function shortestCylinderMm(lb: LeverBasis, load: ArmLoad, diameterMm: number): number | null {
   const inp = lb.basis.inputs;
   const rho = inp.liquidDensityKgM3;
-  const shell = lb.basis.floatShellMm;
-  const at = (h: number) => leverFloat(diameterMm, h, load.arm.tongueDiameterMm, shell, inp.materialDensityKgM3, rho);
   const pushAtHeadMaxN = leverFloatChecks(lb, load, null).pushN;
   const needed = inp.reserve * lb.sealForceN(inp.headMaxM);
-  const ok = (h: number) => {
-    const f = at(h);
-    if (!f) return false;
-    // sealed on the straight side: the volume displaced at the seal fits in the cylinder (no depth search)
-    const sealVolumeMm3 = ((pushAtHeadMaxN / 9.80665 + f.massKg) / rho) * 1e9;
-    return padForceFromPush(load, f.availableN) >= needed && sealVolumeMm3 <= Math.PI * (diameterMm / 2) ** 2 * h;
-  };
-  const a = at(10);
-  const b = at(20);
-  if (!a || !b) return shortestWorkingHeightMm(ok, HEIGHT_STEP_MM, 0.5, PART_SIZE_CAP_MM);
+  // the rule is called directly (cylinderHolds), and made a function only for a search (searchHoldingMm):
+  // a closure made for every candidate costs more than its use
+  const a = floatOnArm(lb, load, diameterMm, 10);
+  const b = floatOnArm(lb, load, diameterMm, 20);
+  if (!a || !b) return searchHoldingMm(lb, load, diameterMm, pushAtHeadMaxN, needed, 0.5, PART_SIZE_CAP_MM);
   const g = 9.80665;
   const pushN = pushAtHeadMaxN;
   // the float's own lift needed for the reserve, through the arm: padForceFromPush is linear and rising in the push
@@ -96,21 +89,43 @@ function shortestCylinderMm(lb: LeverBasis, load: ArmLoad, diameterMm: number): 
   const padA = padForceFromPush(load, a.availableN);
   const padB = padForceFromPush(load, b.availableN);
   const padSlope = (padB - padA) / 10;
-  if (!(liftSlope > 0) || !(padSlope > 0)) return shortestWorkingHeightMm(ok, HEIGHT_STEP_MM, 0.5, PART_SIZE_CAP_MM);
+  if (!(liftSlope > 0) || !(padSlope > 0)) return searchHoldingMm(lb, load, diameterMm, pushAtHeadMaxN, needed, 0.5, PART_SIZE_CAP_MM);
   const hReserve = 10 + (neededPadN - padA) / padSlope;
   // seal depth on the straight side: (push + m(h) g) / (rho g A) <= h, m(h) = m_a + k (h - 10)
   const areaM2 = Math.PI * (diameterMm / 2) ** 2 * 1e-6;
   const k = (b.massKg - a.massKg) / 10;
   const perMm = rho * g * areaM2 * 1e-3; // N of lift per mm of depth
   const hSeal = (pushN + (a.massKg - 10 * k) * g) / (perMm - k * g);
-  if (!(perMm > k * g)) return shortestWorkingHeightMm(ok, HEIGHT_STEP_MM, 0.5, PART_SIZE_CAP_MM);
+  if (!(perMm > k * g)) return searchHoldingMm(lb, load, diameterMm, pushAtHeadMaxN, needed, 0.5, PART_SIZE_CAP_MM);
   let h = Math.max(0.5, Number((Math.ceil(Math.max(hReserve, hSeal) / HEIGHT_STEP_MM - 1e-6) * HEIGHT_STEP_MM).toFixed(6)));
   if (h > PART_SIZE_CAP_MM) return null;
   // the grid point just below may already hold (rounding): the search's height is the least that holds
   const below = Number((h - HEIGHT_STEP_MM).toFixed(6));
-  if (below >= 0.5 && ok(below)) return shortestWorkingHeightMm(ok, HEIGHT_STEP_MM, 0.5, below);
-  for (let i = 0; i < 20; i++, h = Number((h + HEIGHT_STEP_MM).toFixed(6))) if (ok(h)) return h;
-  return shortestWorkingHeightMm(ok, HEIGHT_STEP_MM, h, PART_SIZE_CAP_MM);
+  if (below >= 0.5 && cylinderHolds(lb, load, diameterMm, below, pushAtHeadMaxN, needed)) {
+    return searchHoldingMm(lb, load, diameterMm, pushAtHeadMaxN, needed, 0.5, below);
+  }
+  for (let i = 0; i < 20; i++, h = Number((h + HEIGHT_STEP_MM).toFixed(6))) if (cylinderHolds(lb, load, diameterMm, h, pushAtHeadMaxN, needed)) return h;
+  return searchHoldingMm(lb, load, diameterMm, pushAtHeadMaxN, needed, h, PART_SIZE_CAP_MM);
+}
+
+/** shortestWorkingHeightMm over [loMm, hiMm] with cylinderHolds as the rule. */
+function searchHoldingMm(lb: LeverBasis, load: ArmLoad, diameterMm: number, pushAtHeadMaxN: number, neededN: number, loMm: number, hiMm: number): number | null {
+  return shortestWorkingHeightMm((h) => cylinderHolds(lb, load, diameterMm, h, pushAtHeadMaxN, neededN), HEIGHT_STEP_MM, loMm, hiMm);
+}
+
+/** The float of a diameter and cylinder height (mm) on this arm, or null when its shape does not close. */
+function floatOnArm(lb: LeverBasis, load: ArmLoad, diameterMm: number, heightMm: number) {
+  const inp = lb.basis.inputs;
+  return leverFloat(diameterMm, heightMm, load.arm.tongueDiameterMm, lb.basis.floatShellMm, inp.materialDensityKgM3, inp.liquidDensityKgM3);
+}
+
+/** Whether a cylinder height (mm) meets the reserve (pad force `neededN` through the arm) and seals on the straight side. */
+function cylinderHolds(lb: LeverBasis, load: ArmLoad, diameterMm: number, heightMm: number, pushAtHeadMaxN: number, neededN: number): boolean {
+  const f = floatOnArm(lb, load, diameterMm, heightMm);
+  if (!f) return false;
+  // sealed on the straight side: the volume displaced at the seal fits in the cylinder (no depth search)
+  const sealVolumeMm3 = ((pushAtHeadMaxN / 9.80665 + f.massKg) / lb.basis.inputs.liquidDensityKgM3) * 1e9;
+  return padForceFromPush(load, f.availableN) >= neededN && sealVolumeMm3 <= Math.PI * (diameterMm / 2) ** 2 * heightMm;
 }
 
 /** Round a mass to 0.01 g so that ties go to the smaller footprint. */

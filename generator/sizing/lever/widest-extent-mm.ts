@@ -15,31 +15,36 @@ export type PlanShape =
  * Source: elementary geometry.
  */
 export function widestExtentMm(shapes: readonly PlanShape[]): number {
-  const corners: [number, number][] = [];
-  const circles: { x: number; y: number; r: number }[] = [];
+  // the rectangles' corners in two flat lists (no pair per corner: this runs for every candidate of the lever search)
+  const xs: number[] = [];
+  const ys: number[] = [];
   for (const s of shapes) {
-    if (s.kind === 'rect') corners.push([s.x0, s.y0], [s.x0, s.y1], [s.x1, s.y0], [s.x1, s.y1]);
-    else circles.push(s);
+    if (s.kind === 'rect') {
+      xs.push(s.x0, s.x0, s.x1, s.x1);
+      ys.push(s.y0, s.y1, s.y0, s.y1);
+    }
   }
   // corner to corner compared squared (one root at the end), then the circles
   let best2 = 0;
-  for (let i = 0; i < corners.length; i++) {
-    const [xi, yi] = corners[i];
-    for (let j = i + 1; j < corners.length; j++) {
-      const dx = xi - corners[j][0];
-      const dy = yi - corners[j][1];
+  for (let i = 0; i < xs.length; i++) {
+    for (let j = i + 1; j < xs.length; j++) {
+      const dx = xs[i] - xs[j];
+      const dy = ys[i] - ys[j];
       const d2 = dx * dx + dy * dy;
       if (d2 > best2) best2 = d2;
     }
   }
   let best = Math.sqrt(best2);
-  for (const c of circles) {
-    for (const [x, y] of corners) best = Math.max(best, Math.hypot(x - c.x, y - c.y) + c.r);
+  for (const c of shapes) {
+    if (c.kind !== 'circle') continue;
+    for (let k = 0; k < xs.length; k++) best = Math.max(best, Math.hypot(xs[k] - c.x, ys[k] - c.y) + c.r);
   }
-  for (let i = 0; i < circles.length; i++) {
-    for (let j = i; j < circles.length; j++) {
-      const a = circles[i];
-      const b = circles[j];
+  for (let i = 0; i < shapes.length; i++) {
+    const a = shapes[i];
+    if (a.kind !== 'circle') continue;
+    for (let j = i; j < shapes.length; j++) {
+      const b = shapes[j];
+      if (b.kind !== 'circle') continue;
       best = Math.max(best, Math.hypot(a.x - b.x, a.y - b.y) + a.r + b.r);
     }
   }

@@ -48,19 +48,28 @@ export function gapFlow(line: ValveLine, lip: LipGeometry, gapM: number): GapFlo
   // per unit dp: film conductance (m3/s/Pa); curtain flow at dp = rho/2 (so Q = that x sqrt(dp / (rho/2)))
   const filmPerPa = filmFlowM3s(gapM, 1, lip.boreM, lip.lipM, line.viscosityPaS);
   const curtainUnit = curtainFlowM3s(gapM, rho / 2, lip.boreM, rho, lip.dischargeCoefficient);
-  const filmDropPa = (q: number) => q / filmPerPa;
-  const curtainDropPa = (q: number) => (rho / 2) * (q / curtainUnit) ** 2;
   if (!(gapM > 0)) {
     const p = rho * STANDARD_GRAVITY * Math.max(0, line.headM);
     return { flowM3s: 0, boreExitPa: p, forceN: p * lip.filmAreaM2 };
   }
   const flowM3s = valveFlowM3s(
-    { ...line, gapHeadM: (q) => (filmDropPa(q) + curtainDropPa(q)) / (rho * STANDARD_GRAVITY) },
+    line,
     1e-9,
     'illinois',
+    (q) => (filmDropPa(q, filmPerPa) + curtainDropPa(q, curtainUnit, rho)) / (rho * STANDARD_GRAVITY),
   );
-  const film = filmDropPa(flowM3s);
-  const exit = film + curtainDropPa(flowM3s);
+  const film = filmDropPa(flowM3s, filmPerPa);
+  const exit = film + curtainDropPa(flowM3s, curtainUnit, rho);
   const v = flowM3s / boreAreaM2;
   return { flowM3s, boreExitPa: exit, forceN: exit * boreAreaM2 + film * (lip.filmAreaM2 - boreAreaM2) + rho * flowM3s * v };
+}
+
+/** The film's pressure drop at a flow, Pa: Q over its conductance (m3/s per Pa). */
+function filmDropPa(flowM3s: number, filmPerPa: number): number {
+  return flowM3s / filmPerPa;
+}
+
+/** The curtain's pressure drop at a flow, Pa: rho/2 (Q / Q_unit)^2, Q_unit its flow at a drop of rho/2. */
+function curtainDropPa(flowM3s: number, curtainUnit: number, rho: number): number {
+  return (rho / 2) * (flowM3s / curtainUnit) ** 2;
 }
