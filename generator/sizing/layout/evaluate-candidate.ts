@@ -137,9 +137,11 @@ export interface Candidate extends FloatSizing {
  * the float sits z(F_need(H_max)) deep when sealed, so its bottom is then at
  * z_b = L - z; the nozzle face sits at z_b + h_f + proud - delta; the pin top is
  * as low as the notches allow, raised on a taller skirt when a deep target would
- * otherwise give more than the preferred travel.
+ * otherwise give more than the preferred travel. `floatCodes`: the float's own
+ * violations (floatViolations) when the caller has them already (a new array: the
+ * layout's are added to it); default, worked out here.
  */
-export function layoutCandidate(b: DesignBasis, f: FloatSizing, drainAreaMm2: number): Candidate {
+export function layoutCandidate(b: DesignBasis, f: FloatSizing, drainAreaMm2: number, floatCodes?: ConstraintCode[]): Candidate {
   const inp = b.inputs;
   const wallMm = inp.wallM * 1e3;
   const targetMm = inp.targetLevelM * 1e3;
@@ -185,7 +187,7 @@ export function layoutCandidate(b: DesignBasis, f: FloatSizing, drainAreaMm2: nu
     pinMm3: pinVolumeMm3(pin),
   };
   const plasticMm3 = volumes.housingMm3 + volumes.floatMm3 + volumes.nozzleMm3 + volumes.pinMm3;
-  const violations = floatViolations(b, f);
+  const violations = floatCodes ?? floatViolations(b, f);
   if (travel < b.minimumTravelMm - 1e-9) violations.push('travel');
   if (housing.foot.outerDiameterMm > inp.maxOuterDiameterM * 1e3 + 1e-9) violations.push('outer-diameter-limit');
   if (housing.heightMm > PART_SIZE_CAP_MM || housing.foot.outerDiameterMm > PART_SIZE_CAP_MM || pin.lengthMm > PART_SIZE_CAP_MM) {

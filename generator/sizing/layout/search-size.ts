@@ -146,7 +146,8 @@ function candidateAt(b: DesignBasis, drainAreaMm2: number, diameterMm: number, g
   const f = shortest.float;
   if (shortest.heightMm === null) return floatViolations(b, f);
   if (!f) return ['float-shape'];
-  return layoutCandidate(b, f, drainAreaMm2);
+  // the height was chosen where every float rule holds (allHold): no float violation to work out again
+  return layoutCandidate(b, f, drainAreaMm2, []);
 }
 
 /** Round a mass to 0.01 g so that ties go to the smaller diameter. */

@@ -129,7 +129,9 @@ export function layoutLever(lb: LeverBasis, o: LeverLayoutOptions): LeverCandida
   const closeMax = floatPushForHead(lb, load, inp.headMaxM);
   const openMax = floatPushForHead(lb, load, inp.headMaxM, 'opening');
   const closeMin = floatPushForHead(lb, load, inp.headMinM);
-  const sealDepth = depthForForceMm(f, closeMax.floatPushN, lf.massKg, rho);
+  // reserve and seal depth at H_max (the push is closeMax's: the same moment balance)
+  const seal = leverFloatChecks(lb, load, lf);
+  const sealDepth = seal.sealDepthMm;
   const floatBottom = targetMm - sealDepth;
   const armTop = floatBottom + f.heightMm + arm.barDepthMm;
   const tip = armTop + pad.proudMm - delta;
@@ -223,7 +225,6 @@ export function layoutLever(lb: LeverBasis, o: LeverLayoutOptions): LeverCandida
       : { upliftN: hold.upliftN, tippingMomentNmm: hold.tippingMomentNmm, anchorForceN: Math.max(0, 1.5 * hold.upliftN), ballastSteelG: 0 };
 
   const violations: LeverConstraint[] = [];
-  const seal = leverFloatChecks(lb, load, lf);
   if (seal.reserve < inp.reserve) violations.push('reserve');
   if (!(sealDepth <= f.cylinderHeightMm)) violations.push('seal-in-cylinder');
   if (restTravel < b.minimumTravelMm - 1e-9 || floatBottom < floorZ) violations.push('travel');

@@ -47,15 +47,17 @@ export function housingFlareHeightMm(h: HousingSpec): number {
   return ((h.foot.outerDiameterMm - h.outerDiameterMm) / 2) * FOOT_FLARE_RISE;
 }
 
-/** The notch's section through the wall at height z, mm2: the slab of half-width a between the bore R_b and the outside. */
-function notchSectionMm2(h: HousingSpec, boreRadiusMm: number, a: number, z: number): number {
-  return slabHalfArea(housingOuterRadiusAtMm(h, z), a) - slabHalfArea(boreRadiusMm, a);
+/** The notch's section through the wall at height z, mm2: the slab of half-width a outside, less the bore's (`boreSlabMm2`). */
+function notchSectionMm2(h: HousingSpec, boreSlabMm2: number, a: number, z: number): number {
+  return slabHalfArea(housingOuterRadiusAtMm(h, z), a) - boreSlabMm2;
 }
 
 /** Volume one drain notch removes: slab of the notch width through the wall and foot, z from 0 to its height (Simpson's rule in z). */
 function notchVolumeMm3(h: HousingSpec): number {
   const a = h.drainNotches.widthMm / 2;
   const Rb = h.boreMm / 2;
+  // the bore's slab is the same at every height
+  const boreSlab = slabHalfArea(Rb, a);
   // split at the flange top so Simpson sees smooth pieces
   const flareTop = h.foot.flangeThicknessMm + housingFlareHeightMm(h);
   const breaks = [0, Math.min(h.foot.flangeThicknessMm, h.drainNotches.heightMm), Math.min(flareTop, h.drainNotches.heightMm), h.drainNotches.heightMm];
@@ -65,8 +67,8 @@ function notchVolumeMm3(h: HousingSpec): number {
     if (z1 <= z0) continue;
     const n = 16;
     const dz = (z1 - z0) / n;
-    let s = notchSectionMm2(h, Rb, a, z0) + notchSectionMm2(h, Rb, a, z1);
-    for (let i = 1; i < n; i++) s += (i % 2 ? 4 : 2) * notchSectionMm2(h, Rb, a, z0 + i * dz);
+    let s = notchSectionMm2(h, boreSlab, a, z0) + notchSectionMm2(h, boreSlab, a, z1);
+    for (let i = 1; i < n; i++) s += (i % 2 ? 4 : 2) * notchSectionMm2(h, boreSlab, a, z0 + i * dz);
     v += (s * dz) / 3;
   }
   return v;

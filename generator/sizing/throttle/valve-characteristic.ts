@@ -84,12 +84,15 @@ export function valveCharacteristic(o: CharacteristicOptions): Characteristic {
   // the gap at the pad: the float's travel from its rest to the first touch, over the ratio
   const travelM = Math.max(hc * 2, ((o.touchBottomMm - o.restBottomMm) * 1e-3) / ratio + hc);
   const raw: CharacteristicPoint[] = [];
+  let last: { gapM: number; forceN: number } = { gapM: NaN, forceN: NaN };
   for (let i = 0; i <= GAP_POINTS; i++) {
     const h = travelM * (hc / travelM) ** (i / GAP_POINTS);
     const g = gapFlow(o.line, o.lip, h);
+    last = { gapM: h, forceN: g.forceN };
     raw.push({ levelMm: o.touchBottomMm - (h - hc) * 1e3 * ratio + depth(g.forceN), flowLph: g.flowM3s * 3.6e6 });
   }
-  const contactForceN = Math.min(gapFlow(o.line, o.lip, hc).forceN, o.sealForceN);
+  // the march ends on h_c itself (unless rounding says otherwise): its push is already known
+  const contactForceN = Math.min(last.gapM === hc ? last.forceN : gapFlow(o.line, o.lip, hc).forceN, o.sealForceN);
   const contactMm = raw[raw.length - 1]!.levelMm;
   const sealN = o.sealForceN;
   for (let i = 1; i <= CONTACT_POINTS; i++) {
