@@ -38,11 +38,13 @@ export interface GapFlow {
  * Push: F = p_exit A_o + dp_film (A_film - A_o) + rho Q v_o, the bore pressure on the bore,
  * the film's logarithmic pressure across the land, and the jet's momentum (v_o = Q / A_o).
  *
+ * `upperHintM3s` (m3/s, default none): a flow above the answer, passed to valveFlowM3s (the previous,
+ * wider gap's flow when the gap is marched down: flow grows with the gap).
  * Example: as h grows the push falls from rho g H A_film (a closed film) toward the jet's
  * momentum alone, and Q rises to the open-valve flow.
  * Source: radial film flow and curtain orifice (filmFlowM3s, curtainFlowM3s); momentum balance on the jet.
  */
-export function gapFlow(line: ValveLine, lip: LipGeometry, gapM: number): GapFlow {
+export function gapFlow(line: ValveLine, lip: LipGeometry, gapM: number, upperHintM3s = Infinity): GapFlow {
   const rho = line.densityKgM3;
   const boreAreaM2 = (Math.PI / 4) * lip.boreM * lip.boreM;
   // per unit dp: film conductance (m3/s/Pa); curtain flow at dp = rho/2 (so Q = that x sqrt(dp / (rho/2)))
@@ -57,6 +59,7 @@ export function gapFlow(line: ValveLine, lip: LipGeometry, gapM: number): GapFlo
     1e-9,
     'illinois',
     (q) => (filmDropPa(q, filmPerPa) + curtainDropPa(q, curtainUnit, rho)) / (rho * STANDARD_GRAVITY),
+    upperHintM3s,
   );
   const film = filmDropPa(flowM3s, filmPerPa);
   const exit = film + curtainDropPa(flowM3s, curtainUnit, rho);

@@ -51,6 +51,8 @@ export interface Characteristic {
 }
 
 const GAP_POINTS = 28;
+/** The previous point's flow times this bounds the next solve from above (the solver's tolerance is 1e-9). */
+const ABOVE_LAST_FLOW = 1 + 1e-6;
 const CONTACT_POINTS = 12;
 
 /**
@@ -84,21 +86,25 @@ export function valveCharacteristic(o: CharacteristicOptions): Characteristic {
   // the gap at the pad: the float's travel from its rest to the first touch, over the ratio
   const travelM = Math.max(hc * 2, ((o.touchBottomMm - o.restBottomMm) * 1e-3) / ratio + hc);
   const raw: CharacteristicPoint[] = [];
-  let last: { gapM: number; forceN: number } = { gapM: NaN, forceN: NaN };
+  // the gap only narrows from point to point, so each flow is below the one before: that flow (a hair above,
+  // clear of the solver's tolerance) bounds the next solve
+  let last: { gapM: number; forceN: number; flowM3s: number } = { gapM: NaN, forceN: NaN, flowM3s: Infinity };
   for (let i = 0; i <= GAP_POINTS; i++) {
     const h = travelM * (hc / travelM) ** (i / GAP_POINTS);
-    const g = gapFlow(o.line, o.lip, h);
-    last = { gapM: h, forceN: g.forceN };
+    const g = gapFlow(o.line, o.lip, h, last.flowM3s * ABOVE_LAST_FLOW);
+    last = { gapM: h, forceN: g.forceN, flowM3s: g.flowM3s };
     raw.push({ levelMm: o.touchBottomMm - (h - hc) * 1e3 * ratio + depth(g.forceN), flowLph: g.flowM3s * 3.6e6 });
   }
   // the march ends on h_c itself (unless rounding says otherwise): its push is already known
   const contactForceN = Math.min(last.gapM === hc ? last.forceN : gapFlow(o.line, o.lip, hc).forceN, o.sealForceN);
   const contactMm = raw[raw.length - 1]!.levelMm;
   const sealN = o.sealForceN;
+  let lastFlowM3s = last.flowM3s;
   for (let i = 1; i <= CONTACT_POINTS; i++) {
     const s = i / CONTACT_POINTS;
     const forceN = contactForceN + s * (sealN - contactForceN);
-    const flowLph = i === CONTACT_POINTS ? 0 : gapFlow(o.line, o.lip, hc * (1 - s)).flowM3s * 3.6e6;
+    if (i < CONTACT_POINTS) lastFlowM3s = gapFlow(o.line, o.lip, hc * (1 - s), lastFlowM3s * ABOVE_LAST_FLOW).flowM3s;
+    const flowLph = i === CONTACT_POINTS ? 0 : lastFlowM3s * 3.6e6;
     raw.push({ levelMm: o.touchBottomMm + s * o.indentationMm * ratio + depth(forceN), flowLph });
   }
   // running extremes from the closed end: level never rising, flow never falling, as the gap opens
