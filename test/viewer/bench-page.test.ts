@@ -87,6 +87,30 @@ describe('bench solve (the worker\'s code)', () => {
   });
 });
 
+describe('a deep group on the bench', () => {
+  // issue 13: each container gets its own choice; a deep one hangs from its rim when the row gives the rim height
+  it('a 250 mm group gets no valve on the floor, and a lever hung from the rim once its Rim height box says 360 mm', () => {
+    const deep = setPlanAt(setPlanAt(PRESET, 'containers.0.level', '250 mm'), 'containers.0.design.container.rimHeight', undefined);
+    const without = solveBench(deep);
+    if (!without.ok) throw new Error(JSON.stringify(without.errors));
+    // the bench still solves; that group's valve has no size (too tall for a part standing on the floor)
+    const noFit = benchView(without.result).groups.find((g) => g.index === 0)!;
+    expect(noFit.noFit.length).toBeGreaterThan(0);
+    const withRim = solveBench(setPlanAt(deep, 'containers.0.design.container.rimHeight', benchValue('360', GROUP_FIELDS.find((f) => f.path === 'design.container.rimHeight')!, 'metric')));
+    expect(withRim.ok).toBe(true);
+    if (!withRim.ok) return;
+    const sized = withRim.result.containers.find((c) => c.index === 0)!.sizing;
+    expect(sized.ok && [sized.architecture, sized.mount]).toEqual(['lever', 'rim']);
+    // a rim under the level is named by the box's label
+    const low = solveBench(setPlanAt(deep, 'containers.0.design.container.rimHeight', '200 mm'));
+    expect(low.ok).toBe(false);
+    if (low.ok) return;
+    const said = low.errors.map((e) => `${benchLabelFor(e.field, deep)}: ${benchInLabels(e.message, deep)}`).join(' ');
+    expect(said).toMatch(/Rim height/);
+    expect(said).not.toMatch(/containers\.\d|container\.rimHeight|level\.target/);
+  });
+});
+
 /** A stand-in for the bench worker: the worker's own code, answered on the next turn. */
 class InPlaceWorker {
   onmessage: ((e: MessageEvent<BenchReply>) => void) | null = null;

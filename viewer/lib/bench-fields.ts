@@ -38,6 +38,7 @@ export const GROUP_FIELDS: readonly BenchField[] = [
   { path: 'branch.innerDiameter', label: 'Branch tube, inside width', kind: 'length', metric: 'mm', imperial: 'in' },
   { path: 'reservoirArea', label: 'Water surface area', kind: 'area', metric: 'm2', imperial: 'ft2', optional: true, hint: 'for the refill time' },
   { path: 'design.container.demand', label: 'Plants\u2019 use per container', kind: 'flow', metric: 'L/day', imperial: 'gal/day', optional: true, hint: 'blank: 3 L/day' },
+  { path: 'design.container.rimHeight', label: 'Rim height', kind: 'length', metric: 'mm', imperial: 'in', optional: true, hint: 'top of the container wall above its floor; lets the valve hang from the rim', term: 'rim-height' },
 ];
 
 export const unitOf = (f: BenchField, system: UnitSystem) => (system === 'metric' ? f.metric : f.imperial);
