@@ -160,4 +160,15 @@ describe('regressions found by applying the ways out (sizing.property.test.ts)',
     const fixed = parseDesign({ ...doc, level: { target: level.value }, limits: { maxOuterDiameter: foot.value } });
     expect(fixed.ok && sizeDesign(fixed.inputs).ok).toBe(true);
   });
+  it('a lever for a 25 mm feed tube: the nozzle\'s seat ends in front of the frame\'s cheeks (was: 30 to 208 mm3 of frame in the nozzle, soak seeds 279494411 to 279494444)', () => {
+    const parsed = parseDesign({ supply: { headMax: '0.5 m', tubeInnerDiameter: '25 mm' }, level: { target: '25 mm' }, valve: { architecture: 'lever' } });
+    expect(parsed.ok).toBe(true);
+    if (!parsed.ok) return;
+    const s = sizeDesign(parsed.inputs);
+    expect(s.ok).toBe(true);
+    if (!s.ok || s.architecture !== 'lever') return;
+    // plain geometry along the arm: the seat bore, centred over the pad, clears the cheeks' front end by a print clearance
+    const frame = s.parts.frame;
+    expect(frame.padArmMm - frame.seatBoreMm / 2).toBeGreaterThanOrEqual(frame.postHalfLengthMm + 0.25 - 1e-9);
+  });
 });

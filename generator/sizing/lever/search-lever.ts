@@ -170,7 +170,13 @@ export function searchLever(lb: LeverBasis, o: LeverSearchOptions): LeverSearchO
   const probe = armFor(100, 200);
   // the frame's post reaches a clearance and a wall past the eye (leverFrameSpec)
   const post = probe.eyeHalfLengthMm + PRINT_CLEARANCE_MM + wallMm;
-  const shortest = shortestPadArmMm(lb, post, probe.tableHalfSideMm, { tableBelowPivotMm: probe.barDepthMm - probe.holeCentreDepthMm, travelMm: lb.basis.preferredTravelMm });
+  // and the nozzle's seat (its collar and two clearances, centred over the pad) ends in front of the cheeks, so a
+  // wide nozzle for a wide feed tube never sits in them (found by the soak: 16 to 25 mm tubes)
+  const seatHalfMm = lb.basis.nozzle.collarDiameterMm / 2 + PRINT_CLEARANCE_MM;
+  const shortest = Math.max(
+    shortestPadArmMm(lb, post, probe.tableHalfSideMm, { tableBelowPivotMm: probe.barDepthMm - probe.holeCentreDepthMm, travelMm: lb.basis.preferredTravelMm }),
+    Math.ceil((post + PRINT_CLEARANCE_MM + seatHalfMm) * 2 - 1e-9) / 2,
+  );
   // On the floor the frame stands from the floor to its deck, above the arm, which rests on the float's top,
   // which stands above the water line (the float seals on its straight side): at least the target level, the
   // bar, the pad standing proud less its squeeze, the nozzle under the deck, the boss and the deck. Past the
