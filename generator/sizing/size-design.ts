@@ -1,3 +1,4 @@
+import { sealFigures } from './seal-figures.ts';
 import { FILAMENT_DIAMETER_MM, HOLD_DOWN_FACTOR, OVERFLOW_MARGIN_M, PAD_STOP_STRAIN, PART_SIZE_CAP_MM, PRINT_CLEARANCE_MM, STANDARD_GRAVITY, STEEL_DENSITY } from './constants.ts';
 import { depthForForceMm } from './float/depth-for-force.ts';
 import { circleArea } from './hydrostatics/circle-area.ts';
@@ -599,34 +600,7 @@ function directSizing(b: DesignBasis, c: Candidate, outcome: ReturnType<typeof s
     choice,
     lever: null,
     rim: null,
-    closingForce: {
-      atHeadMaxN: b.forceAtHeadMaxN,
-      atHeadMinN: b.forceAtHeadMinN,
-      preloadN: b.preloadN,
-      sealAreaMm2: b.sealAreaM2 * 1e6,
-      equivalentSealDiameterMm: b.equivalentSealDiameterMm,
-      fromCalibration: b.fromCalibration,
-      modelAreaMm2: b.sealAreaM2 * 1e6,
-      seatN: b.preloadN,
-      filmAreaMm2: b.filmAreaM2 * 1e6,
-      boreAreaMm2: b.boreAreaM2 * 1e6,
-    },
-    seal: {
-      padMaterial: b.pad.name,
-      padDescription: b.pad.basis,
-      padChosen: b.padChosen,
-      padStiffnessKpa: b.padStiffnessKpa,
-      gasketFactor: b.pad.gasketFactor,
-      seatingStressKpa: b.pad.seatingStressPa / 1e3,
-      padThicknessMm: b.padThicknessMm,
-      indentationMm: b.indentationMm,
-      strainAtSeal: b.strainAtSeal,
-      indentationAtHeadMinMm: b.indentationAtHeadMinMm,
-      stopIndentationMm: b.padStopIndentationMm,
-      worstStrain: Math.min(worstWithoutStop, PAD_STOP_STRAIN),
-      worstStrainWithoutStop: worstWithoutStop,
-    },
-    pressure: { atHeadMaxKPa: pressurePa(inp.headMaxM, rho) / 1e3, atHeadMinKPa: pressurePa(inp.headMinM, rho) / 1e3 },
+    ...sealFigures(b, worstWithoutStop),
     float: {
       outerDiameterMm: f.outerDiameterMm,
       heightMm: f.heightMm,

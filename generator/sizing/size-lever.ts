@@ -1,4 +1,5 @@
-import { FILAMENT_DIAMETER_MM, ORIFICE_DISCHARGE_COEFFICIENT, OVERFLOW_MARGIN_M, PAD_STOP_STRAIN, PRINT_CLEARANCE_MM } from './constants.ts';
+import { sealFigures } from './seal-figures.ts';
+import { FILAMENT_DIAMETER_MM, ORIFICE_DISCHARGE_COEFFICIENT, OVERFLOW_MARGIN_M, PRINT_CLEARANCE_MM } from './constants.ts';
 import { depthForForceMm } from './float/depth-for-force.ts';
 import { floatOuterVolumeMm3 } from './float/float-shape.ts';
 import { leakToleranceMl } from './float/leak-tolerance-ml.ts';
@@ -123,34 +124,7 @@ export function leverSizing(b: DesignBasis, c: LeverCandidate, outcome: LeverSea
     mount: c.mount,
     footprintMm: c.footprintMm,
     choice,
-    closingForce: {
-      atHeadMaxN: b.forceAtHeadMaxN,
-      atHeadMinN: b.forceAtHeadMinN,
-      preloadN: b.preloadN,
-      sealAreaMm2: b.sealAreaM2 * 1e6,
-      equivalentSealDiameterMm: b.equivalentSealDiameterMm,
-      fromCalibration: b.fromCalibration,
-      modelAreaMm2: b.sealAreaM2 * 1e6,
-      seatN: b.preloadN,
-      filmAreaMm2: b.filmAreaM2 * 1e6,
-      boreAreaMm2: b.boreAreaM2 * 1e6,
-    },
-    seal: {
-      padMaterial: b.pad.name,
-      padDescription: b.pad.basis,
-      padChosen: b.padChosen,
-      padStiffnessKpa: b.padStiffnessKpa,
-      gasketFactor: b.pad.gasketFactor,
-      seatingStressKpa: b.pad.seatingStressPa / 1e3,
-      padThicknessMm: b.padThicknessMm,
-      indentationMm: b.indentationMm,
-      strainAtSeal: b.strainAtSeal,
-      indentationAtHeadMinMm: b.indentationAtHeadMinMm,
-      stopIndentationMm: b.padStopIndentationMm,
-      worstStrain: Math.min(worstWithoutStop, PAD_STOP_STRAIN),
-      worstStrainWithoutStop: worstWithoutStop,
-    },
-    pressure: { atHeadMaxKPa: pressurePa(inp.headMaxM, rho) / 1e3, atHeadMinKPa: pressurePa(inp.headMinM, rho) / 1e3 },
+    ...sealFigures(b, worstWithoutStop),
     float: {
       outerDiameterMm: f.outerDiameterMm,
       heightMm: f.heightMm,
