@@ -26,6 +26,9 @@ import { characteristicPoints, throttleReport } from './throttle/throttle-report
 
 const fmt = (x: number, digits = 1) => Number(x.toFixed(digits)).toString();
 
+/** How a deeper level is offered as a way out (one wording, so the lowest of several can be kept). */
+const AT_LEAST_LEVEL = 'a water depth to hold of at least';
+
 /** Open-valve flow of a design at a head, at one point of the flow band (the bore a short tube when long enough). */
 function flowAt(b: DesignBasis, headM: number, band: FlowBand = 'nominal') {
   const line = lineForDesign(b.inputs, headM, b.nozzle.totalLengthMm * 1e-3, band);
@@ -142,7 +145,7 @@ function failure(b: DesignBasis, outcome: ReturnType<typeof searchSize>): Sizing
   const targetMm = inp.targetLevelM * 1e3;
   if (Number.isFinite(outcome.lowestReachableMm) && outcome.lowestReachableMm > targetMm) {
     const v = Math.ceil(outcome.lowestReachableMm * 2) / 2;
-    waysOut.push({ field: 'level.target', value: `${fmt(v)} mm`, message: `a water depth to hold of at least ${fmt(v)} mm at this head` });
+    waysOut.push({ field: 'level.target', value: `${fmt(v)} mm`, message: `${AT_LEAST_LEVEL} ${fmt(v)} mm at this head` });
   }
   if (works({ ...inp, headMaxM: 0.01, headMinM: 0.01 })) {
     const h = largestWorking(0.01, inp.headMaxM, (x) => works({ ...inp, headMaxM: x, headMinM: Math.min(inp.headMinM, x) }), 0.005);
@@ -401,6 +404,14 @@ function leverFailure(b: DesignBasis, mount: Mount, outcome: LeverSearchOutcome)
   const inp = b.inputs;
   const reasons = leverReasons(b, outcome);
   const waysOut: WayOut[] = [];
+  const targetMm = inp.targetLevelM * 1e3;
+  if (Number.isFinite(outcome.lowestReachableMm) && outcome.lowestReachableMm > targetMm) {
+    // the search's estimate (its nearest candidates raised until the float clears the floor) is checked as offered,
+    // and eased up a few steps where a deeper level changes the valve enough to fall just short
+    const from = Math.ceil(outcome.lowestReachableMm * 2) / 2;
+    const v = [0, 0.5, 1.5, 3.5, 7.5].map((d) => from + d).find((mm) => leverWorks({ ...inp, targetLevelM: mm / 1e3 }, mount));
+    if (v !== undefined) waysOut.push({ field: 'level.target', value: `${fmt(v)} mm`, message: `${AT_LEAST_LEVEL} ${fmt(v)} mm at this head` });
+  }
   if (outcome.rejections.has('outer-diameter-limit')) {
     const wide = searchLeverFor(b, mount, 250);
     if (wide?.best && wide.smallestFootprintMm > inp.maxOuterDiameterM * 1e3) {
@@ -466,9 +477,13 @@ function combinedFailure(inp: DesignInputs, b: DesignBasis, tried: (Tried & { ok
   }
   const reasons = tried.flatMap((t) => t.failure().reasons.map((r) => ({ code: r.code, message: `${capital(optionWords(t.option))}: ${r.message}` })));
   const seen = new Set<string>();
-  const waysOut = tried.flatMap((t) => t.failure().waysOut).filter((w) => {
+  const all = tried.flatMap((t) => t.failure().waysOut);
+  // "at least" must hold of every kind of valve: only the lowest level any of them reaches is offered
+  const leastLevel = (w: WayOut) => w.field === 'level.target' && w.message.startsWith(AT_LEAST_LEVEL);
+  const lowest = Math.min(...all.filter(leastLevel).map((w) => Number.parseFloat(w.value)));
+  const waysOut = all.filter((w) => {
     const key = `${w.field}=${w.value}`;
-    if (seen.has(key)) return false;
+    if (seen.has(key) || (leastLevel(w) && Number.parseFloat(w.value) > lowest)) return false;
     seen.add(key);
     return true;
   });

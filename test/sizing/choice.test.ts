@@ -176,4 +176,21 @@ describe('forced choices that cannot work: reasons and ways out that size (issue
     expect(Number.parseFloat(w.value)).toBeGreaterThan(60);
     waysOutSize(doc, f);
   });
+
+  // a tray too shallow for any valve at this head: the lever reaches a shallower level than the direct valve, so the
+  // one deeper level offered is the lever's, and half a millimetre less than it gets no valve at all ("at least" holds)
+  it('a tray too shallow for any valve (15 mm at 1.5 m, 90 mm): the lowest level any valve reaches, and no lower', () => {
+    const doc = { supply: { headMax: '1.5 m', headMin: '1.125 m' }, level: { target: '15 mm' }, limits: { maxOuterDiameter: '90 mm' } };
+    const f = failed(size(doc).result);
+    const levels = f.waysOut.filter((w) => w.field === 'level.target');
+    expect(levels).toHaveLength(1);
+    const mm = Number.parseFloat(levels[0]!.value);
+    expect(levels[0]!.message).toBe(`a water depth to hold of at least ${levels[0]!.value} at this head`);
+    // the direct valve alone needs 39 mm here (measured before the lever's way out was offered)
+    expect(mm).toBeLessThan(39);
+    const at = (target: number) => size(mergeOverrides(doc, { 'level.target': `${target} mm` })).result;
+    expect(lever(at(mm)).architecture).toBe('lever');
+    expect(at(mm - 0.5).ok).toBe(false);
+    waysOutSize(doc, f);
+  });
 });

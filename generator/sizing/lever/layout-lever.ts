@@ -156,6 +156,10 @@ export function layoutLever(lb: LeverBasis, o: LeverLayoutOptions): LeverCandida
   const floorZ = o.mount === 'rim' ? RIM_ADJUST_MM : 0;
   const stopTurn = armStopTurnRad(-arm.tailXMm, arm.eyeDepthMm - arm.holeCentreDepthMm, frame.postHalfLengthMm);
   let restTravel = Number.isFinite(stopTurn) ? arm.padArmMm * Math.sin(stopTurn) - delta : arm.padArmMm - delta;
+  // raised by this much (a deeper level), the float would clear the floor at the minimum travel; no height helps
+  // an arm whose stop comes first
+  const travelShortfall =
+    restTravel < b.minimumTravelMm - 1e-9 ? Infinity : Math.max(0, floorZ - lowestAtTravel(arm, R, floatBottom, pivot, delta, b.minimumTravelMm), floorZ - floatBottom);
   if (lowestAtTravel(arm, R, floatBottom, pivot, delta, restTravel) < floorZ) {
     let lo = 0;
     let hi = restTravel;
@@ -287,6 +291,7 @@ export function layoutLever(lb: LeverBasis, o: LeverLayoutOptions): LeverCandida
     padSlideMm: contact.slideMm,
     restTravelMm: restTravel,
     restLowestZMm: lowestAtTravel(arm, R, floatBottom, pivot, delta, restTravel),
+    travelShortfallMm: travelShortfall,
     footprintMm: footprint,
     volumes,
     holdDown,

@@ -152,6 +152,11 @@ export interface LeverCandidate {
   /** pad travel at rest (the arm on its stop, or the float on the floor), mm; the float's lowest point then */
   restTravelMm: number;
   restLowestZMm: number;
+  /**
+   * how much higher the whole valve, and so the level, would have to sit for the pad to drop the minimum travel
+   * with the float clear of the floor, mm (0 when it does; Infinity when the arm's stop alone allows less)
+   */
+  travelShortfallMm: number;
   /** widest extent seen from above, mm */
   footprintMm: number;
   /** printed volumes, mm3; pad mass kg; total printed plus pad, kg */

@@ -41,6 +41,11 @@ export interface LeverSearchOutcome {
   boundBy: (LeverConstraint | 'least-mass')[];
   /** the smallest footprint of any candidate that passed every rule, mm (Infinity without one) */
   smallestFootprintMm: number;
+  /**
+   * the lowest level any laid-out candidate failing the travel rule alone would serve, raised until the float
+   * clears the floor at the minimum travel, mm (Infinity without one): where a deeper level is the way out
+   */
+  lowestReachableMm: number;
 }
 
 /**
@@ -153,6 +158,7 @@ export function searchLever(lb: LeverBasis, o: LeverSearchOptions): LeverSearchO
   let best: LeverCandidate | null = null;
   let evaluated = 0;
   let smallestFootprintMm = Infinity;
+  let lowestReachableMm = Infinity;
   const rejected: { massKg: number; violations: LeverConstraint[] }[] = [];
   // the arm's rest stop is built for the preferred travel; where nothing fits so (shallow trays), for the least
   let stopTravelMm = lb.basis.preferredTravelMm;
@@ -186,7 +192,7 @@ export function searchLever(lb: LeverBasis, o: LeverSearchOptions): LeverSearchO
     const lowest = inp.targetLevelM * 1e3 + probe.barDepthMm + pad.proudMm - lb.indentationMm + b.nozzle.protrusionMm + b.bossHeightMm + b.deckThicknessMm;
     if (lowest > PART_SIZE_CAP_MM) {
       rejections.set('part-size', 1);
-      return { best: null, rejections, evaluated: 0, boundBy: [], smallestFootprintMm: Infinity };
+      return { best: null, rejections, evaluated: 0, boundBy: [], smallestFootprintMm: Infinity, lowestReachableMm: Infinity };
     }
   }
   const maxD = Math.min(limitMm, PART_SIZE_CAP_MM);
@@ -230,6 +236,7 @@ export function searchLever(lb: LeverBasis, o: LeverSearchOptions): LeverSearchO
     for (const v of c.violations) rejections.set(v, (rejections.get(v) ?? 0) + 1);
     if (c.violations.length) rejected.push({ massKg: c.totalMassKg, violations: c.violations });
     else smallestFootprintMm = Math.min(smallestFootprintMm, c.footprintMm);
+    if (c.violations.length === 1 && c.violations[0] === 'travel') lowestReachableMm = Math.min(lowestReachableMm, c.shutOffAtHeadMaxMm + c.travelShortfallMm);
     return c;
   };
   /** The lightest candidate of one pad arm over a grid of diameters and float arms (each float arm row stops past the limit). */
@@ -301,5 +308,5 @@ export function searchLever(lb: LeverBasis, o: LeverSearchOptions): LeverSearchO
   }
   const boundBy: (LeverConstraint | 'least-mass')[] = [...bound.entries()].sort((a, b) => b[1] - a[1]).map(([code]) => code);
   if (best && boundBy.length === 0) boundBy.push('least-mass');
-  return { best, rejections, evaluated, boundBy, smallestFootprintMm };
+  return { best, rejections, evaluated, boundBy, smallestFootprintMm, lowestReachableMm };
 }
