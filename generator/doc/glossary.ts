@@ -120,7 +120,7 @@ export const GLOSSARY = {
   starves: {
     name: 'starves',
     explain:
-      'A group starves when, with every valve on the bench open at once, it gets less than a set share (half, unless the bench file says otherwise) of the flow it gets alone.',
+      "A group starves when, with every valve on the bench open at once, it gets less than its plants' peak use, or less than a set share (half, unless the bench file says otherwise) of the flow it gets alone.",
   },
   'line-width': {
     name: 'line width',

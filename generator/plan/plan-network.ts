@@ -73,11 +73,20 @@ export function planNetwork(opts: PlanNetworkOptions): PlanNetworkFlows {
 }
 
 /**
- * Whether a row starves: with everything open its valve gets less than
- * `share` of what it gets alone, or nothing. Returns the reason or null.
+ * Whether a row starves, and why (null when it does not): with every valve open
+ * at once its valve gets nothing; or less than its plants use at their peak
+ * (`demandLph`: even wide open it cannot keep up, so the reservoir falls however
+ * long the valve stays open); or less than `share` of what it gets alone.
+ *
+ * Example: 3 L/h shared against 4 L/h alone at a share of 0.5 does not starve on
+ * the share (75 %), but does under a peak use of 100 L/day (4.17 L/h).
  */
-export function starvingReason(shared: ValveFlow, alone: ValveFlow, share: number, tankText: string): string | null {
+export function starvingReason(shared: ValveFlow, alone: ValveFlow, share: number, tankText: string, demandLph = 0): string | null {
   if (shared.flowLph <= 0) return `gets no water with every valve open at ${tankText}`;
+  if (shared.flowLph < demandLph) {
+    const lph = (x: number) => Number(x.toPrecision(3)).toString();
+    return `gets ${lph(shared.flowLph)} L/h with every valve open at ${tankText}, less than its plants' peak use (${lph(demandLph * 24)} L/day, ${lph(demandLph)} L/h)`;
+  }
   if (shared.flowLph < share * alone.flowLph) {
     const pct = Math.floor((100 * shared.flowLph) / alone.flowLph);
     return `gets ${pct} % of its own flow with every valve open at ${tankText} (below ${Math.round(share * 100)} %)`;

@@ -105,7 +105,7 @@ export function planReport(result: PlanResult, files: Readonly<Record<string, re
 
   const summary = [
     `Tank surface ${f(p.tankFullSurfaceElevationM, 2)} m full, ${f(p.tankLowSurfaceElevationM, 2)} m low; main ${f(p.mainInnerDiameterM * 1e3, 1)} mm bore.`,
-    `A container starves when, with every valve open, it gets less than ${Math.round(p.starvingShare * 100)} % of what it gets alone.`,
+    `A container starves when, with every valve open, it gets less than its plants' peak use, or less than ${Math.round(p.starvingShare * 100)} % of what it gets alone.`,
     starving.length === 0 ? 'No container starves.' : `${starving.length} of ${result.containers.length} container rows would starve: see below.`,
     ...(result.ok ? [] : [`No valve size fits ${result.containers.filter((c) => !c.sizing.ok).map((c) => c.name).join(', ')}: see the warnings for what would.`]),
   ];

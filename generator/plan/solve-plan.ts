@@ -91,9 +91,10 @@ export function solvePlan(plan: PlanInputs, size: (inputs: DesignInputs) => Sizi
   const containers = plan.containers.map((c, i): PlanContainerResult => {
     const tip = tips[i]!;
     const s = tip.sizing;
+    const demandLph = c.inputs.demandM3s * 3.6e6;
     const reason =
-      starvingReason(full.shared[i]!, full.alone[i]!, plan.starvingShare, 'full tank') ??
-      starvingReason(low.shared[i]!, low.alone[i]!, plan.starvingShare, 'low tank');
+      starvingReason(full.shared[i]!, full.alone[i]!, plan.starvingShare, 'full tank', demandLph) ??
+      starvingReason(low.shared[i]!, low.alone[i]!, plan.starvingShare, 'low tank', demandLph);
     return {
       index: c.index,
       name: c.name,

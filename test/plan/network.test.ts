@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { planNetwork, type NetworkRow } from '../../generator/plan/plan-network.ts';
+import { planNetwork, starvingReason, type NetworkRow } from '../../generator/plan/plan-network.ts';
 import { supplyFlow } from '../../generator/sizing/hydraulics/index.ts';
 import { parseDesign } from '../../generator/doc/schema.ts';
 import { planOf, row } from './helpers.ts';
@@ -91,5 +91,37 @@ describe('plan network (source: energy equation for branching pipes, White ch. 6
     // conservation: the main carries what the valves draw
     const drawn = strict.containers.reduce((s, c) => s + c.count * c.sharedFull.flowLph, 0);
     expect(strict.totals.mainFlowLph / drawn).toBeCloseTo(1, 8);
+  });
+
+  // A valve wide open gives the most it ever can; if that is less than the plants' peak use, the reservoir falls
+  // whatever the valve does (continuity; common practice: size the supply for the peak use). 100 L/day = 4.1667 L/h.
+  it('starves when even wide open it gives less than the plants use at their peak, whatever the share', () => {
+    const alone = { flowLph: 4, fillTimeMin: null };
+    const shared = { flowLph: 3, fillTimeMin: null };
+    expect(starvingReason(shared, alone, 0.5, 'full tank')).toBeNull(); // 75 % of its own flow
+    expect(starvingReason(shared, alone, 0.5, 'full tank', 100 / 24)).toBe(
+      "gets 3 L/h with every valve open at full tank, less than its plants' peak use (100 L/day, 4.17 L/h)",
+    );
+    expect(starvingReason(shared, alone, 0.5, 'full tank', 2.9)).toBeNull();
+  });
+
+  it('a row whose valve alone keeps up with its plants, but not with every valve open, is marked as starving', () => {
+    const doc = (demand: string) => ({
+      tank: { fullSurfaceElevation: '2 m', lowSurfaceElevation: '1.5 m' },
+      main: { innerDiameter: '6 mm' },
+      containers: [row('near', '0.3 m', { count: 6 }), row('far', '1 m', { mainLength: '5 m', design: { container: { demand } } })],
+    });
+    const easy = planOf(doc('3 L/day')).containers[1]!;
+    expect(easy.starving).toBe(false);
+    // a peak use between what it gets at the low tank with every valve open and what it gets alone, in L/day
+    const { sharedLow, aloneLow } = easy;
+    expect(sharedLow.flowLph).toBeGreaterThan(0.5 * aloneLow.flowLph); // the share rule alone passes it
+    const demand = Math.round(((sharedLow.flowLph + aloneLow.flowLph) / 2) * 24);
+    expect(demand).toBeGreaterThan(sharedLow.flowLph * 24);
+    expect(demand).toBeLessThan(aloneLow.flowLph * 24);
+    const hungry = planOf(doc(`${demand} L/day`)).containers[1]!;
+    expect(hungry.sizing.ok).toBe(true); // alone, its valve gives more than the plants use
+    expect(hungry.starving).toBe(true);
+    expect(hungry.starvingReason).toMatch(/with every valve open at low tank, less than its plants' peak use/);
   });
 });

@@ -437,7 +437,7 @@ export class FwBenchPage extends LitElement {
   private renderGroup(g: BenchGroup) {
     const u = this.units;
     const status = g.starving
-      ? html`<p class="status-starves" data-starving>Starves: ${g.starvingReason}.</p>`
+      ? html`<p class="status-starves" data-starving>Starves: ${textInUnits(g.starvingReason ?? '', u)}.</p>`
       : g.noFit.length
         ? html`<p class="status-nofit">No valve size fits: ${g.noFit.map((m) => benchInLabels(m, this.plan)).join(' ')}</p>`
         : html`<p class="status-ok">Gets enough water with every valve open.</p>`;
