@@ -9,6 +9,7 @@
  * Print settings are common practice for a 0.4 mm nozzle (0.2 mm layers);
  * wall counts follow from the design's wall and line width.
  */
+import { ruleText } from '../sizing/rule-text.ts';
 import { OVERHANG_MIN_DEG } from '../sizing/constants.ts';
 import { FOOT_FLARE_DEG, PIN_HOLE_ROOF_DEG } from '../sizing/parts/housing-spec.ts';
 import { CAUTIONS } from './cautions.ts';
@@ -18,8 +19,6 @@ import { superscriptUnits } from './superscript-units.ts';
 import { markdownText } from './safe-text/markdown-text.ts';
 import type { NormalizedDoc } from './schema.ts';
 import { sizingSections, valveKindText, type Section } from './format-sizing.ts';
-import { CONSTRAINT_TEXT } from '../sizing/layout/constraint-text.ts';
-import { LEVER_CONSTRAINT_TEXT } from '../sizing/lever/lever-constraint-text.ts';
 import { STANDARD_GRAVITY } from '../sizing/constants.ts';
 import { OVERHANG_DEG, standSpecOf } from '../sizing/parts/stand-spec.ts';
 import type { DirectSizing, LeverSizing, SizingSuccess } from '../sizing/result.ts';
@@ -120,7 +119,6 @@ function sheetContent(s: SizingSuccess, doc: NormalizedDoc, files: BuildSheetFil
   }
   if (files.plate3mf) own.printNotes.push(`${files.plate3mf} holds every part laid out on one plate, already in print orientation.`);
   const standSteps = files.withTestStand ? standTestSteps(s) : [];
-  const boundByText = (s.architecture === 'lever' ? LEVER_CONSTRAINT_TEXT : CONSTRAINT_TEXT) as Record<string, string>;
   const sheet: Sheet = {
     title: `${name}: build sheet`,
     intro: [
@@ -129,7 +127,7 @@ function sheetContent(s: SizingSuccess, doc: NormalizedDoc, files: BuildSheetFil
       ...(doc.notes ? [doc.notes] : []),
     ],
     figures: sizingSections(s),
-    boundBy: s.boundBy.map((code) => boundByText[code] ?? code),
+    boundBy: s.boundBy.map((code) => ruleText(code, s.architecture, s.mount)),
     warnings: s.warnings.map((w) => w.message),
     ...own,
     standSteps,

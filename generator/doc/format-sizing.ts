@@ -2,11 +2,10 @@
  * A sizing result as plain text: sections of label / value / unit rows,
  * aligned for a terminal. The build sheet and the plan report reuse the rows.
  */
+import { ruleText } from '../sizing/rule-text.ts';
 import { superscriptUnits } from './superscript-units.ts';
 import { cautionLines } from './cautions.ts';
 import type { FieldError } from './fields.ts';
-import { CONSTRAINT_TEXT } from '../sizing/layout/constraint-text.ts';
-import { LEVER_CONSTRAINT_TEXT } from '../sizing/lever/lever-constraint-text.ts';
 import type { DirectSizing, LeverSizing, SizingFailure, SizingSuccess, Warning } from '../sizing/result.ts';
 
 export interface Row {
@@ -295,9 +294,8 @@ export function wrap(text: string, width = 78, indent = '    '): string {
 }
 
 /** What set the size, in words (the rule codes stay in the JSON output; the lever's own words for a lever). */
-export function boundByLines(boundBy: readonly string[], architecture: 'direct' | 'lever' = 'direct'): string[] {
-  const text = (architecture === 'lever' ? LEVER_CONSTRAINT_TEXT : CONSTRAINT_TEXT) as Record<string, string>;
-  return boundBy.map((code) => `  - ${wrap(text[code] ?? code, 76)}`);
+export function boundByLines(boundBy: readonly string[], architecture: 'direct' | 'lever' = 'direct', mount: 'floor' | 'rim' = 'floor'): string[] {
+  return boundBy.map((code) => `  - ${wrap(ruleText(code, architecture, mount), 76)}`);
 }
 
 function warningLines(warnings: readonly Warning[]): string[] {
@@ -313,7 +311,7 @@ export function formatCautions(): string {
 export function formatSizingText(result: SizingSuccess, heading?: string): string {
   const parts = [heading ? `${heading}\n` : '', renderSections(sizingSections(result))];
   parts.push(['Why this valve', `  ${wrap(result.choice.reason, 76)}`, ''].join('\n'));
-  parts.push(['What set the size', ...boundByLines(result.boundBy, result.architecture), ''].join('\n'));
+  parts.push(['What set the size', ...boundByLines(result.boundBy, result.architecture, result.mount), ''].join('\n'));
   parts.push(['Warnings', ...(result.warnings.length ? warningLines(result.warnings) : ['  none']), ''].join('\n'));
   parts.push(formatCautions());
   // units with their powers raised (mm², cm³), as on the screen and the build sheet

@@ -18,6 +18,7 @@ import type { Candidate } from './layout/evaluate-candidate.ts';
 import type { Architecture, DesignInputs, Mount } from './inputs.ts';
 import type { Choice, ChoiceOption, DirectSizing, SizingFailure, SizingResult, SizingSuccess, Warning, WayOut } from './result.ts';
 import { LEVER_CONSTRAINT_TEXT } from './lever/lever-constraint-text.ts';
+import { ruleText } from './rule-text.ts';
 import type { LeverSearchOutcome } from './lever/search-lever.ts';
 import { leverPlasticG, leverSizing, leverTooNearOverflow, searchLeverFor, type LeverFlows } from './size-lever.ts';
 import { wayOutApplies } from './way-out-applies.ts';
@@ -370,7 +371,7 @@ function tryLever(b: DesignBasis, mount: Mount, flows: Flows): Tried {
   const inp = b.inputs;
   const outcome = searchLeverFor(b, mount)!;
   const c = outcome.best;
-  if (!c) return failed(option, leverReasons(b, outcome), () => leverFailure(b, mount, outcome));
+  if (!c) return failed(option, leverReasons(b, mount, outcome), () => leverFailure(b, mount, outcome));
   if (leverTooNearOverflow(c, inp.overflowM)) {
     const f = overflowFailure(inp, c.shutOffAtHeadMaxMm);
     return failed(option, f.reasons, () => f);
@@ -390,10 +391,10 @@ function leverWorks(inp: DesignInputs, mount: Mount): boolean {
 }
 
 /** No lever fits on this mount: the rules that rejected every candidate, and what would make one fit. */
-function leverReasons(b: DesignBasis, outcome: LeverSearchOutcome): Warning[] {
+function leverReasons(b: DesignBasis, mount: Mount, outcome: LeverSearchOutcome): Warning[] {
   const inp = b.inputs;
   // the rule that turned away the most candidates first
-  const reasons: Warning[] = [...outcome.rejections.entries()].sort((x, y) => y[1] - x[1]).map(([code]) => ({ code, message: LEVER_CONSTRAINT_TEXT[code] }));
+  const reasons: Warning[] = [...outcome.rejections.entries()].sort((x, y) => y[1] - x[1]).map(([code]) => ({ code, message: ruleText(code, 'lever', mount) }));
   if (reasons.length === 0) {
     reasons.push({ code: 'reserve', message: `${LEVER_CONSTRAINT_TEXT.reserve} (${fmt(b.forceAtHeadMaxN, 2)} N at ${fmt(inp.headMaxM, 2)} m); no float and arm within the limits can do that.` });
   }
@@ -402,7 +403,7 @@ function leverReasons(b: DesignBasis, outcome: LeverSearchOutcome): Warning[] {
 
 function leverFailure(b: DesignBasis, mount: Mount, outcome: LeverSearchOutcome): SizingFailure {
   const inp = b.inputs;
-  const reasons = leverReasons(b, outcome);
+  const reasons = leverReasons(b, mount, outcome);
   const waysOut: WayOut[] = [];
   const targetMm = inp.targetLevelM * 1e3;
   if (Number.isFinite(outcome.lowestReachableMm) && outcome.lowestReachableMm > targetMm) {

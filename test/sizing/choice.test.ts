@@ -180,8 +180,12 @@ describe('forced choices that cannot work: reasons and ways out that size (issue
   // a tray too shallow for any valve at this head: the lever reaches a shallower level than the direct valve, so the
   // one deeper level offered is the lever's, and half a millimetre less than it gets no valve at all ("at least" holds)
   it('a tray too shallow for any valve (15 mm at 1.5 m, 90 mm): the lowest level any valve reaches, and no lower', () => {
-    const doc = { supply: { headMax: '1.5 m', headMin: '1.125 m' }, level: { target: '15 mm' }, limits: { maxOuterDiameter: '90 mm' } };
+    const doc = { supply: { headMax: '1.5 m', headMin: '1.125 m' }, level: { target: '15 mm' }, limits: { maxOuterDiameter: '90 mm' }, container: { rimHeight: '115 mm', wallThickness: '3 mm' } };
     const f = failed(size(doc).result);
+    // the travel rule in the words of each mount: the floor alone on the floor, the stem's reach on the rim
+    const travel = f.reasons.filter((r) => r.code === 'travel').map((r) => r.message);
+    expect(travel.find((m) => m.startsWith('A lever valve standing on the container floor:'))).not.toMatch(/slotted stem/);
+    expect(travel.find((m) => m.startsWith("A lever valve hung from the container's rim:"))).toMatch(/less the whole reach of the slotted stem/);
     const levels = f.waysOut.filter((w) => w.field === 'level.target');
     expect(levels).toHaveLength(1);
     const mm = Number.parseFloat(levels[0]!.value);

@@ -1,7 +1,6 @@
+import { ruleText } from '../../generator/sizing/rule-text.ts';
 import { LitElement, css, html, nothing } from 'lit';
 import { customElement, property } from 'lit/decorators.js';
-import { CONSTRAINT_TEXT } from '../../generator/sizing/layout/constraint-text.ts';
-import { LEVER_CONSTRAINT_TEXT } from '../../generator/sizing/lever/lever-constraint-text.ts';
 import { PART_WORDS, valvePartNames } from '../../generator/solids/part-names.ts';
 import type { SizingResult, SizingSuccess, WayOut } from '../../generator/sizing/result.ts';
 import { labelFor, shownMessage } from '../lib/field-label.ts';
@@ -137,7 +136,7 @@ export class FwResults extends LitElement {
       </section>
       <section aria-label="What set the size">
         <h2>What set the size</h2>
-        <ul>${s.boundBy.map((b) => html`<li>${shownMessage(textInUnits(((s.architecture === 'lever' ? LEVER_CONSTRAINT_TEXT : CONSTRAINT_TEXT) as Record<string, string>)[b] ?? b, u))}</li>`)}</ul>
+        <ul>${s.boundBy.map((b) => html`<li>${shownMessage(textInUnits(ruleText(b, s.architecture, s.mount), u))}</li>`)}</ul>
         ${s.warnings.map((w) => html`<div class="warn" data-warning=${w.code}>${shownMessage(textInUnits(w.message, u))}</div>`)}
       </section>
       ${this.timing ? html`<p class="timing" data-timing>${this.timing}</p>` : nothing}`;
