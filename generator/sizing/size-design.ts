@@ -1,9 +1,10 @@
+import { flowFigures } from './flow-figures.ts';
 import { sealFigures } from './seal-figures.ts';
 import { FILAMENT_DIAMETER_MM, HOLD_DOWN_FACTOR, OVERFLOW_MARGIN_M, PAD_STOP_STRAIN, PART_SIZE_CAP_MM, PRINT_CLEARANCE_MM, STANDARD_GRAVITY, STEEL_DENSITY } from './constants.ts';
 import { depthForForceMm } from './float/depth-for-force.ts';
 import { circleArea } from './hydrostatics/circle-area.ts';
 import { pressurePa } from './hydrostatics/pressure-pa.ts';
-import { drainAreaRequiredM2, fillTimeS, supplyFlow } from './hydraulics/index.ts';
+import { drainAreaRequiredM2, supplyFlow } from './hydraulics/index.ts';
 import { designBasis, type DesignBasis } from './layout/design-basis.ts';
 import { floatTilt } from './layout/evaluate-candidate.ts';
 import { PADS } from './seal/pads.ts';
@@ -23,7 +24,7 @@ import type { LeverSearchOutcome } from './lever/search-lever.ts';
 import { leverPlasticG, leverSizing, leverTooNearOverflow, searchLeverFor, type LeverFlows } from './size-lever.ts';
 import { wayOutApplies } from './way-out-applies.ts';
 import { lineForDesign, type FlowBand } from './throttle/line-for-design.ts';
-import { characteristicPoints, throttleReport } from './throttle/throttle-report.ts';
+import { throttleReport } from './throttle/throttle-report.ts';
 
 const fmt = (x: number, digits = 1) => Number(x.toFixed(digits)).toString();
 
@@ -547,7 +548,7 @@ function directOnRimFailure(inp: DesignInputs): SizingFailure {
 function directSizing(b: DesignBasis, c: Candidate, outcome: ReturnType<typeof searchSize>, flows: Flows, drainRequiredMm2: number, choice: Choice, common: Warning[]): DirectSizing {
   const inp = b.inputs;
   const rho = inp.liquidDensityKgM3;
-  const { qMax, qMin, qMaxLow, qMaxHigh } = flows;
+  const { qMax, qMin } = flows;
   const f = c.float;
   const depthAt = (forceN: number, massKg = c.massKg) => depthForForceMm(f, forceN, massKg, rho);
   const deltaMm = b.indentationMm;
@@ -597,13 +598,6 @@ function directSizing(b: DesignBasis, c: Candidate, outcome: ReturnType<typeof s
   const overturningNm = Math.max(0, -stiffness) * ((tilt.maxAngleDeg * Math.PI) / 180);
   const guideSideLoadN = overturningNm / (f.heightMm * 1e-3);
 
-  const fill = (q: number) =>
-    inp.reservoirAreaM2 !== null && inp.reservoirRiseM !== null
-      ? (() => {
-          const s = fillTimeS({ areaM2: inp.reservoirAreaM2!, riseM: inp.reservoirRiseM!, flowM3s: q });
-          return s === null ? null : s / 60;
-        })()
-      : null;
 
   const vents = c.housing.vents;
   const notches = c.housing.drainNotches;
@@ -671,21 +665,7 @@ function directSizing(b: DesignBasis, c: Candidate, outcome: ReturnType<typeof s
       minimumReachableMm: c.minimumReachableMm,
       overflowMm: inp.overflowM === null ? null : inp.overflowM * 1e3,
     },
-    flow: {
-      atHeadMaxLph: qMax.flowLph,
-      atHeadMaxLowLph: qMaxLow.flowLph,
-      atHeadMaxHighLph: qMaxHigh.flowLph,
-      boreModel: qMax.boreModel,
-      boreLengthMm: b.nozzle.totalLengthMm,
-      atHeadMinLph: qMin.flowLph,
-      reynoldsAtHeadMax: qMax.reynolds,
-      reynoldsAtHeadMin: qMin.reynolds,
-      regimeAtHeadMax: qMax.regime,
-      fillTimeAtHeadMaxMin: fill(qMax.flowM3s),
-      fillTimeAtHeadMinMin: fill(qMin.flowM3s),
-    },
-    characteristic: { headMax: characteristicPoints(throttle.headMax), headMin: characteristicPoints(throttle.headMin) },
-    fill: { timeToHeldMin: throttle.timeToHeldMin, fromLevelMm: throttle.fillFromMm, toLevelMm: throttle.fillToMm },
+    ...flowFigures(inp, b.nozzle.totalLengthMm, flows, throttle),
     drain: {
       requiredAreaMm2: drainRequiredMm2,
       providedAreaMm2: notches.count * notches.widthMm * notches.heightMm,

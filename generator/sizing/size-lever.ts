@@ -1,3 +1,4 @@
+import { flowFigures } from './flow-figures.ts';
 import { sealFigures } from './seal-figures.ts';
 import { FILAMENT_DIAMETER_MM, ORIFICE_DISCHARGE_COEFFICIENT, OVERFLOW_MARGIN_M, PRINT_CLEARANCE_MM } from './constants.ts';
 import { depthForForceMm } from './float/depth-for-force.ts';
@@ -5,7 +6,7 @@ import { floatOuterVolumeMm3 } from './float/float-shape.ts';
 import { leakToleranceMl } from './float/leak-tolerance-ml.ts';
 import { circleArea } from './hydrostatics/circle-area.ts';
 import { pressurePa } from './hydrostatics/pressure-pa.ts';
-import { fillTimeS, type SupplyFlowResult } from './hydraulics/index.ts';
+import type { SupplyFlowResult } from './hydraulics/index.ts';
 import type { DesignBasis } from './layout/design-basis.ts';
 import { armLoad, floatPushForHead, floatPushForPadForce, padForceFromPush } from './lever/layout-lever.ts';
 import { leverBasisFromDesign } from './lever/lever-basis.ts';
@@ -18,7 +19,7 @@ import type { Mount } from './inputs.ts';
 import type { Choice, LeverSizing, Warning } from './result.ts';
 import { landStrain } from './seal/land-strain.ts';
 import { lineForDesign, type FlowBand } from './throttle/line-for-design.ts';
-import { characteristicPoints, throttleReportOf } from './throttle/throttle-report.ts';
+import { throttleReportOf } from './throttle/throttle-report.ts';
 import { valveCharacteristic } from './throttle/valve-characteristic.ts';
 
 const fmt = (x: number, digits = 1) => Number(x.toFixed(digits)).toString();
@@ -84,7 +85,7 @@ export function leverSizing(b: DesignBasis, c: LeverCandidate, outcome: LeverSea
       floatPerPad: ratio,
       floatPushN: pushFor,
     });
-  const { qMax, qMin, qMaxLow, qMaxHigh } = flows;
+  const { qMax, qMin } = flows;
   const throttle = throttleReportOf(b, characteristicAt, qMax.flowLph, qMin.flowLph);
 
   // the pad in service: the stop takes the float's push past the stop's squeeze; without it, the float's whole lift through the arm
@@ -110,11 +111,6 @@ export function leverSizing(b: DesignBasis, c: LeverCandidate, outcome: LeverSea
     stem: gramsOf(rimV.stemMm3),
   };
   const plasticMm3 = c.volumes.armMm3 + c.volumes.frameMm3 + c.volumes.floatMm3 + c.volumes.nozzleMm3 + c.volumes.pinMm3;
-  const fill = (q: number) => {
-    if (inp.reservoirAreaM2 === null || inp.reservoirRiseM === null) return null;
-    const s = fillTimeS({ areaM2: inp.reservoirAreaM2, riseM: inp.reservoirRiseM, flowM3s: q });
-    return s === null ? null : s / 60;
-  };
   const armLengthMm = c.arm.tipXMm - c.arm.tailXMm;
 
   return {
@@ -167,21 +163,7 @@ export function leverSizing(b: DesignBasis, c: LeverCandidate, outcome: LeverSea
       minimumReachableMm: inp.targetLevelM * 1e3 - Math.max(0, c.restLowestZMm - floorZ),
       overflowMm: inp.overflowM === null ? null : inp.overflowM * 1e3,
     },
-    flow: {
-      atHeadMaxLph: qMax.flowLph,
-      atHeadMaxLowLph: qMaxLow.flowLph,
-      atHeadMaxHighLph: qMaxHigh.flowLph,
-      boreModel: qMax.boreModel,
-      boreLengthMm: b.nozzle.totalLengthMm,
-      atHeadMinLph: qMin.flowLph,
-      reynoldsAtHeadMax: qMax.reynolds,
-      reynoldsAtHeadMin: qMin.reynolds,
-      regimeAtHeadMax: qMax.regime,
-      fillTimeAtHeadMaxMin: fill(qMax.flowM3s),
-      fillTimeAtHeadMinMin: fill(qMin.flowM3s),
-    },
-    characteristic: { headMax: characteristicPoints(throttle.headMax), headMin: characteristicPoints(throttle.headMin) },
-    fill: { timeToHeldMin: throttle.timeToHeldMin, fromLevelMm: throttle.fillFromMm, toLevelMm: throttle.fillToMm },
+    ...flowFigures(inp, b.nozzle.totalLengthMm, flows, throttle),
     lever: {
       ratio,
       pivotHeightMm: c.pivotZMm,
