@@ -3,7 +3,7 @@ import { customElement, property } from 'lit/decorators.js';
 import { demandPerDay, flowAxis, levelAxis } from '../lib/format.ts';
 import { niceStep } from '../lib/nice-step.ts';
 import type { UnitSystem } from '../lib/units-system.ts';
-import { shared } from './shared-styles.ts';
+import { plotFrame, shared } from './shared-styles.ts';
 
 /**
  * The part of a sizing result (SizingSuccess) the flow plot draws: flow through
@@ -44,15 +44,11 @@ export function flowBandWords(b: FlowBand, units: UnitSystem): string[] {
 export class FwFlowPlot extends LitElement {
   static override styles = [
     shared,
+    plotFrame,
     css`
-      :host { display: block; }
-      svg { width: 100%; height: auto; background: var(--panel); border: 1px solid var(--line); border-radius: 8px; }
-      .axis { stroke: #888; stroke-width: 1; }
-      .grid { stroke: #eee; stroke-width: 1; }
       .full { fill: none; stroke: var(--water); stroke-width: 2.5; }
       .low { fill: none; stroke: var(--warn); stroke-width: 2; stroke-dasharray: 5 3; }
       .demand { stroke: var(--leaf); stroke-width: 1.5; stroke-dasharray: 2 3; }
-      text { font: 11px system-ui, sans-serif; fill: #444; }
       figcaption { color: var(--muted); font-size: 0.85rem; margin-top: 0.3rem; }
     `,
   ];

@@ -5,7 +5,7 @@ import { levelAxis, pushAxis } from '../lib/format.ts';
 import { pushCurve } from '../lib/net-push.ts';
 import { niceStep } from '../lib/nice-step.ts';
 import type { UnitSystem } from '../lib/units-system.ts';
-import { shared } from './shared-styles.ts';
+import { plotFrame, shared } from './shared-styles.ts';
 
 const W = 460, H = 230, L = 52, R = 14, T = 14, B = 40;
 
@@ -18,16 +18,12 @@ const W = 460, H = 230, L = 52, R = 14, T = 14, B = 40;
 export class FwPushPlot extends LitElement {
   static override styles = [
     shared,
+    plotFrame,
     css`
-      :host { display: block; }
-      svg { width: 100%; height: auto; background: var(--panel); border: 1px solid var(--line); border-radius: 8px; }
-      .axis { stroke: #888; stroke-width: 1; }
-      .grid { stroke: #eee; stroke-width: 1; }
       .curve { fill: none; stroke: var(--leaf); stroke-width: 2.5; }
       .need-max { stroke: var(--bad); stroke-width: 1.5; stroke-dasharray: 6 3; }
       .need-min { stroke: var(--warn); stroke-width: 1.5; stroke-dasharray: 2 3; }
       .held { stroke: var(--water); stroke-width: 1.2; }
-      text { font: 11px system-ui, sans-serif; fill: #444; }
       .lab-max { fill: var(--bad); } .lab-min { fill: var(--warn); } .lab-held { fill: var(--water); }
       figcaption { color: var(--muted); font-size: 0.85rem; margin-top: 0.3rem; }
     `,

@@ -32,3 +32,12 @@ export const shared = css`
   button[disabled] { opacity: 0.5; cursor: progress; }
   h2 { font-size: 1rem; margin: 0 0 0.4rem; }
 `;
+
+/** The frame, grid and lettering both plots (push and flow) draw in. */
+export const plotFrame = css`
+  :host { display: block; }
+  svg { width: 100%; height: auto; background: var(--panel); border: 1px solid var(--line); border-radius: 8px; }
+  .axis { stroke: #888; stroke-width: 1; }
+  .grid { stroke: #eee; stroke-width: 1; }
+  text { font: 11px system-ui, sans-serif; fill: #444; }
+`;
