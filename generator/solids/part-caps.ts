@@ -19,6 +19,7 @@
  */
 import { PART_SIZE_CAP_MM, TRIANGLE_CAP } from '../sizing/constants.ts';
 import { standSpecOf } from '../sizing/parts/stand-spec.ts';
+import { anchorSlots } from '../sizing/lever/lever-frame-volume-mm3.ts';
 import type { SizingSuccess } from '../sizing/result.ts';
 import { segmentsFor, type Quality } from './mesh/index.ts';
 
@@ -59,8 +60,8 @@ export function triangleBounds(sizing: SizingSuccess, quality: Quality): Partial
     return {
       ...common,
       ...rimBounds,
-      // boxes, wing wedges and the boss; the seat, the pin hole, three anchor slots or two pilot holes
-      frame: BOOLEAN_FACTOR * (8 * prismOf(6) + ring(fr.bossOuterDiameterMm) + ring(fr.seatBoreMm) + ring(fr.pinHoleDiameterMm) + 3 * ring(fr.anchorDiameterMm) + 2 * ring(fr.stemPilotDiameterMm)),
+      // boxes, wing wedges and the boss; the seat, the pin hole, two or three anchor slots or two pilot holes
+      frame: BOOLEAN_FACTOR * (8 * prismOf(6) + ring(fr.bossOuterDiameterMm) + ring(fr.seatBoreMm) + ring(fr.pinHoleDiameterMm) + anchorSlots(fr) * ring(fr.anchorDiameterMm) + 2 * ring(fr.stemPilotDiameterMm)),
       arm: BOOLEAN_FACTOR * (3 * prismOf(4) + ring(a.tongueDiameterMm) + ring(a.pocketDiameterMm) + ring(a.holeDiameterMm)),
       pad: revolved(4, segmentsFor(pad.diameterMm / 2, quality)),
     };

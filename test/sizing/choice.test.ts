@@ -102,6 +102,23 @@ describe('a lever valve asked for (valve.architecture "lever")', () => {
   });
 });
 
+describe('a narrow footprint: the frame without its back anchor wing (20 mm at 1 m, 90 mm)', () => {
+  const { result, document } = size({ supply: { headMax: '1 m', headMin: '0.75 m' }, level: { target: '20 mm' }, limits: { maxOuterDiameter: '90 mm' } });
+  const s = lever(result);
+
+  it('a lever on the floor within 90 mm, its frame held by two anchors, and the words say two', () => {
+    expect(s.mount).toBe('floor');
+    expect(s.footprintMm).toBeLessThanOrEqual(90);
+    expect(s.parts.frame.backWing).toBe(false);
+    const sheet = buildSheetMarkdown(s, document);
+    expect(sheet).not.toMatch(/three anchor|3 pins/);
+    if (s.holdDown.anchorForceN > 0) {
+      expect(sheet).toContain('2 pins or M3 screws through the');
+      expect(s.warnings.find((w) => w.code === 'hold-down')?.message).toContain('screw the two anchor wings down');
+    }
+  });
+});
+
 describe('hung from the rim (valve.mount "rim")', () => {
   const { result, document } = size({ ...BUCKET, valve: { mount: 'rim' } });
   const s = lever(result);

@@ -4,7 +4,8 @@
  * that built and placed them), the float at rest stays off the floor (on the
  * rim: off the floor lowered by the whole adjustment), and the nozzle's sealing
  * face sits the indentation into the pad at the seal. Designs: our own demo
- * scenarios (a 25 mm tray at 2 m on the floor, a 250 mm bucket at 1.5 m on the rim).
+ * scenarios (a 25 mm tray at 2 m on the floor, a 250 mm bucket at 1.5 m on the rim,
+ * a 20 mm tray at 1 m in a 90 mm footprint, whose frame has no back anchor wing).
  * Rotation of the arm about the pivot axis: elementary geometry.
  */
 import { beforeAll, describe, expect, it } from 'vitest';
@@ -44,14 +45,15 @@ function overlapMm3(a: IndexedMesh, b: IndexedMesh): number {
   }
 }
 
-for (const [name, headM, levelM, mount] of [
-  ['tray on the floor', 2, 0.025, 'floor'],
-  ['bucket on the rim', 1.5, 0.25, 'rim'],
+for (const [name, headM, levelM, mount, limitM] of [
+  ['tray on the floor', 2, 0.025, 'floor', 0.12],
+  ['bucket on the rim', 1.5, 0.25, 'rim', 0.12],
+  ['narrow tray on the floor, no back wing', 1, 0.02, 'floor', 0.09],
 ] as const) {
   describe(`lever assembly: ${name}`, () => {
-    const c = demoLever(headM, levelM, mount);
+    const c = demoLever(headM, levelM, mount, limitM);
     const armTop = c.floatBottomZMm + c.float.heightMm + c.arm.barDepthMm;
-    const basis = designBasis(demoLeverInputs(headM, levelM));
+    const basis = designBasis(demoLeverInputs(headM, levelM, limitM));
     const delta = basis.indentationMm; // the pad's squeeze at the tight seal (seal model)
     const restTheta = Math.asin((c.restTravelMm + delta) / c.arm.padArmMm);
 

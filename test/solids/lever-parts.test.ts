@@ -9,7 +9,8 @@
  * well under that), and with no downward face flatter than 50 degrees from the
  * bed but the faces on the bed and the stated bridge (DESIGN second part, print
  * margins; common practice: slicers add support under faces flatter than 45).
- * Designs: our own demo scenarios (a 25 mm tray at 2 m, a 250 mm bucket at 1.5 m).
+ * Designs: our own demo scenarios (a 25 mm tray at 2 m, a 250 mm bucket at 1.5 m,
+ * a 20 mm tray at 1 m in a 90 mm footprint, whose frame has no back anchor wing).
  */
 import { beforeAll, describe, expect, it } from 'vitest';
 import { leverArmVolume, leverFrameVolumeMm3 } from '../../generator/sizing/lever/index.ts';
@@ -21,7 +22,7 @@ import { buildLeverFrameMesh } from '../../generator/solids/parts/lever-frame-so
 import { buildPinMesh } from '../../generator/solids/parts/pin-solid.ts';
 import { buildRimHangerMesh } from '../../generator/solids/parts/rim-hanger-solid.ts';
 import { buildSlottedStemMesh } from '../../generator/solids/parts/slotted-stem-solid.ts';
-import { demoBucket, demoTray } from './lever-demos.ts';
+import { demoBucket, demoNarrowTray, demoTray } from './lever-demos.ts';
 import { overhangFaces } from './overhang-faces.ts';
 
 let wasm: ManifoldToplevel;
@@ -31,6 +32,7 @@ beforeAll(async () => {
 
 const tray = demoTray();
 const bucket = demoBucket();
+const narrowTray = demoNarrowTray();
 
 function checkClosed(mesh: IndexedMesh, name: string, genus: number): void {
   expect(countEdgeUses(mesh), name).toMatchObject({ boundaryEdges: 0, overusedEdges: 0, inconsistentlyOriented: 0, degenerateTriangles: 0, closed: true });
@@ -113,6 +115,8 @@ describe('lever frame', () => {
     ['floor', tray, 3],
     // rim: pin hole through both cheeks (2), two pilot holes, the seat bore
     ['rim', bucket, 5],
+    // floor without the back anchor wing (a 90 mm footprint): the same holes, two slots open to the side wings' edges
+    ['floor, no back wing', narrowTray, 3],
   ] as const) {
     for (const quality of ['preview', 'export'] as const) {
       it(`${name}, ${quality}: closed, deck on the bed, no face flatter than 50 degrees`, async () => {
@@ -127,4 +131,17 @@ describe('lever frame', () => {
       expect(Math.abs(meshVolumeMm3(mesh) / leverFrameVolumeMm3(c.frame) - 1)).toBeLessThan(0.01);
     });
   }
+});
+
+describe('the back anchor wing (left off only where the valve would not fit with it)', () => {
+  it('the 120 mm tray keeps it and its third slot; the 90 mm tray has neither, and its frame is one wing shorter and lighter', () => {
+    expect(tray.frame.backWing).toBe(true);
+    expect(narrowTray.frame.backWing).toBe(false);
+    expect(narrowTray.footprintMm).toBeLessThanOrEqual(90);
+    // the foot's back edge: the back wall's outer face, or a wing (anchor slot and two walls) behind it
+    expect(narrowTray.frame.footBackXMm).toBeCloseTo(-narrowTray.frame.postHalfLengthMm - narrowTray.frame.wallMm, 9);
+    expect(tray.frame.footBackXMm).toBeCloseTo(-tray.frame.postHalfLengthMm - tray.frame.wallMm - tray.frame.wingMm, 9);
+    const withWing = leverFrameVolumeMm3({ ...narrowTray.frame, backWing: true });
+    expect(withWing).toBeGreaterThan(leverFrameVolumeMm3(narrowTray.frame));
+  });
 });

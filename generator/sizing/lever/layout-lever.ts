@@ -90,6 +90,8 @@ export interface LeverLayoutOptions {
   rim?: { rimHeightMm: number; wallThicknessMm: number };
   load: ArmLoad;
   float: LeverFloat;
+  /** floor: a third anchor wing across the back (default true; see leverFrameSpec) */
+  backWing?: boolean;
 }
 
 /**
@@ -149,6 +151,7 @@ export function layoutLever(lb: LeverBasis, o: LeverLayoutOptions): LeverCandida
     bossHeightMm: b.bossHeightMm,
     indentationMm: delta,
     padStopIndentationMm: lb.padStopIndentationMm,
+    backWing: o.backWing ?? true,
   });
   // rest: the arm turns nose down until its heel meets the back wall (armStopTurnRad), or until the float's
   // far bottom corner meets the floor (on the rim: the floor less the adjustment), whichever first; the pad
@@ -188,7 +191,7 @@ export function layoutLever(lb: LeverBasis, o: LeverLayoutOptions): LeverCandida
 
   const shapes: PlanShape[] = [
     { kind: 'rect', x0: -frame.postHalfLengthMm - frame.wallMm, x1: frame.deckFrontXMm, y0: -frame.deckWidthMm / 2, y1: frame.deckWidthMm / 2 },
-    // cheeks and side wings, then the back wall and back wing
+    // cheeks and side wings, then the back wall and back wing (if any)
     { kind: 'rect', x0: -frame.postHalfLengthMm - frame.wallMm, x1: frame.postHalfLengthMm, y0: -frame.footWidthMm / 2, y1: frame.footWidthMm / 2 },
     { kind: 'rect', x0: frame.footBackXMm, x1: -frame.postHalfLengthMm, y0: -frame.widthMm / 2, y1: frame.widthMm / 2 },
     { kind: 'rect', x0: arm.tailXMm, x1: arm.tipXMm, y0: -arm.barWidthMm / 2, y1: arm.barWidthMm / 2 },

@@ -19,6 +19,8 @@ export interface LeverFrameOptions {
   /** pad indentation at the tight seal and at the hard stop, mm */
   indentationMm: number;
   padStopIndentationMm: number;
+  /** floor: a third anchor wing across the back (default true) */
+  backWing?: boolean;
 }
 
 /** Length of the stop block along the arm, mm (common practice: a few lines of plastic). */
@@ -32,8 +34,11 @@ export const STOP_LENGTH_MM = 3;
  * deck sits over the nozzle exactly as the direct valve's housing deck: its
  * underside the nozzle's protrusion plus the boss above the tip; it reaches a
  * wall past the boss, and is at least a wall wider than the boss each side. On
- * the floor the cheeks stand on the floor, with anchor wings an anchor slot and
- * two walls wide; on the rim they stop a wall under the pin hole's point (or under
+ * the floor the cheeks stand on the floor, with an anchor wing along each side,
+ * an anchor slot and two walls wide, and one across the back unless `backWing`
+ * is false (the search leaves it off only where the valve would not fit the
+ * footprint with it: the side anchors hold at the pivot's x all the same, but
+ * nearer the back edge the frame tips about, so with twice or so the force); on the rim they stop a wall under the pin hole's point (or under
  * the lower stem hole's, if lower), and the back wall carries the stem's pilot
  * holes, the upper one a clearance hole's radius and a wall under the deck's top,
  * where the stem's valve holes are (rimMountSpec). The pad's hard stop hangs
@@ -94,7 +99,8 @@ export function leverFrameSpec(o: LeverFrameOptions): LeverFrameSpec {
     stopLengthMm: deckFront - stopStart,
     stopWidthMm: a.barWidthMm - 1,
     stopBottomZMm: armTop + stopGap,
-    footBackXMm: -post - t - wing,
+    backWing: floor && (o.backWing ?? true),
+    footBackXMm: -post - t - (floor && (o.backWing ?? true) ? wing : 0),
     footWidthMm: width + 2 * wing,
     heightMm: top - cheekBottom,
   };

@@ -72,6 +72,8 @@ export interface LeverFrameSpec {
   bossHeightMm: number;
   /** floor: anchor wings wingMm wide, plate footThicknessMm, wedge wingMm tan(50deg) tall, anchor slots anchorDiameterMm wide, open to the wings' edges; 0 on the rim */
   wingMm: number;
+  /** floor: whether a third wing, with its anchor slot, runs across the back (false on the rim) */
+  backWing: boolean;
   footThicknessMm: number;
   anchorDiameterMm: number;
   /** rim: the stem's two screws go into pilot holes through the back wall, pitch apart, the upper one stemUpperHoleZMm high */

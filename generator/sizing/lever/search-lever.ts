@@ -148,8 +148,22 @@ const massKey = (kg: number) => Math.round(kg * 1e5);
  *   once the footprint passes the limit;
  * each with its shortest working cylinder. Least printed mass (plastic and pad)
  * wins, then the smaller footprint.
+ *
+ * On the floor the frame has a third anchor wing across the back; where nothing
+ * fits the footprint with it, the search is run again without it (a wing
+ * narrower, the anchors then holding with about twice the force), so the back
+ * wing is left off only where it is what keeps the valve out.
  */
 export function searchLever(lb: LeverBasis, o: LeverSearchOptions): LeverSearchOutcome {
+  const withWing = searchWithFrame(lb, o, true);
+  if (withWing.best || o.mount !== 'floor' || !withWing.rejections.has('outer-diameter-limit')) return withWing;
+  const without = searchWithFrame(lb, o, false);
+  if (without.best) return without;
+  return { ...withWing, lowestReachableMm: Math.min(withWing.lowestReachableMm, without.lowestReachableMm) };
+}
+
+/** searchLever with the back anchor wing on (floor) or off. */
+function searchWithFrame(lb: LeverBasis, o: LeverSearchOptions, backWing: boolean): LeverSearchOutcome {
   const inp = lb.basis.inputs;
   const wallMm = inp.wallM * 1e3;
   const pad = leverPad(lb.basis);
@@ -231,7 +245,7 @@ export function searchLever(lb: LeverBasis, o: LeverSearchOptions): LeverSearchO
     if (h === null) return null;
     const f = leverFloat(d, h, load.arm.tongueDiameterMm, lb.basis.floatShellMm, inp.materialDensityKgM3, inp.liquidDensityKgM3);
     if (!f) return null;
-    const c = layoutLever(lb, { mount: o.mount, rim: o.rim, load, float: f });
+    const c = layoutLever(lb, { mount: o.mount, rim: o.rim, load, float: f, backWing });
     evaluated++;
     for (const v of c.violations) rejections.set(v, (rejections.get(v) ?? 0) + 1);
     if (c.violations.length) rejected.push({ massKg: c.totalMassKg, violations: c.violations });

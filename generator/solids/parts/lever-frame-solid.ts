@@ -106,12 +106,13 @@ export async function buildLeverFrameMountedMesh(f: LeverFrameSpec, quality: Qua
     pieces.push(prism(section, length, fromRows([0, 0, 1], [1, 0, 0], [0, 1, 0], [back, w, 0])));
     pieces.push(prism(section, length, fromRows([0, 0, -1], [-1, 0, 0], [0, 1, 0], [post, -w, 0])));
     // back wing: x = back - u, y = s - w, z = z
-    pieces.push(prism(section, 2 * w, fromRows([-1, 0, 0], [0, 0, 1], [0, 1, 0], [back, -w, 0])));
+    if (f.backWing) pieces.push(prism(section, 2 * w, fromRows([-1, 0, 0], [0, 0, 1], [0, 1, 0], [back, -w, 0])));
     // anchor holes as slots open to the wing's edge: a round hole through the wedge would leave, on its
     // far side, a crescent printed over nothing (the ring closes beyond the hole as the wedge grows out)
     const ha = hole(f.anchorDiameterMm / 2);
     const h = f.footThicknessMm + a * Math.tan((SELF_SUPPORT_ANGLE_DEG * Math.PI) / 180) + 2 * OVERRUN_MM;
-    for (const [x, y, ox, oy] of [[0, w + a / 2, 0, 1], [0, -w - a / 2, 0, -1], [back - a / 2, 0, -1, 0]]) {
+    const slots = [[0, w + a / 2, 0, 1], [0, -w - a / 2, 0, -1], ...(f.backWing ? [[back - a / 2, 0, -1, 0]] : [])];
+    for (const [x, y, ox, oy] of slots) {
       cutters.push(prism(openSlot([x, y], [ox, oy], ha.r, ha.n, a / 2 + OVERRUN_MM), h, translation(0, 0, -OVERRUN_MM)));
     }
   } else {
