@@ -33,14 +33,14 @@ function waysOut(doc: Doc): WayOut[] {
 const apply = (doc: Doc, w: WayOut) => [w, ...(w.also ?? [])].reduce((d, c) => setAt(d, c.field, c.value), doc);
 
 describe('ways out in the box\'s unit', () => {
-  it('"at least 22.5 mm" becomes 0.886 in (rounded up from 0.8858 in), and the design sizes with it', () => {
+  it('"at least 22 mm" becomes 0.867 in (rounded up from 0.8661 in), and the design sizes with it', () => {
     const doc = { supply: { headMax: '3 m' }, level: { target: '10 mm' } };
     const [level] = waysOut(doc);
     // the lever's lowest level at 3 m (the direct valve alone would need 35 mm)
-    expect(level).toMatchObject({ field: 'level.target', value: '22.5 mm' });
+    expect(level).toMatchObject({ field: 'level.target', value: '22 mm' });
     const inches = wayOutInUnits(level, doc, 'imperial');
-    expect(inches.value).toBe('0.886 in'); // 22.5 / 25.4 = 0.88583 in, up to three figures
-    expect(inches.message).toBe('a water depth to hold of at least 0.886 in at this head');
+    expect(inches.value).toBe('0.867 in'); // 22 / 25.4 = 0.86614 in, up to three figures
+    expect(inches.message).toBe('a water depth to hold of at least 0.867 in at this head');
     expect(size(apply(doc, inches)).ok).toBe(true);
   });
 
