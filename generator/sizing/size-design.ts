@@ -318,12 +318,19 @@ type Option = { architecture: Architecture; mount: Mount };
 type Tried =
   | { option: Option; ok: true; plasticG: number; make: (choice: Choice, common: Warning[]) => SizingSuccess }
   /** `reasons` at once; `failure` (with its ways out, which re-size: dear) only if no option fits */
-  | { option: Option; ok: false; reasons: Warning[]; failure: () => SizingFailure };
+  | {
+      option: Option;
+      ok: false;
+      reasons: Warning[];
+      failure: () => SizingFailure;
+      /** a lever that failed the travel rule: the search's estimate of the lowest level it reaches, mm (leverLevelWayOut) */
+      levelFromMm?: number;
+    };
 
 /** A failed option whose failure (ways out and all) is worked out once, when asked for. */
-function failed(option: Option, reasons: Warning[], make: () => SizingFailure): Tried {
+function failed(option: Option, reasons: Warning[], make: () => SizingFailure, levelFromMm?: number): Tried {
   let made: SizingFailure | null = null;
-  return { option, ok: false, reasons, failure: () => (made ??= make()) };
+  return { option, ok: false, reasons, failure: () => (made ??= make()), ...(levelFromMm === undefined ? {} : { levelFromMm }) };
 }
 
 const ARCHITECTURE_WORDS: Record<Architecture, string> = { direct: 'a direct valve', lever: 'a lever valve' };
@@ -367,17 +374,43 @@ function tryDirect(b: DesignBasis, flows: Flows): Tried {
 }
 
 /** A lever valve on one mount: the lever search, then every figure, or why no lever fits. */
-function tryLever(b: DesignBasis, mount: Mount, flows: Flows): Tried {
+function tryLever(b: DesignBasis, mount: Mount, flows: Flows, alone: boolean): Tried {
   const option: Option = { architecture: 'lever', mount };
   const inp = b.inputs;
   const outcome = searchLeverFor(b, mount)!;
   const c = outcome.best;
-  if (!c) return failed(option, leverReasons(b, mount, outcome), () => leverFailure(b, mount, outcome));
+  if (!c) {
+    const from = leverLevelFromMm(inp, outcome);
+    // weighed with other valves, the deeper level is worked out once for them all (combinedFailure)
+    return failed(option, leverReasons(b, mount, outcome), () => leverFailure(b, mount, outcome, alone ? from : undefined), from);
+  }
   if (leverTooNearOverflow(c, inp.overflowM)) {
     const f = overflowFailure(inp, c.shutOffAtHeadMaxMm);
     return failed(option, f.reasons, () => f);
   }
   return { option, ok: true, plasticG: leverPlasticG(c, inp.materialDensityKgM3), make: (choice, common) => leverSizing(b, c, outcome, flows, choice, common) };
+}
+
+/** The lever search's estimate of the lowest level a lever reaches, rounded up to the half millimetre, when above the target. */
+function leverLevelFromMm(inp: DesignInputs, outcome: LeverSearchOutcome): number | undefined {
+  return Number.isFinite(outcome.lowestReachableMm) && outcome.lowestReachableMm > inp.targetLevelM * 1e3 ? Math.ceil(outcome.lowestReachableMm * 2) / 2 : undefined;
+}
+
+/** Steps above the search's estimate at which a deeper level is checked, mm (a deeper level changes the valve a little). */
+const LEVEL_STEPS_MM = [0, 0.5, 1.5, 3.5, 7.5];
+
+/**
+ * A deeper level as a way out for a lever on this mount: the search's estimate (its nearest candidates raised
+ * until the float clears the floor), checked as offered and eased up a few steps where it falls just short;
+ * only levels under `belowMm` are tried (a lower one is already offered). Null when none works.
+ */
+function leverLevelWayOut(inp: DesignInputs, mount: Mount, fromMm: number, belowMm: number): WayOut | null {
+  for (const step of LEVEL_STEPS_MM) {
+    const mm = fromMm + step;
+    if (mm >= belowMm) return null;
+    if (leverWorks({ ...inp, targetLevelM: mm / 1e3 }, mount)) return { field: 'level.target', value: `${fmt(mm)} mm`, message: `${AT_LEAST_LEVEL} ${fmt(mm)} mm at this head` };
+  }
+  return null;
 }
 
 /** Whether a lever valve on this mount fits these inputs (for ways out). */
@@ -402,18 +435,12 @@ function leverReasons(b: DesignBasis, mount: Mount, outcome: LeverSearchOutcome)
   return reasons;
 }
 
-function leverFailure(b: DesignBasis, mount: Mount, outcome: LeverSearchOutcome): SizingFailure {
+function leverFailure(b: DesignBasis, mount: Mount, outcome: LeverSearchOutcome, levelFromMm?: number): SizingFailure {
   const inp = b.inputs;
   const reasons = leverReasons(b, mount, outcome);
   const waysOut: WayOut[] = [];
-  const targetMm = inp.targetLevelM * 1e3;
-  if (Number.isFinite(outcome.lowestReachableMm) && outcome.lowestReachableMm > targetMm) {
-    // the search's estimate (its nearest candidates raised until the float clears the floor) is checked as offered,
-    // and eased up a few steps where a deeper level changes the valve enough to fall just short
-    const from = Math.ceil(outcome.lowestReachableMm * 2) / 2;
-    const v = [0, 0.5, 1.5, 3.5, 7.5].map((d) => from + d).find((mm) => leverWorks({ ...inp, targetLevelM: mm / 1e3 }, mount));
-    if (v !== undefined) waysOut.push({ field: 'level.target', value: `${fmt(v)} mm`, message: `${AT_LEAST_LEVEL} ${fmt(v)} mm at this head` });
-  }
+  const level = levelFromMm === undefined ? null : leverLevelWayOut(inp, mount, levelFromMm, Infinity);
+  if (level !== null) waysOut.push(level);
   if (outcome.rejections.has('outer-diameter-limit')) {
     const wide = searchLeverFor(b, mount, 250);
     if (wide?.best && wide.smallestFootprintMm > inp.maxOuterDiameterM * 1e3) {
@@ -480,9 +507,18 @@ function combinedFailure(inp: DesignInputs, b: DesignBasis, tried: (Tried & { ok
   const reasons = tried.flatMap((t) => t.failure().reasons.map((r) => ({ code: r.code, message: `${capital(optionWords(t.option))}: ${r.message}` })));
   const seen = new Set<string>();
   const all = tried.flatMap((t) => t.failure().waysOut);
-  // "at least" must hold of every kind of valve: only the lowest level any of them reaches is offered
+  // "at least" must hold of every kind of valve: only the lowest level any of them reaches is offered; the
+  // levers' are tried lowest estimate first, each only below the lowest found so far
   const leastLevel = (w: WayOut) => w.field === 'level.target' && w.message.startsWith(AT_LEAST_LEVEL);
-  const lowest = Math.min(...all.filter(leastLevel).map((w) => Number.parseFloat(w.value)));
+  let lowest = Math.min(...all.filter(leastLevel).map((w) => Number.parseFloat(w.value)));
+  const levers = tried.filter((t) => t.levelFromMm !== undefined).sort((x, y) => x.levelFromMm! - y.levelFromMm!);
+  for (const t of levers) {
+    const w = leverLevelWayOut(inp, t.option.mount, t.levelFromMm!, lowest);
+    if (w) {
+      all.unshift(w);
+      lowest = Number.parseFloat(w.value);
+    }
+  }
   const waysOut = all.filter((w) => {
     const key = `${w.field}=${w.value}`;
     if (seen.has(key) || (leastLevel(w) && Number.parseFloat(w.value) > lowest)) return false;
@@ -516,7 +552,8 @@ export function sizeDesign(inp: DesignInputs): SizingResult {
   if (inp.architecture === 'direct' && inp.mount === 'rim') return directOnRimFailure(inp);
 
   const options = optionsFor(inp);
-  const attempt = (o: Option) => (o.architecture === 'direct' ? tryDirect(b, flows) : tryLever(b, o.mount, flows));
+  const alone = options.length === 1;
+  const attempt = (o: Option) => (o.architecture === 'direct' ? tryDirect(b, flows) : tryLever(b, o.mount, flows, alone));
   const tried: Tried[] = [];
   if (AUTO_PREFERS_DIRECT && inp.architecture === 'auto' && options[0]?.architecture === 'direct') {
     const first = attempt(options[0]);

@@ -16,7 +16,7 @@ import type { LeverCandidate } from './lever/lever-types.ts';
 import { searchLever, type LeverSearchOutcome } from './lever/search-lever.ts';
 import { rimMountVolumesMm3 } from './rim/rim-mount-volumes.ts';
 import { RIM_ADJUST_MM } from './rim/rim-constants.ts';
-import type { Mount } from './inputs.ts';
+import type { DesignInputs, Mount } from './inputs.ts';
 import type { Choice, LeverSizing, Warning } from './result.ts';
 import { landStrain } from './seal/land-strain.ts';
 import { lineForDesign, type FlowBand } from './throttle/line-for-design.ts';
@@ -25,9 +25,40 @@ import { valveCharacteristic } from './throttle/valve-characteristic.ts';
 
 const fmt = (x: number, digits = 1) => Number(x.toFixed(digits)).toString();
 
+/**
+ * Lever searches already run within one sizing (withLeverSearchMemo), by what they read: the inputs less the
+ * valve's kind and mount (which only pick the searches to run), and the mount searched. A failure's ways out
+ * ask again for searches the sizing has just run (the other mount, the wide search); a search is pure, so its
+ * answer is kept rather than worked out twice. Nothing is kept from one sizing to the next, so each sizing
+ * (and the benchmark's timing of it) does all its own work.
+ */
+let memo: Map<string, LeverSearchOutcome | null> | null = null;
+const searchKey = (inp: DesignInputs, mount: Mount) =>
+  `${mount} ${JSON.stringify(inp, (k, v) => (k === 'architecture' || k === 'mount' ? undefined : v))}`;
+
+/** Runs `work` (one sizing) with its lever searches kept for its own repeats; nested calls share the outer one's. */
+export function withLeverSearchMemo<T>(work: () => T): T {
+  if (memo) return work();
+  memo = new Map();
+  try {
+    return work();
+  } finally {
+    memo = null;
+  }
+}
+
 /** The lever search for one mount (the rim's height and wall from the inputs; null on the rim without a rim height). */
 export function searchLeverFor(b: DesignBasis, mount: Mount, limitMm?: number): LeverSearchOutcome | null {
   const inp = limitMm === undefined ? b.inputs : { ...b.inputs, maxOuterDiameterM: limitMm / 1e3 };
+  if (!memo) return searchLeverUncached(b, inp, mount);
+  const key = searchKey(inp, mount);
+  let outcome = memo.get(key);
+  if (process.env.HITS) console.log(outcome === undefined ? "miss" : "hit", key.slice(0, 6), inp.targetLevelM, inp.maxOuterDiameterM, inp.headMaxM);
+  if (outcome === undefined) memo.set(key, (outcome = searchLeverUncached(b, inp, mount)));
+  return outcome;
+}
+
+function searchLeverUncached(b: DesignBasis, inp: DesignInputs, mount: Mount): LeverSearchOutcome | null {
   const lb = leverBasisFromDesign(inp === b.inputs ? b : { ...b, inputs: inp });
   if (mount === 'floor') return searchLever(lb, { mount: 'floor' });
   if (inp.rimHeightM === null) return null;
