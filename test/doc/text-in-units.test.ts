@@ -59,3 +59,14 @@ describe('htmlInUnits', () => {
     expect(htmlInUnits(page, 'imperial')).toBe('<style>@page { margin: 12mm }</style><p title="45 mm">Holds 1.77 in</p>');
   });
 });
+
+describe("a plan's starving reason (flows in L/h and the plants' use in L/day)", () => {
+  it('every flow goes to US gallons, agreeing with js-quantities', () => {
+    const out = imperial("gets 3 L/h with every valve open at full tank, less than its plants' peak use (100 L/day, 4.17 L/h)");
+    expect(out).not.toMatch(/\bL\//);
+    const values = [...out.matchAll(/([\d.]+) gal\/(h|day)/g)].map((m) => Number(m[1]));
+    const expected = [3, 100, 4.17].map((l) => Qty(`${l} L`).to('gal').scalar);
+    expect(values).toHaveLength(3);
+    values.forEach((v, i) => expect(Math.abs(v / expected[i]! - 1)).toBeLessThan(0.01));
+  });
+});
