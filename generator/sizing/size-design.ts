@@ -402,13 +402,16 @@ const LEVEL_STEPS_MM = [0, 0.5, 1.5, 3.5, 7.5];
 /**
  * A deeper level as a way out for a lever on this mount: the search's estimate (its nearest candidates raised
  * until the float clears the floor), checked as offered and eased up a few steps where it falls just short;
- * only levels under `belowMm` are tried (a lower one is already offered). Null when none works.
+ * only levels under `belowMm` are tried (a lower one is already offered), and only those the document accepts
+ * (wayOutApplies: within its range, and not above the container's rim when one is given). Null when none works.
  */
 function leverLevelWayOut(inp: DesignInputs, mount: Mount, fromMm: number, belowMm: number): WayOut | null {
   for (const step of LEVEL_STEPS_MM) {
     const mm = fromMm + step;
-    if (mm >= belowMm) return null;
-    if (leverWorks({ ...inp, targetLevelM: mm / 1e3 }, mount)) return { field: 'level.target', value: `${fmt(mm)} mm`, message: `${AT_LEAST_LEVEL} ${fmt(mm)} mm at this head` };
+    const way: WayOut = { field: 'level.target', value: `${fmt(mm)} mm`, message: `${AT_LEAST_LEVEL} ${fmt(mm)} mm at this head` };
+    // past the document's range, or above a rim the grower gave, it can only get worse higher up
+    if (mm >= belowMm || !wayOutApplies(inp, way)) return null;
+    if (leverWorks({ ...inp, targetLevelM: mm / 1e3 }, mount)) return way;
   }
   return null;
 }

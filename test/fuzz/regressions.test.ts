@@ -171,4 +171,24 @@ describe('regressions found by applying the ways out (sizing.property.test.ts)',
     const frame = s.parts.frame;
     expect(frame.padArmMm - frame.seatBoreMm / 2).toBeGreaterThanOrEqual(frame.postHalfLengthMm + 0.25 - 1e-9);
   });
+  it('a deeper level is never offered above the rim the grower gave (was: the lever\'s level way out past a 16 mm rim, soak seeds 1644785480 to 1644785484)', () => {
+    // the rim mount cannot hold 15 mm here, and the floor lever needs more than 16 mm of water: no level may be offered
+    const doc = { supply: { headMax: '1.5 m' }, level: { target: '15 mm' }, limits: { maxOuterDiameter: '90 mm' }, container: { rimHeight: '16 mm', wallThickness: '3 mm' } };
+    const parsed = parseDesign(doc);
+    expect(parsed.ok).toBe(true);
+    if (!parsed.ok) return;
+    const s = sizeDesign(parsed.inputs);
+    expect(s.ok).toBe(false);
+    if (s.ok) return;
+    for (const w of s.waysOut.filter((x) => x.field === 'level.target')) expect(Number.parseFloat(w.value)).toBeLessThanOrEqual(16);
+    // each way out offered is one the document accepts
+    for (const w of s.waysOut) {
+      const changed = JSON.parse(JSON.stringify(doc));
+      for (const c of [w, ...(w.also ?? [])]) {
+        const [section, key] = c.field.split('.');
+        changed[section!] = { ...(changed[section!] ?? {}), [key!]: c.value };
+      }
+      expect(parseDesign(changed).ok, `${w.field} = ${w.value}`).toBe(true);
+    }
+  });
 });
