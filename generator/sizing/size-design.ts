@@ -30,6 +30,8 @@ const fmt = (x: number, digits = 1) => Number(x.toFixed(digits)).toString();
 
 /** How a deeper level is offered as a way out (one wording, so the lowest of several can be kept). */
 const AT_LEAST_LEVEL = 'a water depth to hold of at least';
+/** How a lower tank is offered as a way out (one wording, so the highest of several can be kept). */
+const NO_HIGHER_TANK = 'tank full no higher than';
 
 /** Open-valve flow of a design at a head, at one point of the flow band (the bore a short tube when long enough). */
 function flowAt(b: DesignBasis, headM: number, band: FlowBand = 'nominal') {
@@ -154,7 +156,7 @@ function failure(b: DesignBasis, outcome: ReturnType<typeof searchSize>): Sizing
     const v = Math.floor(h * 100) / 100;
     // the lowest head may not stay above the highest: lowered with it when it would
     const also = v < inp.headMinM ? [{ field: 'supply.headMin', value: `${fmt(v, 2)} m` }] : undefined;
-    waysOut.push({ field: 'supply.headMax', value: `${fmt(v, 2)} m`, message: `tank full no higher than ${fmt(v, 2)} m above the nozzle for this water depth`, ...(also ? { also } : {}) });
+    waysOut.push({ field: 'supply.headMax', value: `${fmt(v, 2)} m`, message: `${NO_HIGHER_TANK} ${fmt(v, 2)} m above the nozzle for this water depth`, ...(also ? { also } : {}) });
   }
   if (!b.fromCalibration) {
     const line = inp.lineWidthM;
@@ -325,12 +327,15 @@ type Tried =
       failure: () => SizingFailure;
       /** a lever that failed the travel rule: the search's estimate of the lowest level it reaches, mm (leverLevelWayOut) */
       levelFromMm?: number;
+      /** a lever no candidate of the search fitted (a lower tank may: leverHeadWayOut) */
+      leverNoFit?: boolean;
     };
 
 /** A failed option whose failure (ways out and all) is worked out once, when asked for. */
-function failed(option: Option, reasons: Warning[], make: () => SizingFailure, levelFromMm?: number): Tried {
+function failed(option: Option, reasons: Warning[], make: () => SizingFailure, lever?: { levelFromMm?: number }): Tried {
   let made: SizingFailure | null = null;
-  return { option, ok: false, reasons, failure: () => (made ??= make()), ...(levelFromMm === undefined ? {} : { levelFromMm }) };
+  const base = { option, ok: false as const, reasons, failure: () => (made ??= make()) };
+  return lever ? { ...base, leverNoFit: true, ...(lever.levelFromMm === undefined ? {} : { levelFromMm: lever.levelFromMm }) } : base;
 }
 
 const ARCHITECTURE_WORDS: Record<Architecture, string> = { direct: 'a direct valve', lever: 'a lever valve' };
@@ -382,7 +387,7 @@ function tryLever(b: DesignBasis, mount: Mount, flows: Flows, alone: boolean): T
   if (!c) {
     const from = leverLevelFromMm(inp, outcome);
     // weighed with other valves, the deeper level is worked out once for them all (combinedFailure)
-    return failed(option, leverReasons(b, mount, outcome), () => leverFailure(b, mount, outcome, alone ? from : undefined), from);
+    return failed(option, leverReasons(b, mount, outcome), () => leverFailure(b, mount, outcome, alone, from), { levelFromMm: from });
   }
   if (leverTooNearOverflow(c, inp.overflowM)) {
     const f = overflowFailure(inp, c.shutOffAtHeadMaxMm);
@@ -416,6 +421,33 @@ function leverLevelWayOut(inp: DesignInputs, mount: Mount, fromMm: number, below
   return null;
 }
 
+/** Steps of the lower tank a lever's way out offers, m: a round figure to set a tank or a break tank by. */
+const HEAD_STEP_M = 0.1;
+
+/**
+ * A lower tank as a way out for a lever on this mount: the highest full-tank head on the HEAD_STEP_M grid,
+ * under the present one and above `aboveM` (a higher one is already offered), at which a lever fits, the low
+ * tank lowered with it where it would stand higher (bisection: a lower head asks less of the float, so the
+ * heads that fit run from the bottom up). Null when none does, or the document would refuse it.
+ */
+function leverHeadWayOut(inp: DesignInputs, mount: Mount, aboveM: number): WayOut | null {
+  const wayAt = (k: number): WayOut => {
+    const v = Number((k * HEAD_STEP_M).toFixed(2));
+    const also = v < inp.headMinM ? [{ field: 'supply.headMin', value: `${fmt(v, 2)} m` }] : undefined;
+    return { field: 'supply.headMax', value: `${fmt(v, 2)} m`, message: `${NO_HIGHER_TANK} ${fmt(v, 2)} m above the nozzle for this water depth`, ...(also ? { also } : {}) };
+  };
+  const fits = (k: number) => wayOutApplies(inp, wayAt(k)) && leverWorks({ ...inp, headMaxM: k * HEAD_STEP_M, headMinM: Math.min(inp.headMinM, k * HEAD_STEP_M) }, mount);
+  let lo = Math.floor(aboveM / HEAD_STEP_M + 1e-9) + 1;
+  let hi = Math.ceil(inp.headMaxM / HEAD_STEP_M - 1e-9);
+  if (lo >= hi || !fits(lo)) return null;
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >> 1;
+    if (fits(mid)) lo = mid;
+    else hi = mid;
+  }
+  return wayAt(lo);
+}
+
 /** Whether a lever valve on this mount fits these inputs (for ways out). */
 function leverWorks(inp: DesignInputs, mount: Mount): boolean {
   try {
@@ -438,12 +470,19 @@ function leverReasons(b: DesignBasis, mount: Mount, outcome: LeverSearchOutcome)
   return reasons;
 }
 
-function leverFailure(b: DesignBasis, mount: Mount, outcome: LeverSearchOutcome, levelFromMm?: number): SizingFailure {
+/**
+ * No lever fits on this mount: its reasons and ways out. `alone` (the only valve weighed): the deeper level
+ * (from `levelFromMm`) and the lower tank are offered here; weighed with others, combinedFailure works them out
+ * once for all.
+ */
+function leverFailure(b: DesignBasis, mount: Mount, outcome: LeverSearchOutcome, alone: boolean, levelFromMm?: number): SizingFailure {
   const inp = b.inputs;
   const reasons = leverReasons(b, mount, outcome);
   const waysOut: WayOut[] = [];
-  const level = levelFromMm === undefined ? null : leverLevelWayOut(inp, mount, levelFromMm, Infinity);
+  const level = alone && levelFromMm !== undefined ? leverLevelWayOut(inp, mount, levelFromMm, Infinity) : null;
   if (level !== null) waysOut.push(level);
+  const tank = alone ? leverHeadWayOut(inp, mount, 0) : null;
+  if (tank !== null) waysOut.push(tank);
   if (outcome.rejections.has('outer-diameter-limit')) {
     const wide = searchLeverFor(b, mount, 250);
     if (wide?.best && wide.smallestFootprintMm > inp.maxOuterDiameterM * 1e3) {
@@ -522,9 +561,19 @@ function combinedFailure(inp: DesignInputs, b: DesignBasis, tried: (Tried & { ok
       lowest = Number.parseFloat(w.value);
     }
   }
+  // "no higher than" likewise: only the highest tank any of them takes
+  const noHigher = (w: WayOut) => w.field === 'supply.headMax' && w.message.startsWith(NO_HIGHER_TANK);
+  let highest = Math.max(0, ...all.filter(noHigher).map((w) => Number.parseFloat(w.value)));
+  for (const t of tried.filter((x) => x.leverNoFit)) {
+    const w = leverHeadWayOut(inp, t.option.mount, highest);
+    if (w) {
+      all.push(w);
+      highest = Number.parseFloat(w.value);
+    }
+  }
   const waysOut = all.filter((w) => {
     const key = `${w.field}=${w.value}`;
-    if (seen.has(key) || (leastLevel(w) && Number.parseFloat(w.value) > lowest)) return false;
+    if (seen.has(key) || (leastLevel(w) && Number.parseFloat(w.value) > lowest) || (noHigher(w) && Number.parseFloat(w.value) < highest)) return false;
     seen.add(key);
     return true;
   });

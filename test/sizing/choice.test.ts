@@ -212,6 +212,13 @@ describe('forced choices that cannot work: reasons and ways out that size (issue
     const at = (target: number) => size(mergeOverrides(doc, { 'level.target': `${target} mm` })).result;
     expect(lever(at(mm)).architecture).toBe('lever');
     expect(at(mm - 0.5).ok).toBe(false);
+    // a lower tank: the highest on a 0.1 m grid that takes a lever here, and 0.1 m higher takes none
+    const tank = f.waysOut.find((w) => w.field === 'supply.headMax')!;
+    expect(tank.message).toBe(`tank full no higher than ${tank.value} above the nozzle for this water depth`);
+    const head = Number.parseFloat(tank.value);
+    expect(head).toBeLessThan(1.5);
+    const higher = mergeOverrides(doc, { 'supply.headMax': `${(head + 0.1).toFixed(2)} m`, 'supply.headMin': `${Math.min(1.125, head + 0.1).toFixed(2)} m` });
+    expect(size(higher).result.ok).toBe(false);
     waysOutSize(doc, f);
   });
 });
