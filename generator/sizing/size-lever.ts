@@ -53,7 +53,6 @@ export function searchLeverFor(b: DesignBasis, mount: Mount, limitMm?: number): 
   if (!memo) return searchLeverUncached(b, inp, mount);
   const key = searchKey(inp, mount);
   let outcome = memo.get(key);
-  if (process.env.HITS) console.log(outcome === undefined ? "miss" : "hit", key.slice(0, 6), inp.targetLevelM, inp.maxOuterDiameterM, inp.headMaxM);
   if (outcome === undefined) memo.set(key, (outcome = searchLeverUncached(b, inp, mount)));
   return outcome;
 }
