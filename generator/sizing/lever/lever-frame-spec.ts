@@ -38,8 +38,9 @@ export const STOP_LENGTH_MM = 3;
  * an anchor slot and two walls wide, and one across the back unless `backWing`
  * is false (the search leaves it off only where the valve would not fit the
  * footprint with it: the side anchors hold at the pivot's x all the same, but
- * nearer the back edge the frame tips about, so with twice or so the force); on the rim they stop a wall under the pin hole's point (or under
- * the lower stem hole's, if lower), and the back wall carries the stem's pilot
+ * nearer the back edge the frame tips about, so with twice or so the force); on
+ * the rim they stop a wall under the pin hole's point (or under the lower stem
+ * hole's, if lower), and the back wall carries the stem's pilot
  * holes, the upper one a clearance hole's radius and a wall under the deck's top,
  * where the stem's valve holes are (rimMountSpec). The pad's hard stop hangs
  * from the deck's front edge, past the boss and the nozzle's shoulder.
@@ -72,6 +73,7 @@ export function leverFrameSpec(o: LeverFrameOptions): LeverFrameSpec {
         stemUpper - RIM_SCREW_PITCH_MM - pointedHoleApexMm(RIM_PILOT_HOLE_MM / 2, SELF_SUPPORT_ANGLE_DEG) - t,
       );
   const wing = floor ? ANCHOR_DIAMETER_MM + 2 * t : 0;
+  const backWing = floor && (o.backWing ?? true);
   return {
     mount: o.mount,
     wallMm: t,
@@ -99,8 +101,8 @@ export function leverFrameSpec(o: LeverFrameOptions): LeverFrameSpec {
     stopLengthMm: deckFront - stopStart,
     stopWidthMm: a.barWidthMm - 1,
     stopBottomZMm: armTop + stopGap,
-    backWing: floor && (o.backWing ?? true),
-    footBackXMm: -post - t - (floor && (o.backWing ?? true) ? wing : 0),
+    backWing,
+    footBackXMm: -post - t - (backWing ? wing : 0),
     footWidthMm: width + 2 * wing,
     heightMm: top - cheekBottom,
   };

@@ -16,8 +16,8 @@ export function anchorSlots(f: Pick<LeverFrameSpec, 'mount' | 'backWing'>): numb
  * - the pad's hard stop: a block from the deck's underside down to its face;
  * - floor: wings (two along the cheeks and back wall, and one across the back
  *   if backWing) as plates a x length x thickness plus 50-degree wedges
- *   a x a tan(50deg) / 2 x length, less an anchor slot in each, open to the wing's edge (a half disc about the
- *   wing's middle and a strip out to the edge, through plate and wedge: the
+ *   a x a tan(50deg) / 2 x length, less an anchor slot in each, open to the
+ *   wing's edge (a half disc about the wing's middle and a strip out to the edge, through plate and wedge: the
  *   wedge's height falls linearly outward, so each piece is integrated exactly);
  * - rim: less the stem's two pointed pilot holes through the back wall.
  */
