@@ -9,7 +9,7 @@
  * Print settings are common practice for a 0.4 mm nozzle (0.2 mm layers);
  * wall counts follow from the design's wall and line width.
  */
-import { anchorSlots } from '../sizing/lever/lever-frame-volume-mm3.ts';
+import { anchorSlots, anchorSlotsInWords } from '../sizing/lever/lever-frame-volume-mm3.ts';
 import { ruleText } from '../sizing/rule-text.ts';
 import { OVERHANG_MIN_DEG } from '../sizing/constants.ts';
 import { FOOT_FLARE_DEG, PIN_HOLE_ROOF_DEG } from '../sizing/parts/housing-spec.ts';
@@ -354,7 +354,7 @@ function leverSheet(s: LeverSizing, doc: NormalizedDoc, files: BuildSheetFiles):
       ]
     : [
         s.holdDown.anchorForceN > 0
-          ? `Stand the frame on the container floor and hold it down: ${f1(s.holdDown.ballastSteelG)} g of steel on the anchor wings, or pins or screws through the ${anchorSlots(P.frame) === 3 ? 'three' : 'two'} anchor slots.`
+          ? `Stand the frame on the container floor and hold it down: ${f1(s.holdDown.ballastSteelG)} g of steel on the anchor wings, or pins or screws through the ${anchorSlotsInWords(P.frame)} anchor slots.`
           : 'Stand the frame on the container floor (anchor it through the slots in its wings if you like).',
       ];
   const steps = [

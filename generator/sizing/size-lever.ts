@@ -10,7 +10,7 @@ import type { SupplyFlowResult } from './hydraulics/index.ts';
 import type { DesignBasis } from './layout/design-basis.ts';
 import { armLoad, floatPushForHead, floatPushForPadForce, padForceFromPush } from './lever/layout-lever.ts';
 import { leverBasisFromDesign } from './lever/lever-basis.ts';
-import { anchorSlots } from './lever/lever-frame-volume-mm3.ts';
+import { anchorSlotsInWords } from './lever/lever-frame-volume-mm3.ts';
 import { leverPad } from './lever/lever-pad.ts';
 import type { LeverCandidate } from './lever/lever-types.ts';
 import { searchLever, type LeverSearchOutcome } from './lever/search-lever.ts';
@@ -254,7 +254,7 @@ function leverWarnings(c: LeverCandidate): Warning[] {
   if (c.mount === 'floor' && h.anchorForceN > 0) {
     w.push({
       code: 'hold-down',
-      message: `If the container floods, the float tips the frame up about its back edge: screw the ${anchorSlots(c.frame) === 3 ? 'three' : 'two'} anchor wings down (${fmt(h.anchorForceN, 2)} N between them) or add ${fmt(h.ballastSteelG, 0)} g of steel ballast on them.`,
+      message: `If the container floods, the float tips the frame up about its back edge: screw the ${anchorSlotsInWords(c.frame)} anchor wings down (${fmt(h.anchorForceN, 2)} N between them) or add ${fmt(h.ballastSteelG, 0)} g of steel ballast on them.`,
     });
   }
   if (c.mount === 'rim' && h.anchorForceN > 0) {

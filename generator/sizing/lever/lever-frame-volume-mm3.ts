@@ -7,6 +7,11 @@ export function anchorSlots(f: Pick<LeverFrameSpec, 'mount' | 'backWing'>): numb
   return f.mount === 'floor' ? (f.backWing ? 3 : 2) : 0;
 }
 
+/** anchorSlots in words, for the sentences that tell the grower how to hold the frame down ("two", "three"). */
+export function anchorSlotsInWords(f: Pick<LeverFrameSpec, 'mount' | 'backWing'>): string {
+  return ['no', 'one', 'two', 'three'][anchorSlots(f)]!;
+}
+
 /**
  * The frame's printed volume, mm3 (LeverFrameSpec; mounted pieces, each a prism
  * or a ring, elementary geometry):
